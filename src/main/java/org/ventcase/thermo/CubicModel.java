@@ -1,0 +1,463 @@
+package org.ventcase.thermo;
+
+import static org.ventcase.common.PhysicalConstants.R;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.ventcase.common.InvalidInputException;
+
+/**
+ * One cubic equation of state applied to a fixed set of components: the generic algorithm that
+ * every {@link EosVariant} shares. Immutable and thread-safe; all state lives in arguments and
+ * results.
+ *
+ * <p>Equation (see {@link EosVariant} for the sign convention):
+ * P = R T/(v - b) - a/((v + sigma b)(v + epsilon b)). In terms of A = a P/(R T)^2, B = b P/(R T):
+ * Z^3 + ((u - 1) B - 1) Z^2 + (A + w B^2 - u B^2 - u B) Z - (A B + w B^2 + w B^3) = 0, u = sigma
+ * + epsilon, w = sigma epsilon.
+ *
+ * <p>With q = a/(b R T) and I = ln((Z + sigma B)/(Z + epsilon B))/(sigma - epsilon)
+ * (I = B/(Z + epsilon B) when sigma = epsilon):
+ * <ul>
+ * <li>ln phi_i = (b_i/b)(Z - 1) - ln(Z - B) - q (2 aBar_i/a - b_i/b) I</li>
+ * <li>H^R/(R T) = Z - 1 + (T a'/a - 1) q I;  S^R/R = ln(Z - B) + (T a'/a) q I</li>
+ * <li>Cv^R = T a'' I/b (from Cv^R = integral of T (d2P/dT2)_v dv)</li>
+ * <li>Cp = Cv + T (dP/dT)_v^2 / (-(dP/dv)_T)</li>
+ * </ul>
+ * Source: J.M. Smith, H.C. Van Ness, M.M. Abbott, Introduction to Chemical Engineering
+ * Thermodynamics, 7th ed., 2005, eqs. (6.66)-(6.68) and (14.103)-(14.104) (fugacity in the
+ * partial-parameter form); M.L. Michelsen, J.M. Mollerup, Thermodynamic Models: Fundamentals and
+ * Computational Aspects, 2nd ed., 2007, ch. 3 (derivatives). The derivative identities are
+ * checked against finite differences in the tests.
+ */
+public final class CubicModel {
+
+    private final EosVariant variant;
+    private final List<Component> components;
+    private final double[][] oneMinusKij;
+    private final double[][] kij;
+    private final AlphaFunction[] alphas;
+    private final double[] ac;
+    private final double[] bi;
+    private final double[] tc;
+    private final double[] shift;
+    private final double[] molarMass;
+    private final double sigma;
+    private final double epsilon;
+    private final double u;
+    private final double w;
+
+    /**
+     * @param kij binary interaction parameters, symmetric with zero diagonal; {@code null} for
+     *            all zero
+     */
+    public CubicModel(EosVariant variant, List<Component> components, double[][] kij) {
+        if (components == null || components.isEmpty()) {
+            throw InvalidInputException.missing("fluid.components", "expected at least one component");
+        }
+        this.variant = variant;
+        this.components = List.copyOf(components);
+        int n = this.components.size();
+        this.kij = new double[n][n];
+        this.oneMinusKij = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                double k = kij == null || i == j ? 0.0 : kij[i][j];
+                if (kij != null && i != j) {
+                    if (!(Math.abs(k) < 1.0)) {
+                        throw InvalidInputException.outOfRange("fluid.kij[" + i + "][" + j + "]", k, -1, 1, "");
+                    }
+                    if (kij[i][j] != kij[j][i]) {
+                        throw InvalidInputException.invalid("fluid.kij[" + i + "][" + j + "]", k,
+                                "expected a symmetric matrix (k_ij = k_ji = " + kij[j][i] + ")");
+                    }
+                }
+                this.kij[i][j] = k;
+                this.oneMinusKij[i][j] = 1.0 - k;
+            }
+        }
+        alphas = new AlphaFunction[n];
+        ac = new double[n];
+        bi = new double[n];
+        tc = new double[n];
+        molarMass = new double[n];
+        shift = variant.hasVolumeShift() ? new double[n] : null;
+        for (int i = 0; i < n; i++) {
+            Component c = this.components.get(i);
+            alphas[i] = variant.alphaFor(c);
+            ac[i] = variant.ac(c);
+            bi[i] = variant.b(c);
+            tc[i] = c.tcK();
+            molarMass[i] = c.molarMass();
+            if (shift != null) {
+                shift[i] = variant.volumeShift(c);
+            }
+        }
+        sigma = variant.sigma();
+        epsilon = variant.epsilon();
+        u = sigma + epsilon;
+        w = sigma * epsilon;
+    }
+
+    /** A model for one pure component. */
+    public static CubicModel pure(EosVariant variant, Component c) {
+        return new CubicModel(variant, List.of(c), null);
+    }
+
+    public EosVariant variant() {
+        return variant;
+    }
+
+    public List<Component> components() {
+        return components;
+    }
+
+    public int size() {
+        return components.size();
+    }
+
+    /** The k_ij matrix in use (copy). */
+    public double[][] kij() {
+        double[][] out = new double[kij.length][];
+        for (int i = 0; i < kij.length; i++) {
+            out[i] = kij[i].clone();
+        }
+        return out;
+    }
+
+    /** The alpha function of component i (for the trace). */
+    public AlphaFunction alpha(int i) {
+        return alphas[i];
+    }
+
+    /** Molar mass of a composition, kg/kmol. */
+    public double molarMass(double[] x) {
+        double m = 0;
+        for (int i = 0; i < x.length; i++) {
+            m += x[i] * molarMass[i];
+        }
+        return m;
+    }
+
+    /** Mixing rule at T and composition x (mole fractions, assumed normalised). */
+    public MixParams mix(double t, double[] x) {
+        int n = ac.length;
+        double[] ai = new double[n];
+        double[] dai = new double[n];
+        double[] d2ai = new double[n];
+        for (int i = 0; i < n; i++) {
+            double tr = t / tc[i];
+            ai[i] = ac[i] * alphas[i].alpha(tr);
+            dai[i] = ac[i] * alphas[i].dAlpha(tr) / tc[i];
+            d2ai[i] = ac[i] * alphas[i].d2Alpha(tr) / (tc[i] * tc[i]);
+        }
+        if (n == 1) {
+            return new MixParams(t, ai[0], dai[0], d2ai[0], bi[0], new double[] {ai[0]}, bi.clone());
+        }
+        double a = 0;
+        double da = 0;
+        double d2a = 0;
+        double b = 0;
+        double[] aBar = new double[n];
+        for (int i = 0; i < n; i++) {
+            b += x[i] * bi[i];
+            for (int j = 0; j < n; j++) {
+                double g = ai[i] * ai[j];
+                double sg = Math.sqrt(g);
+                double aij = oneMinusKij[i][j] * sg;
+                aBar[i] += x[j] * aij;
+                if (i <= j) {
+                    double f = i == j ? 1.0 : 2.0;
+                    double g1 = dai[i] * ai[j] + ai[i] * dai[j];
+                    double g2 = d2ai[i] * ai[j] + 2.0 * dai[i] * dai[j] + ai[i] * d2ai[j];
+                    double xx = f * x[i] * x[j] * oneMinusKij[i][j];
+                    a += f * x[i] * x[j] * aij;
+                    da += xx * g1 / (2.0 * sg);
+                    d2a += xx * (g2 / (2.0 * sg) - g1 * g1 / (4.0 * g * sg));
+                }
+            }
+        }
+        return new MixParams(t, a, da, d2a, b, aBar, bi.clone());
+    }
+
+    /** Pressure at molar volume v (m3/mol) from the equation itself, Pa. */
+    public double pressure(MixParams m, double v) {
+        double b = m.b();
+        return R * m.t() / (v - b) - m.a() / ((v + sigma * b) * (v + epsilon * b));
+    }
+
+    /** Dimensionless A = a P/(R T)^2. */
+    static double bigA(MixParams m, double p) {
+        double rt = R * m.t();
+        return m.a() * p / (rt * rt);
+    }
+
+    /** Dimensionless B = b P/(R T). */
+    static double bigB(MixParams m, double p) {
+        return m.b() * p / (R * m.t());
+    }
+
+    /** All real roots of the cubic in Z at (T, P) for these parameters. */
+    public CubicRoots roots(MixParams m, double p) {
+        double aa = bigA(m, p);
+        double bb = bigB(m, p);
+        double c2 = (u - 1.0) * bb - 1.0;
+        double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
+        double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
+        return CubicSolver.solve(c2, c1, c0, bb);
+    }
+
+    /** I = ln((Z + sigma B)/(Z + epsilon B))/(sigma - epsilon), or B/(Z + epsilon B) if equal. */
+    double integralI(double z, double bb) {
+        if (sigma == epsilon) {
+            return bb / (z + epsilon * bb);
+        }
+        return Math.log((z + sigma * bb) / (z + epsilon * bb)) / (sigma - epsilon);
+    }
+
+    /** G^R/(R T) of the phase with compressibility z (= sum x_i ln phi_i). */
+    public double reducedResidualGibbs(MixParams m, double p, double z) {
+        double aa = bigA(m, p);
+        double bb = bigB(m, p);
+        return z - 1.0 - Math.log(z - bb) - aa / bb * integralI(z, bb);
+    }
+
+    /**
+     * Chooses a root. LIQUID takes the smallest physical root, VAPOR the largest; STABLE compares
+     * the reduced residual Gibbs energy of the smallest and largest roots (same T, P and
+     * composition, so the difference in G equals the difference in G^R) and takes the lower.
+     * Where only one root exists it is returned; whether it is liquid-like is decided by its
+     * volume against v* = (Zc/Omega_b) b, the volume at which the spinodal curve has its maximum
+     * (the critical volume of the equation at the critical point).
+     */
+    public RootSelection select(MixParams m, double p, PhaseRequest request) {
+        CubicRoots r = roots(m, p);
+        if (r.count() == 1) {
+            double z = r.smallest();
+            double vStar = variant.zc() / variant.omegaB() * m.b();
+            boolean liquidLike = z * R * m.t() / p < vStar;
+            boolean missing = request == PhaseRequest.LIQUID && !liquidLike
+                    || request == PhaseRequest.VAPOR && liquidLike;
+            String reason = String.format(Locale.ROOT,
+                    "one physical root Z = %.6g; it is %s (molar volume %s v* = (Zc/Omega_b) b)", z,
+                    liquidLike ? "liquid-like" : "vapour-like", liquidLike ? "below" : "above");
+            return new RootSelection(z, r, reason, liquidLike, missing);
+        }
+        double zl = r.smallest();
+        double zv = r.largest();
+        switch (request) {
+            case LIQUID:
+                return new RootSelection(zl, r, String.format(Locale.ROOT,
+                        "%s; liquid requested: smallest root Z = %.6g", r.rootCase().words(), zl), true, false);
+            case VAPOR:
+                return new RootSelection(zv, r, String.format(Locale.ROOT,
+                        "%s; vapour requested: largest root Z = %.6g", r.rootCase().words(), zv), false, false);
+            default:
+                double gl = reducedResidualGibbs(m, p, zl);
+                double gv = reducedResidualGibbs(m, p, zv);
+                boolean liq = gl < gv;
+                return new RootSelection(liq ? zl : zv, r, String.format(Locale.ROOT,
+                        "%s; stable root by lowest Gibbs energy: G^R/RT = %.6g at Z = %.6g (liquid-like), "
+                                + "%.6g at Z = %.6g (vapour-like); chose %s",
+                        r.rootCase().words(), gl, zl, gv, zv, liq ? "liquid-like" : "vapour-like"), liq, false);
+        }
+    }
+
+    /**
+     * Fugacity coefficients: writes ln phi_i into {@code out} and returns sum x_i ln phi_i is not
+     * computed here; use {@link #reducedResidualGibbs} for that.
+     */
+    public void lnPhi(MixParams m, double p, double z, double[] out) {
+        double aa = bigA(m, p);
+        double bb = bigB(m, p);
+        double q = aa / bb;
+        double iI = integralI(z, bb);
+        double lnZB = Math.log(z - bb);
+        double b = m.b();
+        double a = m.a();
+        double[] aBar = m.aBar();
+        double[] bb_i = m.bi();
+        for (int i = 0; i < out.length; i++) {
+            double br = bb_i[i] / b;
+            out[i] = br * (z - 1.0) - lnZB - q * (2.0 * aBar[i] / a - br) * iI;
+        }
+    }
+
+    /** ln phi of a pure fluid (or of the mixture as a whole: G^R/RT) at root z. */
+    public double lnPhiPure(MixParams m, double p, double z) {
+        return reducedResidualGibbs(m, p, z);
+    }
+
+    /** Residual molar enthalpy H - H^ig at (T, P), J/mol. */
+    public double residualEnthalpy(MixParams m, double p, double z) {
+        double bb = bigB(m, p);
+        double rt = R * m.t();
+        double q = m.a() / (m.b() * rt);
+        return rt * (z - 1.0 + (m.t() * m.dadt() / m.a() - 1.0) * q * integralI(z, bb));
+    }
+
+    /** Residual molar entropy S - S^ig at (T, P), J/(mol K). */
+    public double residualEntropy(MixParams m, double p, double z) {
+        double bb = bigB(m, p);
+        return R * Math.log(z - bb) + m.dadt() / m.b() * integralI(z, bb);
+    }
+
+    /** Whether a published volume shift is available for this variant. */
+    public boolean hasVolumeShift() {
+        return shift != null;
+    }
+
+    /** Volume shift of a composition, m3/mol (v_translated = v_cubic - c). */
+    public double volumeShift(double[] x) {
+        if (shift == null) {
+            throw new IllegalStateException(variant.displayName() + " has no published volume shift");
+        }
+        double c = 0;
+        for (int i = 0; i < x.length; i++) {
+            c += x[i] * shift[i];
+        }
+        return c;
+    }
+
+    /** Ideal-gas Cp of a composition at T, J/(mol K). */
+    public double idealGasCp(double t, double[] x) {
+        double cp = 0;
+        for (int i = 0; i < x.length; i++) {
+            cp += x[i] * components.get(i).cp().cp(t);
+        }
+        return cp;
+    }
+
+    /** Validates T, P and composition at the edge of the core; returns a normalised copy of x. */
+    public double[] checkState(double t, double p, double[] x) {
+        InvalidInputException.requireInRange("temperature", t, 1.0, 5000.0, "K");
+        InvalidInputException.requireInRange("pressure", p, 1e-3, 1e10, "Pa");
+        if (x == null || x.length != size()) {
+            throw InvalidInputException.invalid("composition", x == null ? "missing" : x.length + " fractions",
+                    "expected " + size() + " mole fractions");
+        }
+        double sum = 0;
+        for (int i = 0; i < x.length; i++) {
+            if (!(x[i] >= 0 && x[i] <= 1)) {
+                throw InvalidInputException.outOfRange("composition[" + i + "]", x[i], 0, 1, "");
+            }
+            sum += x[i];
+        }
+        if (!(Math.abs(sum - 1.0) <= 1e-6)) {
+            throw InvalidInputException.invalid("composition", String.format(Locale.ROOT, "sum %.9g", sum),
+                    "mole fractions must sum to 1 within 1e-6");
+        }
+        double[] out = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            out[i] = x[i] / sum;
+        }
+        return out;
+    }
+
+    /**
+     * Every single-phase property at (T, P, x) for the requested root, with warnings.
+     *
+     * @param basis the density basis wanted; TRANSLATED falls back to CUBIC with a warning when
+     *              the variant has no published volume shift
+     */
+    public FluidProperties properties(double t, double p, double[] x0, PhaseRequest request, DensityBasis basis) {
+        double[] x = checkState(t, p, x0);
+        List<String> warnings = new ArrayList<>();
+        MixParams m = mix(t, x);
+        RootSelection sel = select(m, p, request);
+        if (sel.requestedMissing()) {
+            warnings.add("The " + (request == PhaseRequest.LIQUID ? "liquid" : "vapour")
+                    + " root requested does not exist at these conditions (the cubic has one real root, "
+                    + (sel.liquidLike() ? "liquid-like" : "vapour-like") + "); properties are for that root.");
+        }
+        double z = sel.z();
+        double rt = R * t;
+        double vCubic = z * rt / p;
+        DensityBasis used = basis;
+        double v = vCubic;
+        if (basis == DensityBasis.TRANSLATED) {
+            if (hasVolumeShift()) {
+                v = vCubic - volumeShift(x);
+                if (!(v > 0)) {
+                    warnings.add("The volume-shifted molar volume is not positive; the cubic volume is used.");
+                    v = vCubic;
+                    used = DensityBasis.CUBIC;
+                }
+            } else {
+                warnings.add(variant.displayName() + " has no published volume shift: densities are the raw cubic's.");
+                used = DensityBasis.CUBIC;
+            }
+        }
+        double mw = molarMass(x);
+        double[] lnPhi = new double[x.length];
+        lnPhi(m, p, z, lnPhi);
+        double hR = residualEnthalpy(m, p, z);
+        double sR = residualEntropy(m, p, z);
+        double gR = rt * reducedResidualGibbs(m, p, z);
+
+        // Derivatives of P(T, v) on the cubic's own volume (thermodynamically consistent).
+        double b = m.b();
+        double d1 = vCubic + sigma * b;
+        double d2 = vCubic + epsilon * b;
+        double den = d1 * d2;
+        double dPdT = R / (vCubic - b) - m.dadt() / den;
+        double dPdv = -rt / ((vCubic - b) * (vCubic - b)) + m.a() * (2.0 * vCubic + u * b) / (den * den);
+        double iI = integralI(z, bigB(m, p));
+        double cvR = t * m.d2adt2() * iI / b;
+        double cpIg = idealGasCp(t, x);
+        double cvIg = cpIg - R;
+        double cv = cvIg + cvR;
+        double cp = cv - t * dPdT * dPdT / dPdv;
+        double kIdeal = cpIg / cvIg;
+        double kReal = cp / cv;
+        double isentropic = -vCubic / p * kReal * dPdv;
+        double sound2 = -kReal * vCubic * vCubic * dPdv / (mw * 1e-3);
+        double dvdT = -dPdT / dPdv;
+        double jt = (t * dvdT - vCubic) / cp;
+        for (int i = 0; i < x.length; i++) {
+            IdealGasCp c = components.get(i).cp();
+            if (x[i] > 0 && !c.inRange(t)) {
+                warnings.add(String.format(Locale.ROOT,
+                        "%s: %.2f K is outside the ideal-gas Cp correlation's range %.0f-%.0f K; Cp, Cv, k and "
+                                + "speed of sound are extrapolated.", components.get(i).name(), t, c.tMinK(), c.tMaxK()));
+            }
+        }
+        PhaseLabel label = label(t, p, x, sel);
+        if (!(dPdv < 0)) {
+            warnings.add("The chosen root is mechanically unstable ((dP/dv)_T >= 0); heat capacities and speed of "
+                    + "sound are not meaningful there.");
+        }
+        return new FluidProperties(variant, t, p, x, sel.roots(), sel.z(), sel.reason(), label,
+                labelCriterion(), vCubic, v, used, mw / 1e3 / v, mw, lnPhi, hR, sR, gR, cpIg, cp, cv, kIdeal, kReal,
+                isentropic, sound2 > 0 ? Math.sqrt(sound2) : Double.NaN, jt, List.copyOf(warnings));
+    }
+
+    /**
+     * Names the phase. Criterion: with T at or above the (pseudo-)critical temperature, the fluid
+     * is supercritical at or above the (pseudo-)critical pressure and vapour below it; below it,
+     * the chosen root is liquid or vapour as decided by {@link #select}. For a mixture the
+     * pseudo-critical point is Kay's rule (mole-fraction averages of Tc and Pc), a screening
+     * criterion only.
+     */
+    PhaseLabel label(double t, double p, double[] x, RootSelection sel) {
+        double tcm = 0;
+        double pcm = 0;
+        for (int i = 0; i < x.length; i++) {
+            tcm += x[i] * tc[i];
+            pcm += x[i] * components.get(i).pcPa();
+        }
+        if (t >= tcm) {
+            return p >= pcm ? PhaseLabel.SUPERCRITICAL : PhaseLabel.VAPOR;
+        }
+        return sel.liquidLike() ? PhaseLabel.LIQUID : PhaseLabel.VAPOR;
+    }
+
+    String labelCriterion() {
+        return size() == 1
+                ? "T >= Tc and P >= Pc: supercritical; T >= Tc, P < Pc: vapour; T < Tc: the chosen root "
+                        + "(lowest Gibbs energy where two exist; v below v* = (Zc/Omega_b) b where one exists)"
+                : "Kay's-rule pseudo-critical point; below it the chosen root as for a pure fluid (screening only)";
+    }
+}

@@ -1,0 +1,20 @@
+package org.ventcase.thermo;
+
+/** Which molar volume a density is computed from. */
+public enum DensityBasis {
+    /** The cubic equation's own volume. */
+    CUBIC("cubic"),
+    /** The cubic volume minus a Peneloux-type volume shift (phase equilibrium unchanged). */
+    TRANSLATED("translated");
+
+    private final String label;
+
+    DensityBasis(String label) {
+        this.label = label;
+    }
+
+    /** Lower-case label used in JSON and on the sheet. */
+    public String label() {
+        return label;
+    }
+}

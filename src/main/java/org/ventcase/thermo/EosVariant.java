@@ -1,0 +1,238 @@
+package org.ventcase.thermo;
+
+import java.util.Locale;
+import java.util.function.Function;
+
+import org.ventcase.common.InvalidInputException;
+import org.ventcase.common.PhysicalConstants;
+
+/**
+ * The two-parameter cubic equations of state Ventcase offers, each as data: the denominator
+ * constants, an alpha function and, where one is published, a volume-shift correlation.
+ *
+ * <p>Form and sign convention, for every variant:
+ * <pre>
+ *   P = R T / (v - b) - a(T) / ((v + sigma b)(v + epsilon b))
+ *   a(T) = Omega_a alpha(Tr) R^2 Tc^2 / Pc,   b = Omega_b R Tc / Pc
+ * </pre>
+ * vdW: sigma = epsilon = 0; RK and SRK: sigma = 1, epsilon = 0; PR: sigma = 1 + sqrt 2,
+ * epsilon = 1 - sqrt 2. Omega_a, Omega_b and Zc are not typed in: they are derived once from
+ * sigma and epsilon by the critical-point conditions (the cubic in Z has a triple root at
+ * Tr = Pr = 1), see {@link #deriveCriticalConstants}. The derived numbers are tested against the
+ * published ones (e.g. 0.45724 and 0.07780 for PR).
+ *
+ * <p>The generic form follows J.M. Smith, H.C. Van Ness, M.M. Abbott, Introduction to Chemical
+ * Engineering Thermodynamics, 7th ed., 2005, Table 3.1 and eq. (3.42).
+ *
+ * <p>Adding a variant: add one constant here with its sigma, epsilon, alpha factory, volume
+ * shift (or {@code null}) and citation. Nothing else changes.
+ */
+public enum EosVariant {
+    /** van der Waals (1873). */
+    VDW("van der Waals", 0.0, 0.0, c -> new AlphaFunction.Constant(), null,
+            "J.D. van der Waals, thesis, Leiden, 1873"),
+    /** Redlich-Kwong (1949). */
+    RK("Redlich-Kwong", 1.0, 0.0, c -> new AlphaFunction.RedlichKwong(), null,
+            "O. Redlich, J.N.S. Kwong, Chem. Rev. 44 (1949) 233"),
+    /** Soave-Redlich-Kwong (1972). */
+    SRK("Soave-Redlich-Kwong", 1.0, 0.0,
+            c -> new AlphaFunction.Soave(MCorrelation.SOAVE_1972.m(c.omega()), MCorrelation.SOAVE_1972),
+            VolumeShift.PENELOUX_SRK, "G. Soave, Chem. Eng. Sci. 27 (1972) 1197"),
+    /** Peng-Robinson (1976), with the original m(omega). */
+    PR76("Peng-Robinson 1976", 1.0 + Math.sqrt(2.0), 1.0 - Math.sqrt(2.0),
+            c -> new AlphaFunction.Soave(MCorrelation.PENG_ROBINSON_1976.m(c.omega()), MCorrelation.PENG_ROBINSON_1976),
+            VolumeShift.PENELOUX_TYPE_PR, "D.-Y. Peng, D.B. Robinson, Ind. Eng. Chem. Fundam. 15 (1976) 59"),
+    /** Peng-Robinson with the 1978 m(omega) for heavy components (omega > 0.491). */
+    PR78("Peng-Robinson 1978", 1.0 + Math.sqrt(2.0), 1.0 - Math.sqrt(2.0),
+            c -> new AlphaFunction.Soave(MCorrelation.PENG_ROBINSON_1978.m(c.omega()), MCorrelation.PENG_ROBINSON_1978),
+            VolumeShift.PENELOUX_TYPE_PR, "D.B. Robinson, D.-Y. Peng, GPA Research Report RR-28 (1978)");
+
+    private final String displayName;
+    private final double sigma;
+    private final double epsilon;
+    private final Function<Component, AlphaFunction> alphaFactory;
+    private final VolumeShift volumeShift;
+    private final String citation;
+    private final double omegaA;
+    private final double omegaB;
+    private final double zc;
+
+    EosVariant(String displayName, double sigma, double epsilon, Function<Component, AlphaFunction> alphaFactory,
+               VolumeShift volumeShift, String citation) {
+        this.displayName = displayName;
+        this.sigma = sigma;
+        this.epsilon = epsilon;
+        this.alphaFactory = alphaFactory;
+        this.volumeShift = volumeShift;
+        this.citation = citation;
+        double[] k = deriveCriticalConstants(sigma, epsilon);
+        this.omegaA = k[0];
+        this.omegaB = k[1];
+        this.zc = k[2];
+    }
+
+    /**
+     * Omega_a, Omega_b and Zc from the critical-point conditions. With u = sigma + epsilon and
+     * w = sigma epsilon the cubic in Z reads
+     * Z^3 + ((u - 1) B - 1) Z^2 + (A + w B^2 - u B^2 - u B) Z - (A B + w B^2 + w B^3) = 0.
+     * A triple root Zc at the critical point gives, coefficient by coefficient,
+     * Zc = (1 - (u - 1) B)/3, A = 3 Zc^2 - w B^2 + u B^2 + u B, and Zc^3 = A B + w B^2 + w B^3,
+     * a single equation in B = Omega_b solved here by bisection to machine precision.
+     *
+     * @return {Omega_a, Omega_b, Zc}
+     */
+    static double[] deriveCriticalConstants(double sigma, double epsilon) {
+        double u = sigma + epsilon;
+        double w = sigma * epsilon;
+        double lo = 1e-6;
+        double hi = 0.3;
+        for (int it = 0; it < 200 && hi - lo > 1e-17; it++) {
+            double mid = 0.5 * (lo + hi);
+            if (criticalResidual(mid, u, w) < 0) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        double b = 0.5 * (lo + hi);
+        double z = (1.0 - (u - 1.0) * b) / 3.0;
+        double a = 3.0 * z * z - w * b * b + u * b * b + u * b;
+        return new double[] {a, b, z};
+    }
+
+    private static double criticalResidual(double b, double u, double w) {
+        double z = (1.0 - (u - 1.0) * b) / 3.0;
+        double a = 3.0 * z * z - w * b * b + u * b * b + u * b;
+        return a * b + w * b * b + w * b * b * b - z * z * z;
+    }
+
+    public String displayName() {
+        return displayName;
+    }
+
+    public double sigma() {
+        return sigma;
+    }
+
+    public double epsilon() {
+        return epsilon;
+    }
+
+    public double omegaA() {
+        return omegaA;
+    }
+
+    public double omegaB() {
+        return omegaB;
+    }
+
+    /** Critical compressibility the cubic predicts for every fluid. */
+    public double zc() {
+        return zc;
+    }
+
+    public String citation() {
+        return citation;
+    }
+
+    /** The alpha function of this variant for one component. */
+    public AlphaFunction alphaFor(Component c) {
+        return alphaFactory.apply(c);
+    }
+
+    /** Whether a published volume-shift correlation exists for this variant. */
+    public boolean hasVolumeShift() {
+        return volumeShift != null;
+    }
+
+    /**
+     * The volume shift c (m3/mol) of one component: v_translated = v_cubic - c.
+     *
+     * @throws IllegalStateException when the variant has no published shift
+     */
+    public double volumeShift(Component c) {
+        if (volumeShift == null) {
+            throw new IllegalStateException(displayName + " has no published volume shift");
+        }
+        return volumeShift.shift(c);
+    }
+
+    /** Citation of the volume-shift correlation, or "" where there is none. */
+    public String volumeShiftCitation() {
+        return volumeShift == null ? "" : volumeShift.citation;
+    }
+
+    /** b of one component, m3/mol. */
+    public double b(Component c) {
+        return omegaB * PhysicalConstants.R * c.tcK() / c.pcPa();
+    }
+
+    /** a_c = a(Tc) of one component, Pa m6/mol2. */
+    public double ac(Component c) {
+        double rt = PhysicalConstants.R * c.tcK();
+        return omegaA * rt * rt / c.pcPa();
+    }
+
+    /**
+     * Parses a variant name as typed on the command line or in a case file: vdW, RK, SRK, PR76,
+     * PR78, and PR (taken as PR78, which equals PR76 for omega <= 0.491; the output always names
+     * the variant used).
+     */
+    public static EosVariant parse(String field, String text) {
+        if (text == null) {
+            throw InvalidInputException.missing(field, "expected one of vdW, RK, SRK, PR76, PR78 (PR = PR78)");
+        }
+        String t = text.trim().toUpperCase(Locale.ROOT).replace("-", "").replace(" ", "");
+        switch (t) {
+            case "VDW":
+            case "VANDERWAALS":
+                return VDW;
+            case "RK":
+            case "REDLICHKWONG":
+                return RK;
+            case "SRK":
+            case "SOAVEREDLICHKWONG":
+                return SRK;
+            case "PR76":
+            case "PR1976":
+                return PR76;
+            case "PR":
+            case "PR78":
+            case "PR1978":
+            case "PENGROBINSON":
+                return PR78;
+            default:
+                throw InvalidInputException.invalid(field, text, "expected one of vdW, RK, SRK, PR76, PR78 (PR = PR78)");
+        }
+    }
+
+    /** Published volume-shift correlations in terms of the Rackett compressibility Z_RA. */
+    enum VolumeShift {
+        /**
+         * c = 0.40768 (0.29441 - Z_RA) R Tc / Pc.
+         * Source: A. Peneloux, E. Rauzy, R. Freze, Fluid Phase Equilib. 8 (1982) 7-23,
+         * DOI 10.1016/0378-3812(82)80002-2.
+         */
+        PENELOUX_SRK(0.40768, 0.29441, "Peneloux, Rauzy, Freze, Fluid Phase Equilib. 8 (1982) 7"),
+        /**
+         * c = 0.50033 (0.25969 - Z_RA) R Tc / Pc: the Peneloux-type shift fitted for PR, as given
+         * in C.H. Whitson, M.R. Brule, Phase Behavior, SPE Monograph 20 (2000), ch. 4 (cited from
+         * memory; confirm against the monograph).
+         */
+        PENELOUX_TYPE_PR(0.50033, 0.25969, "Peneloux-type shift for PR, Whitson & Brule, Phase Behavior (2000), from memory");
+
+        private final double k1;
+        private final double k2;
+        private final String citation;
+
+        VolumeShift(double k1, double k2, String citation) {
+            this.k1 = k1;
+            this.k2 = k2;
+            this.citation = citation;
+        }
+
+        double shift(Component c) {
+            return k1 * (k2 - c.rackettZ()) * PhysicalConstants.R * c.tcK() / c.pcPa();
+        }
+    }
+}

@@ -1,0 +1,43 @@
+package org.ventcase.thermo;
+
+import java.util.List;
+
+/**
+ * A pure fluid's saturation state from a cubic equation of state.
+ *
+ * @param variant              equation of state
+ * @param component            the fluid
+ * @param temperatureK         K
+ * @param pressurePa           Pa absolute
+ * @param liquid               saturated liquid
+ * @param vapor                saturated vapour
+ * @param latentHeatJmol       H_V - H_L, J/mol
+ * @param latentHeatJkg        J/kg
+ * @param rackettLiquidDensity saturated-liquid density by the Rackett equation (Spencer-Danner
+ *                             form), kg/m3, an independent cross-check of the EOS liquid density
+ * @param iterations           equal-fugacity iterations spent (outer x inner for Tsat)
+ * @param warnings             what the user must know
+ */
+public record SaturationResult(EosVariant variant, Component component, double temperatureK, double pressurePa,
+                               PhaseState liquid, PhaseState vapor, double latentHeatJmol, double latentHeatJkg,
+                               double rackettLiquidDensity, int iterations, List<String> warnings) {
+
+    public SaturationResult {
+        warnings = List.copyOf(warnings);
+    }
+
+    /**
+     * One coexisting phase.
+     *
+     * @param z                raw cubic root
+     * @param molarVolumeCubic m3/mol
+     * @param molarVolume      m3/mol on the density basis used
+     * @param density          kg/m3 on that basis
+     * @param densityBasis     the basis used
+     * @param lnPhi            ln fugacity coefficient
+     * @param residualEnthalpy J/mol
+     */
+    public record PhaseState(double z, double molarVolumeCubic, double molarVolume, double density,
+                             DensityBasis densityBasis, double lnPhi, double residualEnthalpy) {
+    }
+}
