@@ -1,24 +1,32 @@
 package org.ventcase.thermo;
 
 /**
- * Real roots of Z^3 + c2 Z^2 + c1 Z + c0 = 0 by the analytic solution, each root then polished
- * by Newton's method on the original cubic. Never successive substitution.
+ * Real roots of Z^3 + c2 Z^2 + c1 Z + c0 = 0 by the analytic solution, polished by Newton's
+ * method, then deflation. Never successive substitution.
  *
  * <p>Method: the substitution Z = t - c2/3 gives the depressed cubic t^3 + p t + q = 0 with
- * discriminant D = (q/2)^2 + (p/3)^3. For D > 0 there is one real root, taken from Cardano's
- * formula in the cancellation-free form t = u - p/(3u), u = cbrt(-q/2 - sign(q) sqrt D). For
- * D <= 0 there are three real roots, from Viete's trigonometric form
- * t_k = 2 sqrt(-p/3) cos(phi/3 - 2 pi k/3), cos phi = (3q/(2p)) sqrt(-3/p).
- * Source: W.H. Press et al., Numerical Recipes, 3rd ed., 2007, section 5.6.
+ * discriminant D = (q/2)^2 + (p/3)^3. One real root is taken analytically: for D > 0 from
+ * Cardano's formula in the cancellation-free form t = u - p/(3u), u = cbrt(-q/2 - sign(q) sqrt D);
+ * for D <= 0 the largest of Viete's trigonometric roots,
+ * t = 2 sqrt(-p/3) cos(phi/3), cos phi = -(q/2)/(-p/3)^(3/2). That root is polished by Newton's
+ * method and divided out; the remaining quadratic Z^2 + e1 Z + e0 (e1 = c2 + z1, e0 = -c0/z1)
+ * is solved in the stable form r = -(e1 + sign(e1) sqrt(e1^2 - 4 e0))/2, e0/r. Deflation keeps
+ * the small liquid-like roots accurate at low pressure, where they are many orders of magnitude
+ * below the vapour root and a direct formula loses them to round-off.
+ * Source: W.H. Press et al., Numerical Recipes, 3rd ed., 2007, sections 5.6 (quadratic and cubic
+ * equations) and 9.5 (deflation).
  *
- * <p>Classification: a root pair is treated as coincident when the discriminant is within
- * round-off of zero relative to its terms; with p also within round-off of zero, all three
- * coincide (the critical point). Stateless and thread-safe.
+ * <p>Classification: the quadratic's discriminant within round-off of zero (relative 1e-10 of
+ * e1^2) is a double root; a double root also equal to the first root (relative 1e-4, the
+ * accuracy to which a triple root can be located in double precision) is the triple root of
+ * the critical point. Stateless and thread-safe.
  */
 public final class CubicSolver {
 
-    /** Relative size of the discriminant below which two roots are taken as equal. */
-    static final double DISCRIMINANT_TOLERANCE = 1e-10;
+    /** Relative size of the quadratic discriminant below which two roots are taken as equal. */
+    static final double DOUBLE_ROOT_TOLERANCE = 1e-10;
+    /** Relative distance below which a double root and the first root form a triple root. */
+    static final double TRIPLE_ROOT_TOLERANCE = 1e-4;
 
     private CubicSolver() {
     }
@@ -30,11 +38,8 @@ public final class CubicSolver {
      */
     public static CubicRoots solve(double c2, double c1, double c0, double b) {
         double[] all = new double[3];
-        int n = realRoots(c2, c1, c0, all);
-        RootCase rc = classify(c2, c1, c0, n);
-        if (rc == RootCase.DOUBLE || rc == RootCase.TRIPLE) {
-            n = repeatedRoots(c2, c1, c0, rc, all);
-        }
+        RootCase[] rc = new RootCase[1];
+        int n = roots(c2, c1, c0, all, rc);
         int nPhys = 0;
         for (int i = 0; i < n; i++) {
             if (all[i] > b) {
@@ -52,98 +57,79 @@ public final class CubicSolver {
                 rej[ir++] = all[i];
             }
         }
-        return new CubicRoots(phys, rej, rc);
+        return new CubicRoots(phys, rej, rc[0]);
     }
 
-    /**
-     * The real roots in ascending order, written into {@code out}; returns how many (1 or 3;
-     * repeated roots are returned repeated).
-     */
+    /** The real roots in ascending order (repeated roots repeated); returns how many (1 or 3). */
     static int realRoots(double c2, double c1, double c0, double[] out) {
+        return roots(c2, c1, c0, out, new RootCase[1]);
+    }
+
+    static int roots(double c2, double c1, double c0, double[] out, RootCase[] kind) {
         double c2over3 = c2 / 3.0;
         double p = c1 - c2 * c2over3;
         double q = (2.0 * c2over3 * c2over3 - c1) * c2over3 + c0;
         double halfQ = 0.5 * q;
         double thirdP = p / 3.0;
         double disc = halfQ * halfQ + thirdP * thirdP * thirdP;
+        double t;
         if (disc > 0) {
             double sq = Math.sqrt(disc);
             double u = Math.cbrt(-halfQ - Math.copySign(sq, halfQ));
-            double t = u == 0.0 ? 0.0 : u - thirdP / u;
-            out[0] = polish(t - c2over3, c2, c1, c0);
+            t = u == 0.0 ? 0.0 : u - thirdP / u;
+        } else if (thirdP < 0) {
+            double r = Math.sqrt(-thirdP);
+            double cosPhi = Math.max(-1.0, Math.min(1.0, -halfQ / (r * r * r)));
+            t = 2.0 * r * Math.cos(Math.acos(cosPhi) / 3.0);
+        } else {
+            t = 0.0;
+        }
+        double z1 = polish(t - c2over3, c2, c1, c0);
+        // Deflate: (Z - z1)(Z^2 + e1 Z + e0)
+        double e1 = c2 + z1;
+        double e0 = z1 != 0.0 ? -c0 / z1 : c1 + z1 * e1;
+        double qd = e1 * e1 - 4.0 * e0;
+        double tol = DOUBLE_ROOT_TOLERANCE * Math.max(e1 * e1, Math.abs(4.0 * e0));
+        if (qd < -tol) {
+            out[0] = z1;
+            kind[0] = RootCase.ONE_REAL;
             return 1;
         }
-        if (thirdP >= 0) {
-            // p = 0 and q = 0: triple root
-            double z = -c2over3;
-            out[0] = z;
-            out[1] = z;
-            out[2] = z;
-            return 3;
+        double z2;
+        double z3;
+        if (Math.abs(qd) <= tol) {
+            z2 = -0.5 * e1;
+            z3 = z2;
+            kind[0] = Math.abs(z2 - z1) <= TRIPLE_ROOT_TOLERANCE * Math.max(Math.abs(z1), 1e-300)
+                    ? RootCase.TRIPLE : RootCase.DOUBLE;
+            if (kind[0] == RootCase.TRIPLE) {
+                double mean = (z1 + 2 * z2) / 3.0;
+                z1 = mean;
+                z2 = mean;
+                z3 = mean;
+            }
+        } else {
+            double r = -0.5 * (e1 + Math.copySign(Math.sqrt(qd), e1));
+            z2 = polish(r, c2, c1, c0);
+            z3 = r != 0.0 ? polish(e0 / r, c2, c1, c0) : 0.0;
+            kind[0] = RootCase.THREE_DISTINCT;
         }
-        double r = Math.sqrt(-thirdP);
-        double cosPhi = -halfQ / (r * r * r);
-        cosPhi = Math.max(-1.0, Math.min(1.0, cosPhi));
-        double phi = Math.acos(cosPhi);
-        double twoR = 2.0 * r;
-        double t0 = twoR * Math.cos(phi / 3.0);
-        double t1 = twoR * Math.cos((phi + 2.0 * Math.PI) / 3.0);
-        double t2 = twoR * Math.cos((phi + 4.0 * Math.PI) / 3.0);
-        // t1 <= t2 <= t0 for phi in [0, pi]
-        out[0] = polish(t1 - c2over3, c2, c1, c0);
-        out[1] = polish(t2 - c2over3, c2, c1, c0);
-        out[2] = polish(t0 - c2over3, c2, c1, c0);
-        if (out[0] > out[1]) {
-            double tmp = out[0];
-            out[0] = out[1];
-            out[1] = tmp;
-        }
-        if (out[1] > out[2]) {
-            double tmp = out[1];
-            out[1] = out[2];
-            out[2] = tmp;
-        }
-        if (out[0] > out[1]) {
-            double tmp = out[0];
-            out[0] = out[1];
-            out[1] = tmp;
-        }
+        sort3(z1, z2, z3, out);
         return 3;
     }
 
-    /**
-     * Roots when the discriminant is zero within round-off: for t^3 + p t + q = 0 with D = 0 the
-     * simple root is 3q/p and the double root -3q/(2p) (all zero when p = q = 0).
-     */
-    static int repeatedRoots(double c2, double c1, double c0, RootCase rc, double[] out) {
-        double c2over3 = c2 / 3.0;
-        double p = c1 - c2 * c2over3;
-        double q = (2.0 * c2over3 * c2over3 - c1) * c2over3 + c0;
-        if (rc == RootCase.TRIPLE || p == 0.0) {
-            double z = -c2over3;
-            out[0] = z;
-            out[1] = z;
-            out[2] = z;
-            return 3;
-        }
-        double simple = polish(3.0 * q / p - c2over3, c2, c1, c0);
-        double dbl = -1.5 * q / p - c2over3;
-        if (simple < dbl) {
-            out[0] = simple;
-            out[1] = dbl;
-            out[2] = dbl;
-        } else {
-            out[0] = dbl;
-            out[1] = dbl;
-            out[2] = simple;
-        }
-        return 3;
+    private static void sort3(double a, double b, double c, double[] out) {
+        double lo = Math.min(a, Math.min(b, c));
+        double hi = Math.max(a, Math.max(b, c));
+        out[0] = lo;
+        out[1] = a + b + c - lo - hi;
+        out[2] = hi;
     }
 
     /** Newton polishing, at most three steps; a step that does not reduce |f| is not taken. */
     static double polish(double z, double c2, double c1, double c0) {
         double f = ((z + c2) * z + c1) * z + c0;
-        for (int i = 0; i < 3; i++) {
+        for (int i = 0; i < 3 && f != 0.0; i++) {
             double df = (3.0 * z + 2.0 * c2) * z + c1;
             if (df == 0.0) {
                 break;
@@ -155,27 +141,7 @@ public final class CubicSolver {
             }
             z = zn;
             f = fn;
-            if (f == 0.0) {
-                break;
-            }
         }
         return z;
-    }
-
-    static RootCase classify(double c2, double c1, double c0, int n) {
-        double c2over3 = c2 / 3.0;
-        double p = c1 - c2 * c2over3;
-        double q = (2.0 * c2over3 * c2over3 - c1) * c2over3 + c0;
-        double a = 0.25 * q * q;
-        double b = p * p * p / 27.0;
-        double disc = a + b;
-        // Round-off scale of D: the size of its terms, and of the coefficients that made them.
-        double scale = Math.max(Math.abs(a) + Math.abs(b), 1e-30)
-                + Math.pow(Math.max(Math.abs(c0), Math.max(c1 * c1, Math.pow(c2, 4) / 9)), 1.5) * 1e-18;
-        if (Math.abs(disc) <= DISCRIMINANT_TOLERANCE * scale) {
-            double pScale = Math.abs(c1) + c2 * c2 / 3.0;
-            return Math.abs(p) <= 1e-7 * Math.max(pScale, 1e-30) ? RootCase.TRIPLE : RootCase.DOUBLE;
-        }
-        return n == 1 ? RootCase.ONE_REAL : RootCase.THREE_DISTINCT;
     }
 }

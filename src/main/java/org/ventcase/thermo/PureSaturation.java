@@ -137,7 +137,7 @@ public final class PureSaturation {
                     "%.6g K is at or above the critical temperature of %s (Tc = %.6g K): there is no saturation; "
                             + "the fluid is supercritical", t, component.name(), tc));
         }
-        if (tr > MAX_TR) {
+        if (tr > MAX_TR * (1 + 1e-12)) {
             throw new NoSolutionException("temperature", String.format(Locale.ROOT,
                     "%.6g K is within %.3g K of the critical temperature of %s (Tc = %.6g K; Tr = %.6f > %.4f): "
                             + "liquid and vapour are not distinct enough to compute; treat the fluid as near-critical",
