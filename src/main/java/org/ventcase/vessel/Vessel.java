@@ -344,7 +344,7 @@ public final class Vessel {
         Objects.requireNonNull(fire, "fire");
         if (fire.excludeSkirtedBottomHead() && shape != Shape.VERTICAL_CYLINDER) {
             throw InvalidInputException.invalid("fire.excludeSkirtedBottomHead", true,
-                    "a skirted bottom head can be excluded only for a vertical vessel; this vessel is "
+                    "expected false: a skirted bottom head can be excluded only for a vertical vessel; this vessel is "
                             + shape.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '));
         }
         double zone = fire.fireHeight() - fire.bottomElevation();
