@@ -1,0 +1,32 @@
+package org.ventcase.device;
+
+import java.util.List;
+import java.util.OptionalDouble;
+
+/**
+ * Required effective area for gas or vapour service and how it was obtained.
+ *
+ * @param areaM2                 required effective discharge area, m2
+ * @param regime                 critical or subcritical, as used by the equation chosen
+ * @param criticalPressureRatio  ratio P2/P1 at or below which the flow was taken as critical
+ * @param coefficientC           C of the critical equation in the standard's SI units
+ *                               (0.03948 x root; 0.0239 when k is unknown)
+ * @param f2                     F2 of the subcritical equation, when that equation was used
+ * @param equation               which equation, in words
+ * @param trace                  each step with the substituted values, in order
+ * @param warnings               validity notes to print
+ * @param source                 standard, edition and equation
+ */
+public record GasSizingResult(double areaM2, FlowRegime regime, double criticalPressureRatio, double coefficientC,
+                              OptionalDouble f2, String equation, List<String> trace, List<String> warnings,
+                              String source) {
+    public GasSizingResult {
+        trace = List.copyOf(trace);
+        warnings = List.copyOf(warnings);
+    }
+
+    /** Required area, mm2. */
+    public double areaMm2() {
+        return areaM2 * 1e6;
+    }
+}
