@@ -34,6 +34,9 @@ public final class PureSaturation {
     /** Lowest reduced temperature accepted. */
     public static final double MIN_TR = 0.2;
 
+    /** Relative difference from the Rackett density above which a warning is given. */
+    public static final double RACKETT_WARNING = 0.03;
+
     private static final int MAX_ITER = 100;
     private static final double G_TOL = 1e-12;
 
@@ -143,7 +146,7 @@ public final class PureSaturation {
                             + "liquid and vapour are not distinct enough to compute; treat the fluid as near-critical",
                     t, tc - t, component.name(), tc, tr, MAX_TR));
         }
-        if (tr < MIN_TR) {
+        if (tr < MIN_TR * (1 - 1e-12)) {
             throw new NoSolutionException("temperature", String.format(Locale.ROOT,
                     "%.6g K is below Tr = %.2f for %s: below the range the equation of state is used for", t,
                     MIN_TR, component.name()));
@@ -287,9 +290,18 @@ public final class PureSaturation {
                 s.lnPhiL, s.hL);
         SaturationResult.PhaseState vap = new SaturationResult.PhaseState(s.zV, vv, vv - c, mw / 1e3 / (vv - c), used,
                 s.lnPhiV, s.hV);
+        double rackett = rackettDensity(component, t);
+        double dev = liq.density() / rackett - 1.0;
+        if (Math.abs(dev) > RACKETT_WARNING) {
+            warnings.add(String.format(Locale.ROOT,
+                    "The %s liquid density (%.4g kg/m3) differs from the Rackett correlation (%.4g kg/m3, Z_RA from "
+                            + "%s) by %+.1f %%: a liquid inventory on this basis may be %s; compare the bases before "
+                            + "relying on it.", used.label(), liq.density(), rackett, component.rackettSource(), 100 * dev,
+                    dev < 0 ? "understated" : "overstated"));
+        }
         double dh = s.hV - s.hL;
         return new SaturationResult(model.variant(), component, t, s.p, liq, vap, dh, dh / (mw * 1e-3),
-                rackettDensity(component, t), iterations, warnings);
+                rackett, iterations, warnings);
     }
 
     /**

@@ -1,0 +1,177 @@
+package org.ventcase.casefile;
+
+import java.util.List;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+import org.ventcase.thermo.Component;
+import org.ventcase.thermo.FluidProperties;
+import org.ventcase.thermo.SaturationResult;
+import org.ventcase.vessel.LevelState;
+
+/**
+ * The JSON contracts of the headless commands (documented in the README under "JSON output").
+ * Field names carry their SI unit ({@code temperature_K}, {@code pressure_Pa}); pressures are
+ * absolute. Fields are only added between versions, never renamed or removed. A value that could
+ * not be computed is written as {@code null} with a warning in {@code warnings} saying why.
+ */
+public final class JsonReports {
+
+    private static final ObjectMapper MAPPER = new ObjectMapper()
+            .enable(SerializationFeature.INDENT_OUTPUT);
+
+    private JsonReports() {
+    }
+
+    /** Pretty-printed JSON text of a tree, with a final newline. */
+    public static String write(ObjectNode node) {
+        try {
+            return MAPPER.writeValueAsString(node) + System.lineSeparator();
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("JSON serialisation failed", e);
+        }
+    }
+
+    static ObjectNode component(Component c) {
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("name", c.name());
+        n.put("formula", c.formula());
+        n.put("cas", c.cas());
+        n.put("Tc_K", c.tcK());
+        n.put("Pc_Pa", c.pcPa());
+        n.put("omega", c.omega());
+        n.put("molarMass_kg_kmol", c.molarMass());
+        n.put("rackettZ", c.rackettZ());
+        n.put("source", c.criticalSource());
+        n.put("cpSource", c.cp().source());
+        n.put("rackettSource", c.rackettSource());
+        return n;
+    }
+
+    private static void number(ObjectNode n, String key, double v, List<String> warnings, String what) {
+        if (Double.isFinite(v)) {
+            n.put(key, v);
+        } else {
+            n.putNull(key);
+            if (warnings.stream().noneMatch(w -> w.contains(what))) {
+                warnings.add(what + " could not be computed at this state.");
+            }
+        }
+    }
+
+    private static ArrayNode array(double[] values) {
+        ArrayNode a = MAPPER.createArrayNode();
+        for (double v : values) {
+            a.add(v);
+        }
+        return a;
+    }
+
+    private static ArrayNode strings(List<String> values) {
+        ArrayNode a = MAPPER.createArrayNode();
+        values.forEach(a::add);
+        return a;
+    }
+
+    private static ObjectNode fill(ObjectNode n, FluidProperties p, Component c, List<String> warnings) {
+        n.set("component", component(c));
+        n.put("temperature_K", p.temperatureK());
+        n.put("pressure_Pa", p.pressurePa());
+        n.set("roots", array(p.roots().physical()));
+        n.set("rootsBelowCovolume", array(p.roots().rejected()));
+        n.put("rootCase", p.roots().rootCase().name());
+        n.put("rootChoice", p.rootReason());
+        n.put("phase", p.phase().label());
+        n.put("phaseCriterion", p.phaseCriterion());
+        n.put("Z", p.z());
+        n.put("molarVolume_m3_mol", p.molarVolume());
+        n.put("molarVolumeCubic_m3_mol", p.molarVolumeCubic());
+        n.put("density_kg_m3", p.density());
+        n.put("densityBasis", p.densityBasis().label());
+        n.put("molarMass_kg_kmol", p.molarMass());
+        n.put("fugacityCoefficient", p.fugacityCoefficient(0));
+        n.put("residualEnthalpy_J_mol", p.residualEnthalpy());
+        n.put("residualEntropy_J_molK", p.residualEntropy());
+        n.put("residualGibbs_J_mol", p.residualGibbs());
+        n.put("cpIdealGas_J_molK", p.cpIdeal());
+        n.put("cp_J_molK", p.cp());
+        n.put("cv_J_molK", p.cv());
+        n.put("k", p.kReal());
+        n.put("kIdealGas", p.kIdeal());
+        n.put("isentropicExponent", p.isentropicExponent());
+        number(n, "speedOfSound_m_s", p.speedOfSound(), warnings, "Speed of sound");
+        n.put("jouleThomson_K_Pa", p.jouleThomson());
+        n.set("warnings", strings(warnings));
+        return n;
+    }
+
+    /** Contract of {@code ventcase props --json} for a pure component. */
+    public static ObjectNode props(FluidProperties p, Component c) {
+        List<String> warnings = new java.util.ArrayList<>(p.warnings());
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("eos", p.variant().name());
+        n.put("eosName", p.variant().displayName());
+        return fill(n, p, c, warnings);
+    }
+
+    /** Contract of {@code ventcase sat --json} for a pure component. */
+    public static ObjectNode sat(SaturationResult s) {
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("eos", s.variant().name());
+        n.put("eosName", s.variant().displayName());
+        n.set("component", component(s.component()));
+        n.put("temperature_K", s.temperatureK());
+        n.put("pressure_Pa", s.pressurePa());
+        n.set("liquid", phase(s.liquid()));
+        n.set("vapor", phase(s.vapor()));
+        n.put("latentHeat_J_kg", s.latentHeatJkg());
+        n.put("latentHeat_J_mol", s.latentHeatJmol());
+        n.put("rackettLiquidDensity_kg_m3", s.rackettLiquidDensity());
+        n.put("iterations", s.iterations());
+        n.set("warnings", strings(s.warnings()));
+        return n;
+    }
+
+    private static ObjectNode phase(SaturationResult.PhaseState p) {
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("Z", p.z());
+        n.put("density_kg_m3", p.density());
+        n.put("densityBasis", p.densityBasis().label());
+        n.put("molarVolume_m3_mol", p.molarVolume());
+        n.put("molarVolumeCubic_m3_mol", p.molarVolumeCubic());
+        n.put("fugacityCoefficient", Math.exp(p.lnPhi()));
+        n.put("residualEnthalpy_J_mol", p.residualEnthalpy());
+        return n;
+    }
+
+    /** Contract of {@code ventcase vessel --json}. */
+    public static ObjectNode vessel(LevelState s, double bottomElevation, double fireHeight) {
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("description", s.vessel().describe());
+        n.put("totalHeight_m", s.vessel().totalHeight());
+        n.put("totalVolume_m3", s.totalVolume());
+        n.put("totalInsideArea_m2", s.totalInsideArea());
+        ObjectNode level = MAPPER.createObjectNode();
+        level.put("height_m", s.levelM());
+        level.put("percentOfHeight", s.levelPercentHeight());
+        level.put("percentOfVolume", s.levelPercentVolume());
+        n.set("level", level);
+        n.put("liquidVolume_m3", s.liquidVolume());
+        n.put("vaporVolume_m3", s.vapourVolume());
+        n.put("wettedArea_m2", s.wettedArea());
+        ObjectNode fire = MAPPER.createObjectNode();
+        fire.put("bottomElevation_m", bottomElevation);
+        fire.put("fireHeight_m", fireHeight);
+        fire.put("fireWettedArea_m2", s.fire().area());
+        fire.put("effectiveLevel_m", s.fire().effectiveLevel());
+        fire.put("ruleApplied", s.fire().ruleApplied());
+        n.set("fire", fire);
+        n.put("fireWettedArea_m2", s.fire().area());
+        s.vessel().outsideArea().ifPresent(a -> n.put("totalOutsideArea_m2", a));
+        return n;
+    }
+}

@@ -1,0 +1,50 @@
+package org.ventcase.cli;
+
+import org.ventcase.common.PhysicalConstants;
+import org.ventcase.thermo.DensityBasis;
+import org.ventcase.thermo.EosVariant;
+import org.ventcase.units.Units;
+
+import picocli.CommandLine.Option;
+
+/** Options shared by the property commands. */
+final class CommonOptions {
+
+    @Option(names = "--eos", paramLabel = "NAME", defaultValue = "PR78",
+            description = "Equation of state: vdW, RK, SRK, PR76, PR78 (PR = PR78). Default: ${DEFAULT-VALUE}.")
+    String eos;
+
+    @Option(names = "--density-basis", paramLabel = "BASIS", defaultValue = "translated",
+            description = "Liquid-density basis: translated (Peneloux-type volume shift, default) or cubic.")
+    String densityBasis;
+
+    @Option(names = "--atmosphere", paramLabel = "P", defaultValue = "101.325 kPaa",
+            description = "Site atmospheric pressure, used to convert gauge pressures. Default: ${DEFAULT-VALUE}.")
+    String atmosphere;
+
+    @Option(names = "--json", description = "Print the documented JSON result instead of the table.")
+    boolean json;
+
+    EosVariant variant() {
+        return EosVariant.parse("--eos", eos);
+    }
+
+    DensityBasis basis() {
+        switch (densityBasis.trim().toLowerCase(java.util.Locale.ROOT)) {
+            case "translated":
+                return DensityBasis.TRANSLATED;
+            case "cubic":
+            case "raw":
+                return DensityBasis.CUBIC;
+            default:
+                throw org.ventcase.common.InvalidInputException.invalid("--density-basis", densityBasis,
+                        "expected translated or cubic");
+        }
+    }
+
+    double atmosphericPa() {
+        double p = Units.parsePressure("--atmosphere", atmosphere, PhysicalConstants.ATM_PA);
+        org.ventcase.common.InvalidInputException.requireInRange("--atmosphere", p, 50e3, 110e3, "Pa");
+        return p;
+    }
+}

@@ -1,0 +1,94 @@
+package org.ventcase.cli;
+
+import java.io.PrintWriter;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+import org.ventcase.casefile.JsonReports;
+import org.ventcase.thermo.Component;
+import org.ventcase.thermo.ComponentLibrary;
+import org.ventcase.thermo.CubicModel;
+import org.ventcase.thermo.PureSaturation;
+import org.ventcase.thermo.SaturationResult;
+import org.ventcase.units.Units;
+
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code ventcase sat}: saturation state of a pure fluid at T or at P. */
+@Command(name = "sat", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+        header = "Saturation pressure or temperature of a pure fluid, with phase densities and latent heat.",
+        description = {"Equal-fugacity solution of the cubic equation of state; the liquid density is also "
+                + "given by the Rackett equation as an independent cross-check.",
+                "Example: ventcase sat --fluid propane --pressure \"17.2 barg\""},
+        footer = ExitCode.HELP_LIST)
+final class SatCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Mixin
+    CommonOptions common;
+
+    @Option(names = "--fluid", required = true, paramLabel = "NAME",
+            description = "Component by name, formula or CAS number.")
+    String fluid;
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    Given given;
+
+    static final class Given {
+        @Option(names = "--temperature", paramLabel = "T", description = "Saturation temperature (e.g. \"45 C\").")
+        String temperature;
+
+        @Option(names = "--pressure", paramLabel = "P",
+                description = "Saturation pressure, absolute or gauge (e.g. \"17.2 barg\").")
+        String pressure;
+    }
+
+    @Override
+    public Integer call() {
+        Component c = ComponentLibrary.builtIn().get("--fluid", fluid);
+        PureSaturation sat = new PureSaturation(CubicModel.pure(common.variant(), c));
+        SaturationResult s;
+        if (given.temperature != null) {
+            s = withField(() -> sat.atTemperature(Units.temperatureK("--temperature", given.temperature),
+                    common.basis()), "--temperature");
+        } else {
+            double p = Units.parsePressure("--pressure", given.pressure, common.atmosphericPa());
+            s = withField(() -> sat.atPressure(p, common.basis()), "--pressure");
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        if (common.json) {
+            out.print(JsonReports.write(JsonReports.sat(s)));
+            return ExitCode.OK;
+        }
+        Text tx = new Text(out);
+        tx.title(String.format(Locale.ROOT, "Saturation of %s  [%s]", c.name(), s.variant().displayName()));
+        tx.row("Temperature", Text.temperature(s.temperatureK()));
+        tx.row("Pressure", Text.pressure(s.pressurePa(), common.atmosphericPa()));
+        tx.row("Z liquid / vapour", "%.6f / %.6f", s.liquid().z(), s.vapor().z());
+        tx.row("Liquid density", "%.4g kg/m3 (%s; cubic %.4g; Rackett %.4g)", s.liquid().density(),
+                s.liquid().densityBasis().label(),
+                c.molarMass() * 1e-3 / s.liquid().molarVolumeCubic(), s.rackettLiquidDensity());
+        tx.row("Vapour density", "%.4g kg/m3 (%s)", s.vapor().density(), s.vapor().densityBasis().label());
+        tx.row("Latent heat", "%.1f kJ/kg (%.1f J/mol)", s.latentHeatJkg() / 1e3, s.latentHeatJmol());
+        tx.row("Source of constants", c.criticalSource());
+        tx.warnings(s.warnings());
+        return ExitCode.OK;
+    }
+
+    /** Re-labels a core message about "temperature"/"pressure" with the option the user typed. */
+    private static SaturationResult withField(java.util.function.Supplier<SaturationResult> f, String option) {
+        try {
+            return f.get();
+        } catch (org.ventcase.common.NoSolutionException e) {
+            throw new org.ventcase.common.NoSolutionException(option,
+                    e.getMessage().substring(e.getMessage().indexOf(':') + 2));
+        }
+    }
+}

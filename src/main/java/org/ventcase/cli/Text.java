@@ -1,0 +1,59 @@
+package org.ventcase.cli;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Locale;
+
+/** Plain-text layout for the headless commands: aligned label/value lines. */
+final class Text {
+    private final PrintWriter out;
+
+    Text(PrintWriter out) {
+        this.out = out;
+    }
+
+    void title(String s) {
+        out.println(s);
+        out.println("-".repeat(Math.min(s.length(), 100)));
+    }
+
+    void row(String label, String value) {
+        out.printf(Locale.ROOT, "  %-30s %s%n", label, value);
+    }
+
+    void row(String label, String format, Object... args) {
+        row(label, String.format(Locale.ROOT, format, args));
+    }
+
+    void blank() {
+        out.println();
+    }
+
+    void warnings(List<String> warnings) {
+        if (warnings.isEmpty()) {
+            return;
+        }
+        out.println();
+        out.println("WARNINGS");
+        for (String w : warnings) {
+            out.println("  ! " + w);
+        }
+    }
+
+    static String roots(double[] z) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < z.length; i++) {
+            sb.append(i == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.6g", z[i]));
+        }
+        return sb.toString();
+    }
+
+    static String pressure(double pa, double atm) {
+        return String.format(Locale.ROOT, "%.5g kPa abs (%.5g bar abs, %.5g barg)", pa / 1e3, pa / 1e5,
+                (pa - atm) / 1e5);
+    }
+
+    static String temperature(double k) {
+        return String.format(Locale.ROOT, "%.2f K (%.2f C)", k, k - 273.15);
+    }
+}
