@@ -144,6 +144,13 @@ public final class CubicModel {
     /** Mixing rule at T and composition x (mole fractions, assumed normalised). */
     public MixParams mix(double t, double[] x) {
         int n = ac.length;
+        if (n == 1) {
+            double tr = t / tc[0];
+            AlphaFunction al = alphas[0];
+            double a = ac[0] * al.alpha(tr);
+            return new MixParams(t, a, ac[0] * al.dAlpha(tr) / tc[0], ac[0] * al.d2Alpha(tr) / (tc[0] * tc[0]),
+                    bi[0], new double[] {a}, bi);
+        }
         double[] ai = new double[n];
         double[] dai = new double[n];
         double[] d2ai = new double[n];
@@ -152,9 +159,6 @@ public final class CubicModel {
             ai[i] = ac[i] * alphas[i].alpha(tr);
             dai[i] = ac[i] * alphas[i].dAlpha(tr) / tc[i];
             d2ai[i] = ac[i] * alphas[i].d2Alpha(tr) / (tc[i] * tc[i]);
-        }
-        if (n == 1) {
-            return new MixParams(t, ai[0], dai[0], d2ai[0], bi[0], new double[] {ai[0]}, bi.clone());
         }
         double a = 0;
         double da = 0;
@@ -179,7 +183,7 @@ public final class CubicModel {
                 }
             }
         }
-        return new MixParams(t, a, da, d2a, b, aBar, bi.clone());
+        return new MixParams(t, a, da, d2a, b, aBar, bi);
     }
 
     /** Pressure at molar volume v (m3/mol) from the equation itself, Pa. */
@@ -240,28 +244,20 @@ public final class CubicModel {
             boolean liquidLike = z * R * m.t() / p < vStar;
             boolean missing = request == PhaseRequest.LIQUID && !liquidLike
                     || request == PhaseRequest.VAPOR && liquidLike;
-            String reason = String.format(Locale.ROOT,
-                    "one physical root Z = %.6g; it is %s (molar volume %s v* = (Zc/Omega_b) b)", z,
-                    liquidLike ? "liquid-like" : "vapour-like", liquidLike ? "below" : "above");
-            return new RootSelection(z, r, reason, liquidLike, missing);
+            return new RootSelection(z, r, request, liquidLike, missing, 0, 0);
         }
         double zl = r.smallest();
         double zv = r.largest();
         switch (request) {
             case LIQUID:
-                return new RootSelection(zl, r, String.format(Locale.ROOT,
-                        "%s; liquid requested: smallest root Z = %.6g", r.rootCase().words(), zl), true, false);
+                return new RootSelection(zl, r, request, true, false, 0, 0);
             case VAPOR:
-                return new RootSelection(zv, r, String.format(Locale.ROOT,
-                        "%s; vapour requested: largest root Z = %.6g", r.rootCase().words(), zv), false, false);
+                return new RootSelection(zv, r, request, false, false, 0, 0);
             default:
                 double gl = reducedResidualGibbs(m, p, zl);
                 double gv = reducedResidualGibbs(m, p, zv);
                 boolean liq = gl < gv;
-                return new RootSelection(liq ? zl : zv, r, String.format(Locale.ROOT,
-                        "%s; stable root by lowest Gibbs energy: G^R/RT = %.6g at Z = %.6g (liquid-like), "
-                                + "%.6g at Z = %.6g (vapour-like); chose %s",
-                        r.rootCase().words(), gl, zl, gv, zv, liq ? "liquid-like" : "vapour-like"), liq, false);
+                return new RootSelection(liq ? zl : zv, r, request, liq, false, gl, gv);
         }
     }
 
@@ -283,6 +279,27 @@ public final class CubicModel {
             double br = bb_i[i] / b;
             out[i] = br * (z - 1.0) - lnZB - q * (2.0 * aBar[i] / a - br) * iI;
         }
+    }
+
+    /**
+     * Z and ln phi of a pure fluid at (T, P) for the requested root: the fast path used where many
+     * states are evaluated (the Gibbs energies compared for the stable root are the ln phi values).
+     *
+     * @return {Z, ln phi}
+     */
+    public double[] pureZAndLnPhi(double t, double p, PhaseRequest request) {
+        if (size() != 1) {
+            throw new IllegalStateException("pure-fluid path on a " + size() + "-component model");
+        }
+        MixParams m = mix(t, null);
+        RootSelection s = select(m, p, request);
+        double lnPhi;
+        if (s.roots().count() > 1 && request == PhaseRequest.STABLE) {
+            lnPhi = s.liquidLike() ? s.gLiquid() : s.gVapor();
+        } else {
+            lnPhi = reducedResidualGibbs(m, p, s.z());
+        }
+        return new double[] {s.z(), lnPhi};
     }
 
     /** ln phi of a pure fluid (or of the mixture as a whole: G^R/RT) at root z. */

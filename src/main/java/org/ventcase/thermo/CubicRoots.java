@@ -4,27 +4,47 @@ import java.util.Arrays;
 
 /**
  * The real roots of a cubic in Z, already split into physical roots (Z > B, ascending) and
- * roots at or below the co-volume (no physical meaning, reported for completeness).
- *
- * @param physical ascending roots with Z > B (one or more; copied)
- * @param rejected real roots with Z <= B (copied)
- * @param rootCase classification of the real roots of the whole cubic
+ * roots at or below the co-volume (no physical meaning, reported for completeness). Immutable:
+ * the accessors return copies.
  */
-public record CubicRoots(double[] physical, double[] rejected, RootCase rootCase) {
+public final class CubicRoots {
 
-    public CubicRoots {
-        physical = physical.clone();
-        rejected = rejected.clone();
+    private final double[] physical;
+    private final double[] rejected;
+    private final RootCase rootCase;
+
+    /**
+     * @param physical ascending roots with Z > B (one or more; copied)
+     * @param rejected real roots with Z <= B (copied)
+     * @param rootCase classification of the real roots of the whole cubic
+     */
+    public CubicRoots(double[] physical, double[] rejected, RootCase rootCase) {
+        this(physical.clone(), rejected.clone(), rootCase, true);
     }
 
-    @Override
+    /** Takes ownership of the arrays (no copy): for the solver, which made them. */
+    private CubicRoots(double[] physical, double[] rejected, RootCase rootCase, boolean owned) {
+        this.physical = physical;
+        this.rejected = rejected;
+        this.rootCase = rootCase;
+    }
+
+    static CubicRoots owning(double[] physical, double[] rejected, RootCase rootCase) {
+        return new CubicRoots(physical, rejected, rootCase, true);
+    }
+
+    /** Ascending physical roots (copy). */
     public double[] physical() {
         return physical.clone();
     }
 
-    @Override
+    /** Roots at or below the co-volume (copy). */
     public double[] rejected() {
         return rejected.clone();
+    }
+
+    public RootCase rootCase() {
+        return rootCase;
     }
 
     /** Number of physical roots. */

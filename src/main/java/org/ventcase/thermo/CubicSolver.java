@@ -28,6 +28,8 @@ public final class CubicSolver {
     /** Relative distance below which a double root and the first root form a triple root. */
     static final double TRIPLE_ROOT_TOLERANCE = 1e-4;
 
+    private static final double[] NONE = new double[0];
+
     private CubicSolver() {
     }
 
@@ -40,6 +42,9 @@ public final class CubicSolver {
         double[] all = new double[3];
         RootCase[] rc = new RootCase[1];
         int n = roots(c2, c1, c0, all, rc);
+        if (n == 1 && all[0] > b) {
+            return CubicRoots.owning(new double[] {all[0]}, NONE, rc[0]);
+        }
         int nPhys = 0;
         for (int i = 0; i < n; i++) {
             if (all[i] > b) {
@@ -57,7 +62,7 @@ public final class CubicSolver {
                 rej[ir++] = all[i];
             }
         }
-        return new CubicRoots(phys, rej, rc[0]);
+        return CubicRoots.owning(phys, rej, rc[0]);
     }
 
     /** The real roots in ascending order (repeated roots repeated); returns how many (1 or 3). */

@@ -4,7 +4,8 @@ package org.ventcase.thermo;
  * The cubic's parameters at one temperature and composition (van der Waals one-fluid mixing:
  * a = sum_i sum_j x_i x_j (1 - k_ij) sqrt(a_i a_j), b = sum_i x_i b_i), with the temperature
  * derivatives of a and the per-component sums needed by fugacity coefficients. For a pure fluid
- * a = a_i and b = b_i. Package-private arrays; instances never escape mutated.
+ * a = a_i and b = b_i. The arrays are shared, not copied, for speed:
+ * callers must not modify them.
  *
  * @param t      temperature, K
  * @param a      mixture a, Pa m6/mol2

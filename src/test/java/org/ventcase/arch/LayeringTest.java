@@ -1,0 +1,84 @@
+package org.ventcase.arch;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.Test;
+
+/**
+ * Keeps the layering of DEVELOPERS.md: domain packages import only java.*, Commons Math and lower
+ * domain packages; only casefile imports Jackson, only report imports PDFBox, only cli imports
+ * picocli and prints to standard streams, only ui imports JavaFX. Checked on the source text.
+ */
+class LayeringTest {
+
+    private static final Path SRC = Path.of("src/main/java/org/ventcase");
+
+    /** Package -> import prefixes it may NOT use. */
+    private static final Map<String, List<String>> FORBIDDEN = Map.of(
+            "common", List.of("org.ventcase.", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx"),
+            "units", List.of("org.ventcase.thermo", "org.ventcase.vessel", "org.ventcase.relief", "org.ventcase.device",
+                    "org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli", "javafx"),
+            "thermo", List.of("org.ventcase.vessel", "org.ventcase.relief", "org.ventcase.device",
+                    "org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx"),
+            "vessel", List.of("org.ventcase.thermo", "org.ventcase.relief", "org.ventcase.device",
+                    "org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx"),
+            "relief", List.of("org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli",
+                    "org.apache.pdfbox", "javafx"),
+            "device", List.of("org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli",
+                    "org.apache.pdfbox", "javafx"),
+            "casefile", List.of("org.ventcase.cli", "picocli", "org.apache.pdfbox", "javafx"));
+
+    @Test
+    void packagesImportOnlyWhatTheirLayerAllows() throws IOException {
+        List<String> violations = new ArrayList<>();
+        for (Map.Entry<String, List<String>> e : FORBIDDEN.entrySet()) {
+            Path dir = SRC.resolve(e.getKey());
+            if (!Files.isDirectory(dir)) {
+                continue;
+            }
+            try (Stream<Path> files = Files.walk(dir)) {
+                for (Path f : (Iterable<Path>) files.filter(p -> p.toString().endsWith(".java"))::iterator) {
+                    for (String line : Files.readAllLines(f)) {
+                        String l = line.trim();
+                        if (!l.startsWith("import ")) {
+                            continue;
+                        }
+                        for (String bad : e.getValue()) {
+                            if (l.matches("import (static )?" + java.util.regex.Pattern.quote(bad) + ".*")
+                                    && !l.contains("org.ventcase.common") && !l.contains("org.ventcase.units")
+                                    || e.getKey().equals("common") && l.contains(bad)) {
+                                violations.add(f + ": " + l);
+                            }
+                        }
+                    }
+                }
+            }
+        }
+        assertTrue(violations.isEmpty(), String.join("\n", violations));
+    }
+
+    @Test
+    void onlyTheCommandLinePrintsToStandardStreams() throws IOException {
+        List<String> violations = new ArrayList<>();
+        try (Stream<Path> files = Files.walk(SRC)) {
+            for (Path f : (Iterable<Path>) files.filter(p -> p.toString().endsWith(".java"))::iterator) {
+                if (f.startsWith(SRC.resolve("cli"))) {
+                    continue;
+                }
+                String text = Files.readString(f);
+                if (text.contains("System.out") || text.contains("System.err") || text.contains("System.exit")) {
+                    violations.add(f.toString());
+                }
+            }
+        }
+        assertTrue(violations.isEmpty(), String.join("\n", violations));
+    }
+}

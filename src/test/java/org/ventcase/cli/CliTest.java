@@ -1,0 +1,143 @@
+package org.ventcase.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.util.List;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+
+/** The headless commands as a script would use them: exit codes, messages and JSON contracts. */
+class CliTest {
+
+    record Run(int code, String out, String err) {
+    }
+
+    static Run run(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = Main.run(new PrintWriter(out), new PrintWriter(err), args);
+        return new Run(code, out.toString(), err.toString());
+    }
+
+    static JsonNode json(String text) throws Exception {
+        return new ObjectMapper().readTree(text);
+    }
+
+    @Test
+    void noArgumentsPrintsHelp() {
+        Run r = run();
+        assertEquals(0, r.code());
+        assertTrue(r.out().contains("Usage: ventcase"));
+        assertTrue(r.out().replaceAll("\\s+", " ").contains("qualified engineer"), "cautions in the help");
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"props", "sat", "vessel"})
+    void everyCommandHasHelpAndVersion(String cmd) {
+        Run h = run(cmd, "--help");
+        assertEquals(0, h.code());
+        assertTrue(h.out().contains("Exit codes"), h.out());
+        Run v = run(cmd, "--version");
+        assertEquals(0, v.code());
+        assertTrue(v.out().startsWith("ventcase "));
+    }
+
+    @Test
+    void propsJsonHasTheDocumentedContract() throws Exception {
+        Run r = run("props", "--fluid", "propane", "--temperature", "300 K", "--pressure", "10 bara", "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode n = json(r.out());
+        for (String f : List.of("eos", "component", "temperature_K", "pressure_Pa", "roots", "phase", "Z",
+                "molarVolume_m3_mol", "density_kg_m3", "densityBasis", "fugacityCoefficient",
+                "residualEnthalpy_J_mol", "cp_J_molK", "cv_J_molK", "k", "speedOfSound_m_s", "warnings")) {
+            assertTrue(n.has(f), "missing " + f);
+        }
+        for (String f : List.of("name", "Tc_K", "Pc_Pa", "omega", "molarMass_kg_kmol", "source")) {
+            assertTrue(n.get("component").has(f), "missing component." + f);
+        }
+        assertEquals("PR78", n.get("eos").asText());
+        assertEquals(1e6, n.get("pressure_Pa").asDouble(), 1e-6);
+        // Three real roots at 300 K, 10 bar for propane (below the vapour spinodal, above Psat):
+        // liquid is stable (propane's vapour pressure at 300 K is about 0.998 MPa, NIST WebBook,
+        // from memory).
+        assertEquals(3, n.get("roots").size());
+        assertEquals("liquid", n.get("phase").asText());
+        assertEquals(n.get("roots").get(0).asDouble(), n.get("Z").asDouble(), 0.0);
+    }
+
+    @Test
+    void satJsonHasTheDocumentedContract() throws Exception {
+        Run r = run("sat", "--fluid", "ammonia", "--temperature", "25 C", "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode n = json(r.out());
+        for (String f : List.of("eos", "component", "temperature_K", "pressure_Pa", "liquid", "vapor",
+                "latentHeat_J_kg", "latentHeat_J_mol", "warnings")) {
+            assertTrue(n.has(f), "missing " + f);
+        }
+        for (String f : List.of("Z", "density_kg_m3", "densityBasis", "molarVolume_m3_mol")) {
+            assertTrue(n.get("liquid").has(f) && n.get("vapor").has(f), "missing phase field " + f);
+        }
+        // Ammonia vapour pressure at 25 C: 1.0029 MPa (NIST WebBook, from memory); PR within 3 %.
+        assertEquals(1.0029e6, n.get("pressure_Pa").asDouble(), 0.03 * 1.0029e6);
+    }
+
+    @Test
+    void satAtGaugePressureUsesTheAtmosphere() throws Exception {
+        JsonNode a = json(run("sat", "--fluid", "propane", "--pressure", "17.2 barg", "--json").out());
+        JsonNode b = json(run("sat", "--fluid", "propane", "--pressure", "18.21325 bara", "--json").out());
+        assertEquals(b.get("temperature_K").asDouble(), a.get("temperature_K").asDouble(), 1e-9);
+        JsonNode c = json(run("sat", "--fluid", "propane", "--pressure", "17.2 barg", "--atmosphere", "95 kPaa",
+                "--json").out());
+        assertTrue(c.get("temperature_K").asDouble() < a.get("temperature_K").asDouble());
+    }
+
+    @Test
+    void badInputGivesExitCode2AndNamesTheOption() {
+        Run r1 = run("props", "--fluid", "propane", "--temperature", "300 K", "--pressure", "10 bar");
+        assertEquals(2, r1.code());
+        assertTrue(r1.err().contains("--pressure") && r1.err().contains("barg"), r1.err());
+        assertEquals(1, r1.err().strip().lines().count(), "one line: " + r1.err());
+        Run r2 = run("props", "--fluid", "propan", "--temperature", "300 K", "--pressure", "10 bara");
+        assertEquals(2, r2.code());
+        assertTrue(r2.err().contains("--fluid") && r2.err().contains("propane"), r2.err());
+        Run r3 = run("props", "--fluid", "propane", "--temperature", "300", "--pressure", "10 bara");
+        assertEquals(2, r3.code());
+        assertTrue(r3.err().contains("--temperature"), r3.err());
+        Run r4 = run("sat", "--fluid", "propane", "--temperature", "120 C");
+        assertEquals(2, r4.code());
+        assertTrue(r4.err().contains("--temperature") && r4.err().contains("critical"), r4.err());
+        Run r5 = run("props", "--fluid", "propane", "--temperature", "300 K", "--pressure", "10 bara", "--eos", "XYZ");
+        assertEquals(2, r5.code());
+        assertTrue(r5.err().contains("--eos"), r5.err());
+        Run r6 = run("props", "--temperature", "300 K");
+        assertEquals(2, r6.code());
+        assertFalse(r6.err().isBlank());
+    }
+
+    @Test
+    void vesselJsonAndMessages() throws Exception {
+        Run r = run("vessel", "--shape", "horizontal", "--diameter", "3.2 m", "--length", "12 m", "--heads", "2:1",
+                "--level", "100 %", "--elevation", "1.2 m", "--json");
+        assertEquals(0, r.code(), r.err());
+        JsonNode n = json(r.out());
+        // Full vessel: wetted area equals the total inside area (identity).
+        assertEquals(n.get("totalInsideArea_m2").asDouble(), n.get("wettedArea_m2").asDouble(), 1e-9);
+        // Hand calculation: cylinder pi*1.6^2*12 = 96.510 m3 plus two 2:1 heads pi*3.2^3/24*2 = 8.579 m3
+        assertEquals(105.089, n.get("totalVolume_m3").asDouble(), 0.001);
+        Run bad = run("vessel", "--shape", "horizontal", "--diameter", "-3 m", "--length", "12 m", "--level", "50 %");
+        assertEquals(2, bad.code());
+        assertTrue(bad.err().contains("diameter"), bad.err());
+        Run high = run("vessel", "--shape", "sphere", "--diameter", "10 m", "--level", "12 m");
+        assertEquals(2, high.code());
+        assertTrue(high.err().contains("level"), high.err());
+    }
+}
