@@ -53,6 +53,14 @@ public record Component(String name, String formula, String cas, List<String> al
         }
     }
 
+    /**
+     * Whether the formula has carbon and hydrogen only (the scope of the published minimum
+     * latent heat for near-critical hydrocarbons).
+     */
+    public boolean isHydrocarbon() {
+        return formula.matches("C\\d*H\\d*") && formula.startsWith("C") && formula.contains("H");
+    }
+
     /** Molar mass in kg/mol (SI inside the calculations). */
     public double molarMassKgPerMol() {
         return molarMass * 1e-3;
