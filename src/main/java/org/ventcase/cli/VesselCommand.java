@@ -26,7 +26,7 @@ import picocli.CommandLine.Spec;
                 + "fire height above grade (API Std 521 / ISO 23251: 7.6 m by default).",
                 "Heads: " + Specs.HEAD_FORMS + ".",
                 "Example: ventcase vessel --shape horizontal --diameter \"3.2 m\" --length \"12 m\" "
-                        + "--heads 2:1 --level \"65 %\" --elevation \"1.2 m\""},
+                        + "--heads 2:1 --level \"65 %%\" --elevation \"1.2 m\""},
         footer = ExitCode.HELP_LIST)
 final class VesselCommand implements Callable<Integer> {
 
@@ -53,8 +53,8 @@ final class VesselCommand implements Callable<Integer> {
     String secondHead;
 
     @Option(names = "--level", required = true, paramLabel = "LEVEL",
-            description = "Liquid level: a height (\"2.1 m\"), % of height (\"65 %\" or \"65 %h\") or % of volume "
-                    + "(\"70 %v\").")
+            description = "Liquid level: a height (\"2.1 m\"), %% of height (\"65 %%\" or \"65 %%h\") or %% of volume "
+                    + "(\"70 %%v\").")
     String level;
 
     @Option(names = "--elevation", paramLabel = "Z", defaultValue = "0 m",
