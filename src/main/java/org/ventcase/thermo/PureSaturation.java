@@ -143,7 +143,7 @@ public final class PureSaturation {
                             + "liquid and vapour are not distinct enough to compute; treat the fluid as near-critical",
                     t, tc - t, component.name(), tc, tr, MAX_TR));
         }
-        if (tr < MIN_TR) {
+        if (tr < MIN_TR * (1 - 1e-12)) {
             throw new NoSolutionException("temperature", String.format(Locale.ROOT,
                     "%.6g K is below Tr = %.2f for %s: below the range the equation of state is used for", t,
                     MIN_TR, component.name()));

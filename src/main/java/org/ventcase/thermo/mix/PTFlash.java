@@ -486,6 +486,20 @@ public final class PTFlash {
                 method, warnings);
     }
 
+    /** Liquid and vapour of one component at its saturation point (roots given). */
+    FlashResult pureTwoPhase(double t, double p, double[] z, double beta, double zL, double zV, StabilityResult stab,
+                             List<String> warnings) {
+        MixParams m = model.mix(t, z);
+        String crit = "one component at its saturation temperature: liquid and vapour roots";
+        MixturePhase liq = phase(t, p, z, 1 - beta, m, zL, PhaseLabel.LIQUID, crit, DensityBasis.TRANSLATED, warnings);
+        MixturePhase vap = phase(t, p, z, beta, m, zV, PhaseLabel.VAPOR, crit, DensityBasis.TRANSLATED, warnings);
+        cpRangeWarnings(t, z, warnings);
+        double h = (1 - beta) * liq.enthalpyJmol() + beta * vap.enthalpyJmol();
+        double s = (1 - beta) * liq.entropyJmolK() + beta * vap.entropyJmolK();
+        return new FlashResult(t, p, z, beta, List.of(liq, vap), h, s, model.molarMass(z), stab, 0, 0, 0,
+                "pure-fluid saturation (equal fugacity) and lever rule", warnings);
+    }
+
     private MixturePhase phase(double t, double p, double[] x, double amount, MixParams m, double z, PhaseLabel label,
                                String crit, DensityBasis basis, List<String> warnings) {
         double vCubic = z * R * t / p;
