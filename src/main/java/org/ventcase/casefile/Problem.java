@@ -39,7 +39,7 @@ public record Problem(String path, String value, String accepted, String domainF
 
     /** One line: path, value and what is accepted. */
     public String message() {
-        return path + ": " + (value == null ? "missing" : "'" + value + "'") + " is not accepted; " + accepted;
+        return path + ": " + (value == null ? "missing; " : "'" + value + "' is not accepted; ") + accepted;
     }
 
     @Override

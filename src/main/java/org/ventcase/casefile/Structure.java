@@ -53,7 +53,8 @@ final class Structure {
             String p = Names.child(path, name);
             if (!known.contains(name)) {
                 String hint = Names.nearest(name, known).map(n -> "did you mean '" + n + "'? ").orElse("");
-                out.add(Problem.of(p, Names.shorten(node.get(name).toString()),
+                JsonNode given = node.get(name);
+                out.add(Problem.of(p, Names.shorten(given.isTextual() ? given.textValue() : given.toString()),
                         "unknown field; " + hint + "fields here: " + String.join(", ", known)));
                 node.remove(name);
                 continue;
