@@ -1,0 +1,89 @@
+package org.ventcase.casefile;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.Set;
+
+import org.ventcase.relief.ScenarioKind;
+
+/**
+ * The scenario types a case file may list, with the fields each one uses. A field of
+ * {@link Case.Scenario} that the type does not use is refused rather than ignored, so that a
+ * value typed for the wrong scenario is never silently dropped.
+ */
+public enum ScenarioType {
+    /** Wetted vessel in a pool fire; relief rate = heat input / latent heat. */
+    FIRE_WETTED("fire-wetted", ScenarioKind.FIRE, Set.of("fireFighting", "environmentFactor", "insulationCredit")),
+    /** Wetted vessel in a pool fire with near-critical or supercritical contents (stepwise heat-up). */
+    FIRE_NEAR_CRITICAL("fire-near-critical", ScenarioKind.FIRE,
+            Set.of("fireFighting", "environmentFactor", "insulationCredit")),
+    /**
+     * Fire on atmospheric or low-pressure storage: heat input from the NFPA 30 / API Std 2000
+     * table, boil-off at the relieving pressure.
+     */
+    FIRE_BOIL_OFF("fire-boil-off", ScenarioKind.FIRE, Set.of("environmentFactor", "insulationCredit")),
+    /** Gas-filled (unwetted) vessel in a pool fire. */
+    FIRE_GAS_FILLED("fire-gas-filled", ScenarioKind.FIRE, Set.of("wallTemperature")),
+    /** Inflow that cannot leave through a closed or blocked outlet. */
+    BLOCKED_OUTLET("blocked-outlet", ScenarioKind.NON_FIRE, Set.of("inflow", "inflowPhase")),
+    /** Blocked-in liquid heated from outside (hydraulic expansion). */
+    THERMAL_EXPANSION("thermal-expansion", ScenarioKind.NON_FIRE, Set.of("heatInput", "blockedInVolume"));
+
+    /** Fields every scenario may carry. */
+    public static final Set<String> COMMON_FIELDS = Set.of("type", "label");
+
+    private final String key;
+    private final ScenarioKind kind;
+    private final Set<String> fields;
+
+    ScenarioType(String key, ScenarioKind kind, Set<String> fields) {
+        this.key = key;
+        this.kind = kind;
+        this.fields = fields;
+    }
+
+    /** The text used in case files, e.g. {@code fire-wetted}. */
+    public String key() {
+        return key;
+    }
+
+    /** Fire or non-fire, for the allowable accumulation. */
+    public ScenarioKind kind() {
+        return kind;
+    }
+
+    /** The fields of {@link Case.Scenario} this type uses besides {@code type} and {@code label}. */
+    public Set<String> fields() {
+        return fields;
+    }
+
+    /** Whether the vessel must hold liquid for this type. */
+    public boolean needsLiquid() {
+        return this == FIRE_WETTED || this == FIRE_NEAR_CRITICAL || this == FIRE_BOIL_OFF || this == THERMAL_EXPANSION;
+    }
+
+    /** The type with this key, if any. */
+    public static Optional<ScenarioType> byKey(String key) {
+        if (key == null) {
+            return Optional.empty();
+        }
+        String k = key.trim().toLowerCase(Locale.ROOT);
+        for (ScenarioType t : values()) {
+            if (t.key.equals(k)) {
+                return Optional.of(t);
+            }
+        }
+        return Optional.empty();
+    }
+
+    /** All keys, for messages. */
+    public static List<String> keys() {
+        List<String> out = new ArrayList<>();
+        for (ScenarioType t : values()) {
+            out.add(t.key);
+        }
+        return out;
+    }
+}
