@@ -174,4 +174,130 @@ public final class JsonReports {
         s.vessel().outsideArea().ifPresent(a -> n.put("totalOutsideArea_m2", a));
         return n;
     }
+
+    // ---------------------------------------------------------------- mixtures
+
+    private static ObjectNode fractions(java.util.List<Component> comps, double[] x) {
+        ObjectNode n = MAPPER.createObjectNode();
+        for (int i = 0; i < x.length; i++) {
+            n.put(comps.get(i).name(), x[i]);
+        }
+        return n;
+    }
+
+    private static void fluidBlock(ObjectNode n, org.ventcase.thermo.mix.MixtureModel mm, double[] feed) {
+        n.put("eos", mm.model().variant().name());
+        n.put("eosName", mm.model().variant().displayName());
+        ArrayNode comps = MAPPER.createArrayNode();
+        for (Component c : mm.model().components()) {
+            comps.add(component(c));
+        }
+        n.set("components", comps);
+        n.set("feed", fractions(mm.model().components(), feed));
+        ArrayNode k = MAPPER.createArrayNode();
+        ArrayNode ks = MAPPER.createArrayNode();
+        double[][] kij = mm.kij().kij();
+        String[][] src = mm.kij().sources();
+        for (int i = 0; i < kij.length; i++) {
+            k.add(array(kij[i]));
+            ArrayNode row = MAPPER.createArrayNode();
+            for (String x : src[i]) {
+                row.add(x == null ? "" : x);
+            }
+            ks.add(row);
+        }
+        n.set("kij", k);
+        n.set("kijSources", ks);
+    }
+
+    /** Contract of {@code ventcase flash --json}. */
+    public static ObjectNode flash(org.ventcase.thermo.mix.MixtureModel mm, org.ventcase.thermo.mix.FlashResult f) {
+        ObjectNode n = MAPPER.createObjectNode();
+        fluidBlock(n, mm, f.feed());
+        n.put("temperature_K", f.temperatureK());
+        n.put("pressure_Pa", f.pressurePa());
+        n.put("vaporFraction", f.vaporFraction());
+        n.put("stable", f.stability().stable());
+        n.put("minimumTangentPlaneDistance", f.stability().minimumTpd());
+        n.put("enthalpy_J_mol", f.enthalpyJmol());
+        n.put("entropy_J_molK", f.entropyJmolK());
+        n.put("molarMass_kg_kmol", f.molarMass());
+        ArrayNode phases = MAPPER.createArrayNode();
+        for (org.ventcase.thermo.mix.MixturePhase ph : f.phases()) {
+            ObjectNode p = MAPPER.createObjectNode();
+            p.put("phase", ph.label().label());
+            p.put("phaseCriterion", ph.labelCriterion());
+            p.put("moleFraction", ph.amount());
+            p.set("composition", fractions(mm.model().components(), ph.composition()));
+            p.put("Z", ph.z());
+            p.put("density_kg_m3", ph.density());
+            p.put("densityBasis", ph.densityBasis().label());
+            p.put("densityCubic_kg_m3", ph.densityCubic());
+            p.put("molarVolume_m3_mol", ph.molarVolume());
+            p.put("molarMass_kg_kmol", ph.molarMass());
+            p.put("enthalpy_J_mol", ph.enthalpyJmol());
+            p.put("entropy_J_molK", ph.entropyJmolK());
+            phases.add(p);
+        }
+        n.set("phases", phases);
+        n.put("method", f.method());
+        java.util.List<String> w = new java.util.ArrayList<>(mm.kij().warnings());
+        w.addAll(f.warnings());
+        n.set("warnings", strings(w));
+        return n;
+    }
+
+    /** Contract of {@code ventcase sat --json} for a mixture (bubble or dew point). */
+    public static ObjectNode saturationPoint(org.ventcase.thermo.mix.MixtureModel mm,
+                                             org.ventcase.thermo.mix.SaturationPoint s) {
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("kind", s.kind().name().toLowerCase(java.util.Locale.ROOT));
+        fluidBlock(n, mm, s.feed());
+        n.put("temperature_K", s.temperatureK());
+        n.put("pressure_Pa", s.pressurePa());
+        n.set("incipientComposition", fractions(mm.model().components(), s.incipientComposition()));
+        n.set("kValues", fractions(mm.model().components(), s.kValues()));
+        n.put("iterations", s.iterations());
+        java.util.List<String> w = new java.util.ArrayList<>(mm.kij().warnings());
+        w.addAll(s.warnings());
+        n.set("warnings", strings(w));
+        return n;
+    }
+
+    private static ObjectNode statePoint(org.ventcase.thermo.mix.PhaseEnvelope.StatePoint p) {
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("temperature_K", p.temperatureK());
+        n.put("pressure_Pa", p.pressurePa());
+        n.put("method", p.method());
+        return n;
+    }
+
+    /** Contract of {@code ventcase envelope --json}. */
+    public static ObjectNode envelope(org.ventcase.thermo.mix.MixtureModel mm, double[] feed,
+                                      org.ventcase.thermo.mix.PhaseEnvelope.Result r) {
+        ObjectNode n = MAPPER.createObjectNode();
+        fluidBlock(n, mm, feed);
+        ArrayNode pts = MAPPER.createArrayNode();
+        for (org.ventcase.thermo.mix.PhaseEnvelope.Point p : r.points()) {
+            ObjectNode o = MAPPER.createObjectNode();
+            o.put("branch", p.branch().name().toLowerCase(java.util.Locale.ROOT));
+            o.put("temperature_K", p.temperatureK());
+            o.put("pressure_Pa", p.pressurePa());
+            o.put("vaporFraction", p.vaporFraction());
+            pts.add(o);
+        }
+        n.set("points", pts);
+        java.util.List<String> w = new java.util.ArrayList<>(mm.kij().warnings());
+        w.addAll(r.warnings());
+        if (r.criticalPoint().isPresent()) {
+            n.set("criticalPoint", statePoint(r.criticalPoint().get()));
+        } else {
+            n.putNull("criticalPoint");
+            w.add("The critical point was not located on the traced curve.");
+        }
+        n.set("cricondenbar", statePoint(r.cricondenbar()));
+        n.set("cricondentherm", statePoint(r.cricondentherm()));
+        n.set("warnings", strings(w));
+        return n;
+    }
 }

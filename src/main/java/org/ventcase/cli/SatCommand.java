@@ -34,9 +34,11 @@ final class SatCommand implements Callable<Integer> {
     @Mixin
     CommonOptions common;
 
-    @Option(names = "--fluid", required = true, paramLabel = "NAME",
-            description = "Component by name, formula or CAS number.")
-    String fluid;
+    @Mixin
+    FluidOptions fluidOptions;
+
+    @Option(names = "--dew", description = "For a mixture: the dew point instead of the bubble point.")
+    boolean dew;
 
     @ArgGroup(exclusive = true, multiplicity = "1")
     Given given;
@@ -52,7 +54,11 @@ final class SatCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Component c = ComponentLibrary.builtIn().get("--fluid", fluid);
+        org.ventcase.thermo.Compositions.Parsed parsed = fluidOptions.composition();
+        if (!parsed.isPure()) {
+            return mixture(parsed);
+        }
+        Component c = parsed.components().get(0);
         PureSaturation sat = new PureSaturation(CubicModel.pure(common.variant(), c));
         SaturationResult s;
         if (given.temperature != null) {
@@ -80,6 +86,49 @@ final class SatCommand implements Callable<Integer> {
         tx.row("Source of constants", c.criticalSource());
         tx.warnings(s.warnings());
         return ExitCode.OK;
+    }
+
+    private int mixture(org.ventcase.thermo.Compositions.Parsed parsed) {
+        org.ventcase.thermo.mix.MixtureModel mm = fluidOptions.model(parsed, common.variant());
+        org.ventcase.thermo.mix.SaturationPoints sp = new org.ventcase.thermo.mix.SaturationPoints(mm.model());
+        double[] z = parsed.fractions();
+        org.ventcase.thermo.mix.SaturationPoint s;
+        if (given.temperature != null) {
+            double t = Units.temperatureK("--temperature", given.temperature);
+            s = relabel(() -> dew ? sp.dewPressure(t, z) : sp.bubblePressure(t, z), "--temperature");
+        } else {
+            double p = Units.parsePressure("--pressure", given.pressure, common.atmosphericPa());
+            s = relabel(() -> dew ? sp.dewTemperature(p, z) : sp.bubbleTemperature(p, z), "--pressure");
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        if (common.json) {
+            out.print(JsonReports.write(JsonReports.saturationPoint(mm, s)));
+            return ExitCode.OK;
+        }
+        Text tx = new Text(out);
+        tx.title(String.format(Locale.ROOT, "%s point of %s  [%s]", dew ? "Dew" : "Bubble", fluidOptions.fluid,
+                mm.model().variant().displayName()));
+        tx.row("Temperature", Text.temperature(s.temperatureK()));
+        tx.row("Pressure", Text.pressure(s.pressurePa(), common.atmosphericPa()));
+        double[] y = s.incipientComposition();
+        double[] k = s.kValues();
+        for (int i = 0; i < y.length; i++) {
+            tx.row((dew ? "Incipient liquid " : "Incipient vapour ") + mm.model().components().get(i).name(),
+                    "%.5f (K = %.4g)", y[i], k[i]);
+        }
+        java.util.List<String> w = new java.util.ArrayList<>(mm.kij().warnings());
+        w.addAll(s.warnings());
+        tx.warnings(w);
+        return ExitCode.OK;
+    }
+
+    private static <T> T relabel(java.util.function.Supplier<T> f, String option) {
+        try {
+            return f.get();
+        } catch (org.ventcase.common.NoSolutionException e) {
+            String m = e.getMessage();
+            throw new org.ventcase.common.NoSolutionException(option, m.substring(m.indexOf(':') + 2));
+        }
     }
 
     /** Re-labels a core message about "temperature"/"pressure" with the option the user typed. */

@@ -1,0 +1,90 @@
+package org.ventcase.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+import org.ventcase.casefile.JsonReports;
+import org.ventcase.thermo.Compositions;
+import org.ventcase.thermo.mix.MixtureModel;
+import org.ventcase.thermo.mix.PhaseEnvelope;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+
+/** {@code ventcase envelope}: bubble and dew curves of a mixture with its critical point. */
+@Command(name = "envelope", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+        header = "Phase envelope of a mixture: bubble and dew curves, critical point, cricondenbar, cricondentherm.",
+        description = {"Traced by continuation from low pressure through the critical point.",
+                "Example: ventcase envelope --fluid \"propane:0.7,n-butane:0.3\" --csv envelope.csv"},
+        footer = ExitCode.HELP_LIST)
+final class EnvelopeCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Mixin
+    CommonOptions common;
+
+    @Mixin
+    FluidOptions fluid;
+
+    @Option(names = "--csv", paramLabel = "FILE", description = "Also write the points as CSV (written atomically).")
+    Path csv;
+
+    @Override
+    public Integer call() throws IOException {
+        Compositions.Parsed c = fluid.composition();
+        MixtureModel mm = fluid.model(c, common.variant());
+        PhaseEnvelope.Result r = new PhaseEnvelope(mm.model()).trace(c.fractions());
+        if (csv != null) {
+            StringBuilder sb = new StringBuilder("branch,temperature_K,pressure_Pa\n");
+            for (PhaseEnvelope.Point p : r.points()) {
+                sb.append(p.branch().name().toLowerCase(Locale.ROOT)).append(',').append(p.temperatureK()).append(',')
+                        .append(p.pressurePa()).append('\n');
+            }
+            Path target = csv.toAbsolutePath();
+            Path tmp = Files.createTempFile(target.getParent(), ".ventcase-", ".tmp");
+            try {
+                Files.writeString(tmp, sb);
+                try {
+                    Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+                } catch (java.nio.file.AtomicMoveNotSupportedException e) {
+                    Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
+                }
+            } finally {
+                Files.deleteIfExists(tmp);
+            }
+        }
+        PrintWriter out = spec.commandLine().getOut();
+        if (common.json) {
+            out.print(JsonReports.write(JsonReports.envelope(mm, c.fractions(), r)));
+            return ExitCode.OK;
+        }
+        Text tx = new Text(out);
+        tx.title("Phase envelope of " + fluid.fluid + "  [" + mm.model().variant().displayName() + "]");
+        tx.row("Points traced", "%d", r.points().size());
+        r.criticalPoint().ifPresentOrElse(
+                cp -> tx.row("Critical point", "%s, %s", Text.temperature(cp.temperatureK()),
+                        Text.pressure(cp.pressurePa(), common.atmosphericPa())),
+                () -> tx.row("Critical point", "not located (see warnings)"));
+        tx.row("Cricondenbar", "%s at %s", Text.pressure(r.cricondenbar().pressurePa(), common.atmosphericPa()),
+                Text.temperature(r.cricondenbar().temperatureK()));
+        tx.row("Cricondentherm", "%s at %s", Text.temperature(r.cricondentherm().temperatureK()),
+                Text.pressure(r.cricondentherm().pressurePa(), common.atmosphericPa()));
+        if (csv != null) {
+            tx.row("CSV written", csv.toString());
+        }
+        java.util.List<String> w = new java.util.ArrayList<>(mm.kij().warnings());
+        w.addAll(r.warnings());
+        tx.warnings(w);
+        return ExitCode.OK;
+    }
+}
