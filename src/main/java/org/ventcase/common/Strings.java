@@ -1,0 +1,31 @@
+package org.ventcase.common;
+
+/** Small text helpers shared by the lookups that suggest the nearest known name. */
+public final class Strings {
+
+    private Strings() {
+    }
+
+    /**
+     * Levenshtein edit distance (insertions, deletions and substitutions each cost 1), by the
+     * two-row dynamic programme. Source: V.I. Levenshtein, Soviet Physics Doklady 10 (1966) 707.
+     */
+    public static int editDistance(String a, String b) {
+        int[] prev = new int[b.length() + 1];
+        int[] cur = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            prev[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            cur[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
+                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + cost);
+            }
+            int[] t = prev;
+            prev = cur;
+            cur = t;
+        }
+        return prev[b.length()];
+    }
+}
