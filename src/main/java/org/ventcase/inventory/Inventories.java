@@ -225,9 +225,10 @@ public final class Inventories {
                     bp = new SaturationPoints(model).bubblePressure(t, xa);
                 } catch (NoSolutionException e) {
                     throw new NoSolutionException("storage.temperature", String.format(Locale.ROOT,
-                            "no bubble point of the stored liquid at %s (Kay's pseudo-critical temperature %s): at "
-                                    + "this temperature the liquid is above its critical region or does not exist as "
-                                    + "a saturated liquid; give the pressure and use specified or gas storage "
+                            "no bubble point of the stored liquid was found at %s: the liquid may be above its "
+                                    + "critical region (Kay's pseudo-critical temperature %s; the true mixture critical "
+                                    + "temperature can differ), or too near it for the bubble-point iteration; no "
+                                    + "saturated inventory is given. Give the pressure and use specified or gas storage "
                                     + "instead (%s)", kelvinC(t), kelvinC(tpc), message(e)));
                 }
                 if (t >= tpc) {
