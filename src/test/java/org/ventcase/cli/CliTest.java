@@ -41,7 +41,7 @@ class CliTest {
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"props", "sat", "vessel"})
+    @ValueSource(strings = {"props", "sat", "vessel", "inventory"})
     void everyCommandHasHelpAndVersion(String cmd) {
         Run h = run(cmd, "--help");
         assertEquals(0, h.code());
