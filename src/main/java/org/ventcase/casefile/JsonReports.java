@@ -8,6 +8,10 @@ import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
+import org.ventcase.common.TraceStep;
+import org.ventcase.inventory.Inventory;
+import org.ventcase.inventory.LiquidFullCheck;
+import org.ventcase.inventory.PhaseInventory;
 import org.ventcase.thermo.Component;
 import org.ventcase.thermo.FluidProperties;
 import org.ventcase.thermo.SaturationResult;
@@ -299,5 +303,120 @@ public final class JsonReports {
         n.set("cricondentherm", statePoint(r.cricondentherm()));
         n.set("warnings", strings(w));
         return n;
+    }
+    /**
+     * Contract of {@code ventcase inventory --json}: the fluid model, the storage state, the vessel
+     * block (as {@code vessel --json}), each phase, totals, the liquid-full check, the trace and the
+     * warnings. A phase that does not exist (the liquid of a gas-filled vessel) and a figure not
+     * computed are {@code null}.
+     */
+    public static ObjectNode inventory(Inventory inv) {
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("mode", inv.mode().label());
+        n.put("eos", inv.fluid().variant().name());
+        n.put("eosName", inv.fluid().variant().displayName());
+        n.put("densityBasis", inv.fluid().densityBasis().label());
+        n.put("temperature_K", inv.temperatureK());
+        n.put("pressure_Pa", inv.pressurePa());
+        n.set("composition", fractions(inv.fluid().composition().asMap()));
+        ArrayNode comps = MAPPER.createArrayNode();
+        inv.fluid().components().forEach(c -> comps.add(component(c)));
+        n.set("components", comps);
+        ArrayNode kij = MAPPER.createArrayNode();
+        double[][] k = inv.fluid().kij().kij();
+        String[][] src = inv.fluid().kij().sources();
+        List<Component> cs = inv.fluid().components();
+        for (int i = 0; i < cs.size(); i++) {
+            for (int j = i + 1; j < cs.size(); j++) {
+                ObjectNode e = MAPPER.createObjectNode();
+                e.put("first", cs.get(i).name());
+                e.put("second", cs.get(j).name());
+                e.put("kij", k[i][j]);
+                e.put("source", src[i][j]);
+                kij.add(e);
+            }
+        }
+        n.set("kij", kij);
+        n.set("vessel", vessel(inv.vessel(), inv.exposure().bottomElevation(), inv.exposure().fireHeight()));
+        if (inv.liquid().isPresent()) {
+            n.set("liquid", phase(inv.liquid().get()));
+        } else {
+            n.putNull("liquid");
+        }
+        n.set("vapor", phase(inv.vapour()));
+        ObjectNode tot = MAPPER.createObjectNode();
+        tot.put("mass_kg", inv.totalMassKg());
+        tot.put("moles_mol", inv.totalMoles());
+        tot.put("liquidMass_kg", inv.liquidMassKg());
+        tot.put("vaporMass_kg", inv.vapourMassKg());
+        tot.set("massPerComponent_kg", fractions(inv.massPerComponentKg()));
+        n.set("totals", tot);
+        if (inv.rackettLiquidDensity().isPresent()) {
+            n.put("rackettLiquidDensity_kg_m3", inv.rackettLiquidDensity().getAsDouble());
+        } else {
+            n.putNull("rackettLiquidDensity_kg_m3");
+        }
+        if (inv.liquidFull().isPresent()) {
+            LiquidFullCheck c = inv.liquidFull().get();
+            ObjectNode f = MAPPER.createObjectNode();
+            f.put("relievingPressure_Pa", c.relievingPressurePa());
+            f.put("relievingTemperature_K", c.relievingTemperatureK());
+            f.put("liquidDensityAtRelief_kg_m3", c.liquidDensityAtReliefKgM3());
+            f.put("densityBasis", c.densityBasis().label());
+            f.put("liquidVolumeAtRelief_m3", c.liquidVolumeAtReliefM3());
+            f.put("vesselVolume_m3", c.vesselVolumeM3());
+            f.put("fillsBeforeRelief", c.fillsBeforeRelief());
+            if (c.liquidFullTemperatureK().isPresent()) {
+                f.put("liquidFullTemperature_K", c.liquidFullTemperatureK().getAsDouble());
+            } else {
+                f.putNull("liquidFullTemperature_K");
+            }
+            f.put("method", c.method());
+            n.set("liquidFull", f);
+        } else {
+            n.putNull("liquidFull");
+        }
+        n.set("trace", trace(inv.trace()));
+        n.set("warnings", strings(inv.warnings()));
+        return n;
+    }
+
+    private static ObjectNode phase(PhaseInventory p) {
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("volume_m3", p.volumeM3());
+        n.put("density_kg_m3", p.densityKgM3());
+        n.put("densityBasis", p.densityBasis().label());
+        n.put("Z", p.z());
+        n.put("mass_kg", p.massKg());
+        n.put("moles_mol", p.moles());
+        n.put("molarMass_kg_kmol", p.molarMassKgKmol());
+        n.set("composition", fractions(p.composition().asMap()));
+        n.set("massPerComponent_kg", fractions(p.massPerComponentKg()));
+        return n;
+    }
+
+    private static ObjectNode fractions(java.util.Map<String, Double> m) {
+        ObjectNode n = MAPPER.createObjectNode();
+        m.forEach(n::put);
+        return n;
+    }
+
+    private static ArrayNode trace(List<TraceStep> steps) {
+        ArrayNode a = MAPPER.createArrayNode();
+        for (TraceStep s : steps) {
+            ObjectNode n = MAPPER.createObjectNode();
+            n.put("title", s.title());
+            n.put("equation", s.equation());
+            n.put("source", s.source());
+            ObjectNode in = MAPPER.createObjectNode();
+            s.inputs().forEach(in::put);
+            n.set("inputs", in);
+            ObjectNode out = MAPPER.createObjectNode();
+            s.outputs().forEach(out::put);
+            n.set("outputs", out);
+            n.set("notes", strings(s.notes()));
+            a.add(n);
+        }
+        return a;
     }
 }

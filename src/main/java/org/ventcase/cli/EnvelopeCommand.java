@@ -41,7 +41,7 @@ final class EnvelopeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws IOException {
-        Compositions.Parsed c = fluid.composition();
+        org.ventcase.thermo.Composition c = fluid.composition();
         MixtureModel mm = fluid.model(c, common.variant());
         PhaseEnvelope.Result r = new PhaseEnvelope(mm.model()).trace(c.fractions());
         if (csv != null) {

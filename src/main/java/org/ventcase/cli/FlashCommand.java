@@ -47,7 +47,7 @@ final class FlashCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        Compositions.Parsed c = fluid.composition();
+        org.ventcase.thermo.Composition c = fluid.composition();
         MixtureModel mm = fluid.model(c, common.variant());
         double t = Units.temperatureK("--temperature", temperature);
         double p = Units.parsePressure("--pressure", pressure, common.atmosphericPa());

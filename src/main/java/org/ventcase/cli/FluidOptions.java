@@ -26,11 +26,11 @@ final class FluidOptions {
             description = "Override a binary interaction parameter, e.g. \"carbon dioxide/propane=0.12\"; repeatable.")
     List<String> kij;
 
-    Compositions.Parsed composition() {
+    org.ventcase.thermo.Composition composition() {
         return Compositions.parse("--fluid", fluid, normalize);
     }
 
-    MixtureModel model(Compositions.Parsed c, EosVariant v) {
+    MixtureModel model(org.ventcase.thermo.Composition c, EosVariant v) {
         Map<KijTable.Pair, Double> overrides = new LinkedHashMap<>();
         if (kij != null) {
             for (String s : kij) {

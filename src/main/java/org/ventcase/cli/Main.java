@@ -27,7 +27,7 @@ import picocli.CommandLine.Spec;
                         + "the applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) "
                         + "and local regulations."},
         subcommands = {DemoCommand.class, PropsCommand.class, SatCommand.class, VesselCommand.class,
-                FlashCommand.class, EnvelopeCommand.class, NewCommand.class, CheckCommand.class,
+                InventoryCommand.class, FlashCommand.class, EnvelopeCommand.class, NewCommand.class, CheckCommand.class,
                 CommandLine.HelpCommand.class},
         footer = ExitCode.HELP_LIST)
 public final class Main implements Callable<Integer> {

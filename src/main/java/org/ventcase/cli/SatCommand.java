@@ -54,8 +54,8 @@ final class SatCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        org.ventcase.thermo.Compositions.Parsed parsed = fluidOptions.composition();
-        if (!parsed.isPure()) {
+        org.ventcase.thermo.Composition parsed = fluidOptions.composition();
+        if (parsed.size() != 1) {
             return mixture(parsed);
         }
         Component c = parsed.components().get(0);
@@ -88,7 +88,7 @@ final class SatCommand implements Callable<Integer> {
         return ExitCode.OK;
     }
 
-    private int mixture(org.ventcase.thermo.Compositions.Parsed parsed) {
+    private int mixture(org.ventcase.thermo.Composition parsed) {
         org.ventcase.thermo.mix.MixtureModel mm = fluidOptions.model(parsed, common.variant());
         org.ventcase.thermo.mix.SaturationPoints sp = new org.ventcase.thermo.mix.SaturationPoints(mm.model());
         double[] z = parsed.fractions();

@@ -5,16 +5,12 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import org.ventcase.casefile.JsonReports;
-import org.ventcase.common.InvalidInputException;
-import org.ventcase.units.Dimension;
-import org.ventcase.units.Units;
-import org.ventcase.vessel.FireExposure;
-import org.ventcase.vessel.Head;
 import org.ventcase.vessel.LevelState;
 import org.ventcase.vessel.Specs;
 import org.ventcase.vessel.Vessel;
 
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
@@ -33,61 +29,18 @@ final class VesselCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Option(names = "--shape", required = true, paramLabel = "SHAPE",
-            description = "horizontal, vertical or sphere.")
-    String shape;
-
-    @Option(names = "--diameter", required = true, paramLabel = "D", description = "Inside diameter (e.g. \"3.2 m\").")
-    String diameter;
-
-    @Option(names = "--length", paramLabel = "L",
-            description = "Tangent-to-tangent length of the cylindrical shell (cylinders only).")
-    String length;
-
-    @Option(names = "--heads", paramLabel = "HEAD", defaultValue = "2:1",
-            description = "Both heads (default ${DEFAULT-VALUE}); see the forms above.")
-    String heads;
-
-    @Option(names = "--second-head", paramLabel = "HEAD",
-            description = "A different top (vertical) or right-hand (horizontal) head.")
-    String secondHead;
-
-    @Option(names = "--level", required = true, paramLabel = "LEVEL",
-            description = "Liquid level: a height (\"2.1 m\"), %% of height (\"65 %%\" or \"65 %%h\") or %% of volume "
-                    + "(\"70 %%v\").")
-    String level;
-
-    @Option(names = "--elevation", paramLabel = "Z", defaultValue = "0 m",
-            description = "Height of the vessel's lowest inside point above grade (fire base). Default: ${DEFAULT-VALUE}.")
-    String elevation;
-
-    @Option(names = "--fire-height", paramLabel = "H", defaultValue = "7.6 m",
-            description = "Effective fire height above grade. Default: ${DEFAULT-VALUE} (API Std 521).")
-    String fireHeight;
-
-    @Option(names = "--skirt", description = "Exclude a vertical vessel's bottom head inside a skirt.")
-    boolean skirt;
-
-    @Option(names = "--wall", paramLabel = "T", description = "Wall thickness, for an outside-area figure only.")
-    String wall;
+    @Mixin
+    VesselOptions vesselOptions;
 
     @Option(names = "--json", description = "Print the documented JSON result instead of the table.")
     boolean json;
 
     @Override
     public Integer call() {
-        double d = Units.parse("--diameter", diameter, Dimension.LENGTH);
-        Vessel v = buildVessel(d);
-        if (wall != null) {
-            v = v.withWallThickness(Units.parse("--wall", wall, Dimension.LENGTH));
-        }
-        double z = Units.parse("--elevation", elevation, Dimension.LENGTH);
-        double hf = Units.parse("--fire-height", fireHeight, Dimension.LENGTH);
-        FireExposure fe = new FireExposure(z, hf, false);
-        if (skirt) {
-            fe = fe.excludingSkirtedBottomHead();
-        }
-        LevelState s = LevelState.of(v, Specs.level("--level", level), fe);
+        Vessel v = vesselOptions.vessel();
+        double z = vesselOptions.elevationM();
+        double hf = vesselOptions.fireHeightM();
+        LevelState s = LevelState.of(v, vesselOptions.level(), vesselOptions.exposure());
         PrintWriter out = spec.commandLine().getOut();
         if (json) {
             out.print(JsonReports.write(JsonReports.vessel(s, z, hf)));
@@ -106,25 +59,5 @@ final class VesselCommand implements Callable<Integer> {
         tx.row("Rule applied", s.fire().ruleApplied());
         v.outsideArea().ifPresent(a -> tx.row("Total outside area", String.format(Locale.ROOT, "%.4f m2", a)));
         return ExitCode.OK;
-    }
-
-    private Vessel buildVessel(double d) {
-        String sh = shape.trim().toLowerCase(Locale.ROOT);
-        if (sh.equals("sphere")) {
-            if (length != null) {
-                throw InvalidInputException.invalid("--length", length, "a sphere has no shell length; omit --length");
-            }
-            return Vessel.sphere(d);
-        }
-        if (!sh.equals("horizontal") && !sh.equals("vertical")) {
-            throw InvalidInputException.invalid("--shape", shape, "expected horizontal, vertical or sphere");
-        }
-        if (length == null) {
-            throw InvalidInputException.missing("--length", "a cylinder needs its tangent-to-tangent length, e.g. \"12 m\"");
-        }
-        double l = Units.parse("--length", length, Dimension.LENGTH);
-        Head h1 = Specs.head("--heads", heads, d);
-        Head h2 = secondHead == null ? h1 : Specs.head("--second-head", secondHead, d);
-        return sh.equals("horizontal") ? Vessel.horizontal(d, l, h1, h2) : Vessel.vertical(d, l, h1, h2);
     }
 }

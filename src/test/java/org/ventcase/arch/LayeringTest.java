@@ -34,6 +34,8 @@ class LayeringTest {
                     "org.apache.pdfbox", "javafx"),
             "device", List.of("org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli",
                     "org.apache.pdfbox", "javafx"),
+            "inventory", List.of("org.ventcase.relief", "org.ventcase.device", "org.ventcase.casefile",
+                    "org.ventcase.cli", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx"),
             "casefile", List.of("org.ventcase.cli", "picocli", "org.apache.pdfbox", "javafx"));
 
     @Test

@@ -41,7 +41,7 @@ class CliTest {
     }
 
     @ParameterizedTest
-    @ValueSource(strings = {"demo", "props", "sat", "vessel", "flash", "envelope", "new", "check"})
+    @ValueSource(strings = {"demo", "props", "sat", "vessel", "inventory", "flash", "envelope", "new", "check"})
     void everyCommandHasHelpAndVersion(String cmd) {
         Run h = run(cmd, "--help");
         assertEquals(0, h.code());
