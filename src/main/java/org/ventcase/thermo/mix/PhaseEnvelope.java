@@ -318,8 +318,9 @@ public final class PhaseEnvelope {
         for (int i = 0; i < n; i++) {
             wk.w[i] /= s;
         }
-        PhaseEval.lnPhi(model, t, p, z, bubbleRoots ? PhaseRequest.LIQUID : PhaseRequest.VAPOR, wk.lnPhiZ);
-        PhaseEval.lnPhi(model, t, p, wk.w, bubbleRoots ? PhaseRequest.VAPOR : PhaseRequest.LIQUID, wk.lnPhiW);
+        CubicModel.AtTemperature at = model.at(t);
+        PhaseEval.lnPhi(model, at, p, z, bubbleRoots ? PhaseRequest.LIQUID : PhaseRequest.VAPOR, wk.lnPhiZ);
+        PhaseEval.lnPhi(model, at, p, wk.w, bubbleRoots ? PhaseRequest.VAPOR : PhaseRequest.LIQUID, wk.lnPhiW);
         for (int i = 0; i < n; i++) {
             out[i] = x[i] + wk.lnPhiW[i] - wk.lnPhiZ[i];
         }

@@ -32,16 +32,7 @@ final class PhaseEval {
 
     /** Z of the requested root; the MixParams must be at (T, x). */
     static double chooseZ(CubicModel model, MixParams m, double p, PhaseRequest req) {
-        CubicRoots r = model.roots(m, p);
-        if (r.count() == 1 || req == PhaseRequest.LIQUID) {
-            return r.smallest();
-        }
-        if (req == PhaseRequest.VAPOR) {
-            return r.largest();
-        }
-        double zl = r.smallest();
-        double zv = r.largest();
-        return model.reducedResidualGibbs(m, p, zl) < model.reducedResidualGibbs(m, p, zv) ? zl : zv;
+        return model.chooseZ(m, p, req);
     }
 
     /** Whether Z is the smallest of several roots (for keeping the same branch under perturbation). */
@@ -58,7 +49,16 @@ final class PhaseEval {
      * x must be normalised.
      */
     static double lnPhi(CubicModel model, double t, double p, double[] x, PhaseRequest req, double[] out) {
-        MixParams m = model.mix(t, x);
+        return lnPhi(model, model.at(t), p, x, req, out);
+    }
+
+    /**
+     * ln phi at (at.t(), P, x) with the per-temperature parameters already evaluated; writes into
+     * {@code out} and returns Z. x must be normalised.
+     */
+    static double lnPhi(CubicModel model, CubicModel.AtTemperature at, double p, double[] x, PhaseRequest req,
+                        double[] out) {
+        MixParams m = model.mix(at, x);
         double z = chooseZ(model, m, p, req);
         model.lnPhi(m, p, z, out);
         return z;
@@ -67,9 +67,9 @@ final class PhaseEval {
     /**
      * ln phi and its ln P derivative at (T, P, x); returns Z.
      */
-    static double lnPhiAndDp(CubicModel model, double t, double p, double[] x, PhaseRequest req, double[] out,
-                             double[] dLnPhiDlnP) {
-        MixParams m = model.mix(t, x);
+    static double lnPhiAndDp(CubicModel model, CubicModel.AtTemperature at, double p, double[] x, PhaseRequest req,
+                             double[] out, double[] dLnPhiDlnP) {
+        MixParams m = model.mix(at, x);
         double z = chooseZ(model, m, p, req);
         model.lnPhi(m, p, z, out);
         dLnPhiDlnP(model, m, p, z, dLnPhiDlnP);
@@ -102,8 +102,8 @@ final class PhaseEval {
      * Phi_ij = N (d ln phi_i/d n_j)_{T,P} at composition x (N = 1), by forward differences on the
      * same root branch; symmetrised. Written into {@code phi} (n x n). {@code base} holds ln phi at x.
      */
-    static void dLnPhiDn(CubicModel model, double t, double p, double[] x, PhaseRequest branch, double[] base,
-                         double[][] phi, double[] scratchX, double[] scratchOut) {
+    static void dLnPhiDn(CubicModel model, CubicModel.AtTemperature at, double p, double[] x, PhaseRequest branch,
+                         double[] base, double[][] phi, double[] scratchX, double[] scratchOut) {
         int n = x.length;
         for (int j = 0; j < n; j++) {
             double h = 1e-6 * Math.max(x[j], 1e-3);
@@ -111,7 +111,7 @@ final class PhaseEval {
             for (int i = 0; i < n; i++) {
                 scratchX[i] = (x[i] + (i == j ? h : 0.0)) / sum;
             }
-            lnPhi(model, t, p, scratchX, branch, scratchOut);
+            lnPhi(model, at, p, scratchX, branch, scratchOut);
             for (int i = 0; i < n; i++) {
                 phi[i][j] = (scratchOut[i] - base[i]) / h;
             }

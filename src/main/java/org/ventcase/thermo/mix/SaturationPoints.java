@@ -144,6 +144,7 @@ public final class SaturationPoints {
         PhaseRequest feedRoot = bubble ? PhaseRequest.LIQUID : PhaseRequest.VAPOR;
         PhaseRequest incRoot = bubble ? PhaseRequest.VAPOR : PhaseRequest.LIQUID;
         double f = Double.NaN;
+        CubicModel.AtTemperature at = null;
         for (int it = 1; it <= MAX_ITER; it++) {
             // incipient composition from current K
             double s = 0;
@@ -157,12 +158,15 @@ public final class SaturationPoints {
             double dmax = 0;
             double sk = 0;
             double sum = 0;
+            if (at == null || at.t() != t) {
+                at = model.at(t);
+            }
             if (pressureFree) {
-                PhaseEval.lnPhiAndDp(model, t, p, z, feedRoot, lnPhiF, dF);
-                PhaseEval.lnPhiAndDp(model, t, p, w, incRoot, lnPhiW, dW);
+                PhaseEval.lnPhiAndDp(model, at, p, z, feedRoot, lnPhiF, dF);
+                PhaseEval.lnPhiAndDp(model, at, p, w, incRoot, lnPhiW, dW);
             } else {
-                PhaseEval.lnPhi(model, t, p, z, feedRoot, lnPhiF);
-                PhaseEval.lnPhi(model, t, p, w, incRoot, lnPhiW);
+                PhaseEval.lnPhi(model, at, p, z, feedRoot, lnPhiF);
+                PhaseEval.lnPhi(model, at, p, w, incRoot, lnPhiW);
             }
             double df = 0;
             for (int i = 0; i < n; i++) {
@@ -216,10 +220,12 @@ public final class SaturationPoints {
                 }
             } else {
                 double h = 1e-4 * t;
-                PhaseEval.lnPhi(model, t + h, p, z, feedRoot, lnPhiF);
-                PhaseEval.lnPhi(model, t + h, p, w, incRoot, lnPhiW);
-                PhaseEval.lnPhi(model, t - h, p, z, feedRoot, lnPhiF2);
-                PhaseEval.lnPhi(model, t - h, p, w, incRoot, lnPhiW2);
+                CubicModel.AtTemperature atPlus = model.at(t + h);
+                CubicModel.AtTemperature atMinus = model.at(t - h);
+                PhaseEval.lnPhi(model, atPlus, p, z, feedRoot, lnPhiF);
+                PhaseEval.lnPhi(model, atPlus, p, w, incRoot, lnPhiW);
+                PhaseEval.lnPhi(model, atMinus, p, z, feedRoot, lnPhiF2);
+                PhaseEval.lnPhi(model, atMinus, p, w, incRoot, lnPhiW2);
                 for (int i = 0; i < n; i++) {
                     double lkp = bubble ? lnPhiF[i] - lnPhiW[i] : lnPhiW[i] - lnPhiF[i];
                     double lkm = bubble ? lnPhiF2[i] - lnPhiW2[i] : lnPhiW2[i] - lnPhiF2[i];
