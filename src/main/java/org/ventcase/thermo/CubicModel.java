@@ -416,6 +416,106 @@ public final class CubicModel {
     }
 
     /**
+     * Analytic derivatives of ln phi at root z of the phase with parameters m (made by
+     * {@link #mix(AtTemperature, double[])} from {@code at} and composition x, per mole of mixture):
+     * any of the outputs may be null and is then skipped.
+     *
+     * <p>From Michelsen's reduced residual Helmholtz energy of the two-parameter cubic,
+     * F(T, V, n) = -n g(V, B) - (D(T)/T) f(V, B), g = ln(1 - B/V),
+     * f = ln((V + sigma B)/(V + epsilon B))/(R B (sigma - epsilon)) (f = 1/(R (V + epsilon B)) when
+     * sigma = epsilon), B = sum n_i b_i, D = sum_i sum_j n_i n_j a_ij, evaluated at N = 1 mol:
+     * <ul>
+     * <li>N (d ln phi_i/d n_j)_{T,P} = F_nB (b_i + b_j) + F_BB b_i b_j + F_D 2 a_ij
+     * + F_BD (b_i D_j + b_j D_i) + 1 + P_i P_j/(R T P_V), with D_i = 2 aBar_i, P_i = (dP/dn_i)_{T,V},
+     * P_V = (dP/dV)_{T,n};</li>
+     * <li>(d ln phi_i/dT)_{P,n} = F_iT + 1/T + P_i P_T/(R T P_V), F_iT = -(D_T/T - D/T^2) f_B b_i
+     * + (f/T^2) D_i - (f/T) D_iT, D_iT = 2 sum_j x_j da_ij/dT;</li>
+     * <li>(d ln phi_i/d ln P)_{T,n} = P vbar_i/(R T) - 1, vbar_i = -P_i/P_V.</li>
+     * </ul>
+     * with F_nB = -g_B, F_BB = -g_BB - (D/T) f_BB, F_D = -f/T, F_BD = -f_B/T and g_B = -1/(V - B),
+     * g_BB = -1/(V - B)^2, f_V = -1/(R (V + sigma B)(V + epsilon B)), f_B = -(f + V f_V)/B,
+     * f_VV = (2 V + (sigma + epsilon) B)/(R ((V + sigma B)(V + epsilon B))^2),
+     * f_BV = -(2 f_V + V f_VV)/B, f_BB = -(2 f_B + V f_BV)/B.
+     * Source: M.L. Michelsen, J.M. Mollerup, Thermodynamic Models: Fundamentals and Computational
+     * Aspects, 2nd ed., 2007, ch. 2 (derivatives of ln phi from F) and ch. 3 (the cubic's g and
+     * f). The tests check them against finite differences and against the exact identities
+     * sum_i x_i N d ln phi_i/d n_j = 0, sum_i x_i d ln phi_i/dT = -H^R/(R T^2) and
+     * sum_i x_i d ln phi_i/d ln P = Z - 1.
+     *
+     * @param dlnPhiDt   (d ln phi_i/dT)_{P,x}, 1/K
+     * @param dlnPhiDlnP (d ln phi_i/d ln P)_{T,x}
+     * @param dlnPhiDn   N (d ln phi_i/d n_j)_{T,P} at N = 1 (symmetric, n x n)
+     */
+    public void lnPhiDerivatives(AtTemperature at, MixParams m, double[] x, double p, double z, double[] dlnPhiDt,
+                                 double[] dlnPhiDlnP, double[][] dlnPhiDn) {
+        int n = ac.length;
+        double t = m.t();
+        double rt = R * t;
+        double v = z * rt / p;
+        double b = m.b();
+        double a = m.a();
+        double vb = v - b;
+        double d1 = v + sigma * b;
+        double d2 = v + epsilon * b;
+        double d = d1 * d2;
+        double f = sigma == epsilon ? 1.0 / (R * d2) : Math.log(d1 / d2) / (R * b * (sigma - epsilon));
+        double fV = -1.0 / (R * d);
+        double fB = -(f + v * fV) / b;
+        double pV = -rt / (vb * vb) + a * (2.0 * v + u * b) / (d * d);
+        double[] aBar = m.aBar();
+        double[] pn = new double[n];
+        double c = a * (u * v + 2.0 * w * b) / (d * d);
+        for (int i = 0; i < n; i++) {
+            pn[i] = rt / vb + rt * bi[i] / (vb * vb) - 2.0 * aBar[i] / d + c * bi[i];
+        }
+        if (dlnPhiDlnP != null) {
+            for (int i = 0; i < n; i++) {
+                dlnPhiDlnP[i] = -p * pn[i] / (pV * rt) - 1.0;
+            }
+        }
+        if (dlnPhiDt != null) {
+            double pT = R / vb - m.dadt() / d;
+            double fb = -(m.dadt() / t - a / (t * t)) * fB;
+            double fd = f / (t * t);
+            double fdT = f / t;
+            double rtPv = rt * pV;
+            for (int i = 0; i < n; i++) {
+                double daBar = 0;
+                if (n == 1) {
+                    daBar = at.daij[0][0];
+                } else {
+                    double[] row = at.daij[i];
+                    for (int j = 0; j < n; j++) {
+                        daBar += x[j] * row[j];
+                    }
+                }
+                double fiT = fb * bi[i] + fd * 2.0 * aBar[i] - fdT * 2.0 * daBar;
+                dlnPhiDt[i] = fiT + 1.0 / t + pn[i] * pT / rtPv;
+            }
+        }
+        if (dlnPhiDn != null) {
+            double fVV = (2.0 * v + u * b) / (R * d * d);
+            double fBV = -(2.0 * fV + v * fVV) / b;
+            double fBB = -(2.0 * fB + v * fBV) / b;
+            double fnB = 1.0 / vb;
+            double fBBt = 1.0 / (vb * vb) - a / t * fBB;
+            double fD = -f / t;
+            double fBD = -fB / t;
+            double rtPv = rt * pV;
+            for (int i = 0; i < n; i++) {
+                double[] row = dlnPhiDn[i];
+                double[] aRow = at.aij[i];
+                for (int j = i; j < n; j++) {
+                    double val = fnB * (bi[i] + bi[j]) + fBBt * bi[i] * bi[j] + fD * 2.0 * aRow[j]
+                            + fBD * 2.0 * (bi[i] * aBar[j] + bi[j] * aBar[i]) + 1.0 + pn[i] * pn[j] / rtPv;
+                    row[j] = val;
+                    dlnPhiDn[j][i] = val;
+                }
+            }
+        }
+    }
+
+    /**
      * Z and ln phi of a pure fluid at (T, P) for the requested root: the fast path used where many
      * states are evaluated (the Gibbs energies compared for the stable root are the ln phi values).
      *

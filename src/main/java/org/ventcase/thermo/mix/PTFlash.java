@@ -27,7 +27,7 @@ import org.ventcase.thermo.PhaseRequest;
  * (4) where substitution is slow (near critical points) a second-order step: Newton's method on
  * the vapour mole numbers v_i minimising the Gibbs energy, Hessian
  * H_ij = (delta_ij/y_i - 1 + Phi^V_ij)/V + (delta_ij/x_i - 1 + Phi^L_ij)/L with
- * Phi_ij = N d ln phi_i/d n_j (forward differences on the same root), step limited to keep
+ * Phi_ij = N d ln phi_i/d n_j (analytic, {@link CubicModel#lnPhiDerivatives}), step limited to keep
  * 0 < v_i < z_i and halved until G decreases. Converged when
  * max_i |ln f_i^V - ln f_i^L| < 1e-10. A run whose K-values collapse to 1 (trivial solution) is
  * reported as such.
@@ -344,8 +344,8 @@ public final class PTFlash {
                 return vv;
             }
             s.newton++;
-            PhaseEval.dLnPhiDn(model, at, p, x, PhaseEval.branchOf(model, mL, p, zL), lnPhiL, phiL, sx, so);
-            PhaseEval.dLnPhiDn(model, at, p, y, PhaseEval.branchOf(model, mV, p, zV), lnPhiV, phiV, sx, so);
+            model.lnPhiDerivatives(at, mL, x, p, zL, null, null, phiL);
+            model.lnPhiDerivatives(at, mV, y, p, zV, null, null, phiV);
             double shift = 0;
             boolean accepted = false;
             for (int attempt = 0; attempt < 10 && !accepted; attempt++) {

@@ -25,7 +25,7 @@ import org.ventcase.thermo.PhaseRequest;
  * solution) is discarded.
  *
  * <p>Root of each phase: the one with the lower Gibbs energy. The composition derivatives of
- * ln phi in the Newton step are forward differences on the same root branch.
+ * ln phi in the Newton step are analytic ({@link CubicModel#lnPhiDerivatives}) at that root.
  *
  * <p>Source: M.L. Michelsen, The isothermal flash problem. Part I. Stability, Fluid Phase
  * Equilib. 9 (1982) 1-19, DOI 10.1016/0378-3812(82)85001-2; M.L. Michelsen, J.M. Mollerup,
@@ -275,8 +275,6 @@ public final class StabilityAnalysis {
         double[][] phi = new double[n][n];
         double[][] h = new double[n][n];
         double[] rhs = new double[n];
-        double[] sx = new double[n];
-        double[] so = new double[n];
         double[] trialLnW = new double[n];
         double tm = Double.NaN;
         double gmax = Double.NaN;
@@ -285,7 +283,6 @@ public final class StabilityAnalysis {
             MixParams m = model.mix(at, w);
             double zz = PhaseEval.chooseZ(model, m, p, PhaseRequest.STABLE);
             model.lnPhi(m, p, zz, lnPhi);
-            PhaseRequest branch = PhaseEval.branchOf(model, m, p, zz);
             tm = tmOf(z, d, lnW, lnPhi, g);
             gmax = 0;
             for (int i = 0; i < n; i++) {
@@ -299,7 +296,7 @@ public final class StabilityAnalysis {
             if (isTrivial(w, z)) {
                 return new NewtonOut(it - 1, tm, gmax, false);
             }
-            PhaseEval.dLnPhiDn(model, at, p, w, branch, lnPhi, phi, sx, so);
+            model.lnPhiDerivatives(at, m, w, p, zz, null, null, phi);
             double shift = 0;
             boolean accepted = false;
             for (int attempt = 0; attempt < 8 && !accepted; attempt++) {
