@@ -141,6 +141,92 @@ public final class CubicModel {
         return m;
     }
 
+    /**
+     * The temperature-dependent parameters of every component at one temperature, with the
+     * cross terms a_ij = (1 - k_ij) sqrt(a_i a_j) and their first and second temperature
+     * derivatives. Computing them once per temperature and reusing them for every composition at
+     * that temperature ({@link #mix(AtTemperature, double[])}) avoids re-evaluating alpha(T) and
+     * the n^2 square roots in every mixing-rule call. Immutable and thread-safe: a value object,
+     * made per call by a solver and handed down explicitly, never cached inside the model.
+     *
+     * <p>Derivatives of a_ij = (1 - k_ij) sqrt(g), g = a_i a_j:
+     * da_ij/dT = (1 - k_ij) g'/(2 sqrt g), d2a_ij/dT2 = (1 - k_ij) (g''/(2 sqrt g) - g'^2/(4 g sqrt g)),
+     * g' = a_i' a_j + a_i a_j', g'' = a_i'' a_j + 2 a_i' a_j' + a_i a_j''. On the diagonal these
+     * reduce to a_i, a_i', a_i'' and are stored as such.
+     */
+    public static final class AtTemperature {
+        private final double t;
+        private final double[][] aij;
+        private final double[][] daij;
+        private final double[][] d2aij;
+
+        private AtTemperature(double t, double[][] aij, double[][] daij, double[][] d2aij) {
+            this.t = t;
+            this.aij = aij;
+            this.daij = daij;
+            this.d2aij = d2aij;
+        }
+
+        /** Temperature, K. */
+        public double t() {
+            return t;
+        }
+
+        /** a_ij = (1 - k_ij) sqrt(a_i a_j) at this temperature, Pa m6/mol2. */
+        public double aij(int i, int j) {
+            return aij[i][j];
+        }
+
+        /** da_ij/dT at this temperature. */
+        public double daij(int i, int j) {
+            return daij[i][j];
+        }
+
+        /** d2a_ij/dT2 at this temperature. */
+        public double d2aij(int i, int j) {
+            return d2aij[i][j];
+        }
+    }
+
+    /** The per-temperature parameters at T (see {@link AtTemperature}). */
+    public AtTemperature at(double t) {
+        int n = ac.length;
+        double[] ai = new double[n];
+        double[] dai = new double[n];
+        double[] d2ai = new double[n];
+        for (int i = 0; i < n; i++) {
+            double tr = t / tc[i];
+            ai[i] = ac[i] * alphas[i].alpha(tr);
+            dai[i] = ac[i] * alphas[i].dAlpha(tr) / tc[i];
+            d2ai[i] = ac[i] * alphas[i].d2Alpha(tr) / (tc[i] * tc[i]);
+        }
+        double[][] aij = new double[n][n];
+        double[][] daij = new double[n][n];
+        double[][] d2aij = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            aij[i][i] = ai[i];
+            daij[i][i] = dai[i];
+            d2aij[i][i] = d2ai[i];
+            for (int j = i + 1; j < n; j++) {
+                double g = ai[i] * ai[j];
+                double sg = Math.sqrt(g);
+                double g1 = dai[i] * ai[j] + ai[i] * dai[j];
+                double g2 = d2ai[i] * ai[j] + 2.0 * dai[i] * dai[j] + ai[i] * d2ai[j];
+                double k = oneMinusKij[i][j];
+                double v = k * sg;
+                double dv = k * (g1 / (2.0 * sg));
+                double d2v = k * (g2 / (2.0 * sg) - g1 * g1 / (4.0 * g * sg));
+                aij[i][j] = v;
+                aij[j][i] = v;
+                daij[i][j] = dv;
+                daij[j][i] = dv;
+                d2aij[i][j] = d2v;
+                d2aij[j][i] = d2v;
+            }
+        }
+        return new AtTemperature(t, aij, daij, d2aij);
+    }
+
     /** Mixing rule at T and composition x (mole fractions, assumed normalised). */
     public MixParams mix(double t, double[] x) {
         int n = ac.length;
@@ -151,14 +237,20 @@ public final class CubicModel {
             return new MixParams(t, a, ac[0] * al.dAlpha(tr) / tc[0], ac[0] * al.d2Alpha(tr) / (tc[0] * tc[0]),
                     bi[0], new double[] {a}, bi);
         }
-        double[] ai = new double[n];
-        double[] dai = new double[n];
-        double[] d2ai = new double[n];
-        for (int i = 0; i < n; i++) {
-            double tr = t / tc[i];
-            ai[i] = ac[i] * alphas[i].alpha(tr);
-            dai[i] = ac[i] * alphas[i].dAlpha(tr) / tc[i];
-            d2ai[i] = ac[i] * alphas[i].d2Alpha(tr) / (tc[i] * tc[i]);
+        return mix(at(t), x);
+    }
+
+    /**
+     * Mixing rule with the per-temperature parameters already evaluated: the same quantities as
+     * {@link #mix(double, double[])} at at.t(), in O(n^2) multiply-adds and no square roots.
+     * a = sum_i x_i aBar_i with aBar_i = sum_j x_j a_ij; da/dT and d2a/dT2 from the symmetric
+     * derivative matrices over the upper triangle.
+     */
+    public MixParams mix(AtTemperature at, double[] x) {
+        int n = ac.length;
+        if (n == 1) {
+            double a = at.aij[0][0];
+            return new MixParams(at.t, a, at.daij[0][0], at.d2aij[0][0], bi[0], new double[] {a}, bi);
         }
         double a = 0;
         double da = 0;
@@ -166,24 +258,27 @@ public final class CubicModel {
         double b = 0;
         double[] aBar = new double[n];
         for (int i = 0; i < n; i++) {
-            b += x[i] * bi[i];
+            double xi = x[i];
+            double[] row = at.aij[i];
+            double[] drow = at.daij[i];
+            double[] d2row = at.d2aij[i];
+            double s = 0;
             for (int j = 0; j < n; j++) {
-                double g = ai[i] * ai[j];
-                double sg = Math.sqrt(g);
-                double aij = oneMinusKij[i][j] * sg;
-                aBar[i] += x[j] * aij;
-                if (i <= j) {
-                    double f = i == j ? 1.0 : 2.0;
-                    double g1 = dai[i] * ai[j] + ai[i] * dai[j];
-                    double g2 = d2ai[i] * ai[j] + 2.0 * dai[i] * dai[j] + ai[i] * d2ai[j];
-                    double xx = f * x[i] * x[j] * oneMinusKij[i][j];
-                    a += f * x[i] * x[j] * aij;
-                    da += xx * g1 / (2.0 * sg);
-                    d2a += xx * (g2 / (2.0 * sg) - g1 * g1 / (4.0 * g * sg));
-                }
+                s += x[j] * row[j];
             }
+            aBar[i] = s;
+            a += xi * s;
+            b += xi * bi[i];
+            double ds = 0.5 * xi * drow[i];
+            double d2s = 0.5 * xi * d2row[i];
+            for (int j = i + 1; j < n; j++) {
+                ds += x[j] * drow[j];
+                d2s += x[j] * d2row[j];
+            }
+            da += 2.0 * xi * ds;
+            d2a += 2.0 * xi * d2s;
         }
-        return new MixParams(t, a, da, d2a, b, aBar, bi);
+        return new MixParams(at.t, a, da, d2a, b, aBar, bi);
     }
 
     /** Pressure at molar volume v (m3/mol) from the equation itself, Pa. */
@@ -211,6 +306,45 @@ public final class CubicModel {
         double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
         double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
         return CubicSolver.solve(c2, c1, c0, bb);
+    }
+
+    /**
+     * Z of the requested root without building a {@link RootSelection}: LIQUID the smallest
+     * physical root, VAPOR the largest, STABLE the one of the two with the lower G^R/RT; where
+     * there is a single physical root it is returned whatever was requested. The same choice as
+     * {@link #select} makes, for inner loops that need only Z.
+     */
+    public double chooseZ(MixParams m, double p, PhaseRequest request) {
+        double aa = bigA(m, p);
+        double bb = bigB(m, p);
+        double c2 = (u - 1.0) * bb - 1.0;
+        double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
+        double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
+        double[] all = new double[3];
+        int nAll = CubicSolver.count(CubicSolver.rootsCoded(c2, c1, c0, all));
+        double zl = Double.NaN;
+        double zv = Double.NaN;
+        int nPhys = 0;
+        for (int i = 0; i < nAll; i++) {
+            if (all[i] > bb) {
+                if (nPhys == 0) {
+                    zl = all[i];
+                }
+                zv = all[i];
+                nPhys++;
+            }
+        }
+        if (nPhys == 0) {
+            throw new IllegalStateException("no physical root of the cubic (Z > B) at T = " + m.t() + " K, P = " + p
+                    + " Pa");
+        }
+        if (nPhys == 1 || request == PhaseRequest.LIQUID) {
+            return zl;
+        }
+        if (request == PhaseRequest.VAPOR) {
+            return zv;
+        }
+        return reducedResidualGibbs(m, p, zl) < reducedResidualGibbs(m, p, zv) ? zl : zv;
     }
 
     /** I = ln((Z + sigma B)/(Z + epsilon B))/(sigma - epsilon), or B/(Z + epsilon B) if equal. */
@@ -282,6 +416,106 @@ public final class CubicModel {
     }
 
     /**
+     * Analytic derivatives of ln phi at root z of the phase with parameters m (made by
+     * {@link #mix(AtTemperature, double[])} from {@code at} and composition x, per mole of mixture):
+     * any of the outputs may be null and is then skipped.
+     *
+     * <p>From Michelsen's reduced residual Helmholtz energy of the two-parameter cubic,
+     * F(T, V, n) = -n g(V, B) - (D(T)/T) f(V, B), g = ln(1 - B/V),
+     * f = ln((V + sigma B)/(V + epsilon B))/(R B (sigma - epsilon)) (f = 1/(R (V + epsilon B)) when
+     * sigma = epsilon), B = sum n_i b_i, D = sum_i sum_j n_i n_j a_ij, evaluated at N = 1 mol:
+     * <ul>
+     * <li>N (d ln phi_i/d n_j)_{T,P} = F_nB (b_i + b_j) + F_BB b_i b_j + F_D 2 a_ij
+     * + F_BD (b_i D_j + b_j D_i) + 1 + P_i P_j/(R T P_V), with D_i = 2 aBar_i, P_i = (dP/dn_i)_{T,V},
+     * P_V = (dP/dV)_{T,n};</li>
+     * <li>(d ln phi_i/dT)_{P,n} = F_iT + 1/T + P_i P_T/(R T P_V), F_iT = -(D_T/T - D/T^2) f_B b_i
+     * + (f/T^2) D_i - (f/T) D_iT, D_iT = 2 sum_j x_j da_ij/dT;</li>
+     * <li>(d ln phi_i/d ln P)_{T,n} = P vbar_i/(R T) - 1, vbar_i = -P_i/P_V.</li>
+     * </ul>
+     * with F_nB = -g_B, F_BB = -g_BB - (D/T) f_BB, F_D = -f/T, F_BD = -f_B/T and g_B = -1/(V - B),
+     * g_BB = -1/(V - B)^2, f_V = -1/(R (V + sigma B)(V + epsilon B)), f_B = -(f + V f_V)/B,
+     * f_VV = (2 V + (sigma + epsilon) B)/(R ((V + sigma B)(V + epsilon B))^2),
+     * f_BV = -(2 f_V + V f_VV)/B, f_BB = -(2 f_B + V f_BV)/B.
+     * Source: M.L. Michelsen, J.M. Mollerup, Thermodynamic Models: Fundamentals and Computational
+     * Aspects, 2nd ed., 2007, ch. 2 (derivatives of ln phi from F) and ch. 3 (the cubic's g and
+     * f). The tests check them against finite differences and against the exact identities
+     * sum_i x_i N d ln phi_i/d n_j = 0, sum_i x_i d ln phi_i/dT = -H^R/(R T^2) and
+     * sum_i x_i d ln phi_i/d ln P = Z - 1.
+     *
+     * @param dlnPhiDt   (d ln phi_i/dT)_{P,x}, 1/K
+     * @param dlnPhiDlnP (d ln phi_i/d ln P)_{T,x}
+     * @param dlnPhiDn   N (d ln phi_i/d n_j)_{T,P} at N = 1 (symmetric, n x n)
+     */
+    public void lnPhiDerivatives(AtTemperature at, MixParams m, double[] x, double p, double z, double[] dlnPhiDt,
+                                 double[] dlnPhiDlnP, double[][] dlnPhiDn) {
+        int n = ac.length;
+        double t = m.t();
+        double rt = R * t;
+        double v = z * rt / p;
+        double b = m.b();
+        double a = m.a();
+        double vb = v - b;
+        double d1 = v + sigma * b;
+        double d2 = v + epsilon * b;
+        double d = d1 * d2;
+        double f = sigma == epsilon ? 1.0 / (R * d2) : Math.log(d1 / d2) / (R * b * (sigma - epsilon));
+        double fV = -1.0 / (R * d);
+        double fB = -(f + v * fV) / b;
+        double pV = -rt / (vb * vb) + a * (2.0 * v + u * b) / (d * d);
+        double[] aBar = m.aBar();
+        double[] pn = new double[n];
+        double c = a * (u * v + 2.0 * w * b) / (d * d);
+        for (int i = 0; i < n; i++) {
+            pn[i] = rt / vb + rt * bi[i] / (vb * vb) - 2.0 * aBar[i] / d + c * bi[i];
+        }
+        if (dlnPhiDlnP != null) {
+            for (int i = 0; i < n; i++) {
+                dlnPhiDlnP[i] = -p * pn[i] / (pV * rt) - 1.0;
+            }
+        }
+        if (dlnPhiDt != null) {
+            double pT = R / vb - m.dadt() / d;
+            double fb = -(m.dadt() / t - a / (t * t)) * fB;
+            double fd = f / (t * t);
+            double fdT = f / t;
+            double rtPv = rt * pV;
+            for (int i = 0; i < n; i++) {
+                double daBar = 0;
+                if (n == 1) {
+                    daBar = at.daij[0][0];
+                } else {
+                    double[] row = at.daij[i];
+                    for (int j = 0; j < n; j++) {
+                        daBar += x[j] * row[j];
+                    }
+                }
+                double fiT = fb * bi[i] + fd * 2.0 * aBar[i] - fdT * 2.0 * daBar;
+                dlnPhiDt[i] = fiT + 1.0 / t + pn[i] * pT / rtPv;
+            }
+        }
+        if (dlnPhiDn != null) {
+            double fVV = (2.0 * v + u * b) / (R * d * d);
+            double fBV = -(2.0 * fV + v * fVV) / b;
+            double fBB = -(2.0 * fB + v * fBV) / b;
+            double fnB = 1.0 / vb;
+            double fBBt = 1.0 / (vb * vb) - a / t * fBB;
+            double fD = -f / t;
+            double fBD = -fB / t;
+            double rtPv = rt * pV;
+            for (int i = 0; i < n; i++) {
+                double[] row = dlnPhiDn[i];
+                double[] aRow = at.aij[i];
+                for (int j = i; j < n; j++) {
+                    double val = fnB * (bi[i] + bi[j]) + fBBt * bi[i] * bi[j] + fD * 2.0 * aRow[j]
+                            + fBD * 2.0 * (bi[i] * aBar[j] + bi[j] * aBar[i]) + 1.0 + pn[i] * pn[j] / rtPv;
+                    row[j] = val;
+                    dlnPhiDn[j][i] = val;
+                }
+            }
+        }
+    }
+
+    /**
      * Z and ln phi of a pure fluid at (T, P) for the requested root: the fast path used where many
      * states are evaluated (the Gibbs energies compared for the stable root are the ln phi values).
      *
@@ -291,15 +525,56 @@ public final class CubicModel {
         if (size() != 1) {
             throw new IllegalStateException("pure-fluid path on a " + size() + "-component model");
         }
-        MixParams m = mix(t, null);
-        RootSelection s = select(m, p, request);
-        double lnPhi;
-        if (s.roots().count() > 1 && request == PhaseRequest.STABLE) {
-            lnPhi = s.liquidLike() ? s.gLiquid() : s.gVapor();
-        } else {
-            lnPhi = reducedResidualGibbs(m, p, s.z());
+        // Only a(T) is needed here (no temperature derivatives), and each root's G^R/RT is
+        // evaluated at most once: for the stable root it is both the criterion and ln phi.
+        double a = ac[0] * alphas[0].alpha(t / tc[0]);
+        double b = bi[0];
+        double rt = R * t;
+        double aa = a * p / (rt * rt);
+        double bb = b * p / rt;
+        double c2 = (u - 1.0) * bb - 1.0;
+        double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
+        double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
+        double[] all = new double[3];
+        int nAll = CubicSolver.count(CubicSolver.rootsCoded(c2, c1, c0, all));
+        double zl = Double.NaN;
+        double zv = Double.NaN;
+        int nPhys = 0;
+        for (int i = 0; i < nAll; i++) {
+            if (all[i] > bb) {
+                if (nPhys == 0) {
+                    zl = all[i];
+                }
+                zv = all[i];
+                nPhys++;
+            }
         }
-        return new double[] {s.z(), lnPhi};
+        if (nPhys == 0) {
+            throw new IllegalStateException("no physical root of the cubic (Z > B) at T = " + t + " K, P = " + p
+                    + " Pa");
+        }
+        double q = aa / bb;
+        double z;
+        double lnPhi;
+        if (nPhys == 1 || request == PhaseRequest.LIQUID) {
+            z = zl;
+            lnPhi = gResidual(zl, bb, q);
+        } else if (request == PhaseRequest.VAPOR) {
+            z = zv;
+            lnPhi = gResidual(zv, bb, q);
+        } else {
+            double gl = gResidual(zl, bb, q);
+            double gv = gResidual(zv, bb, q);
+            boolean liq = gl < gv;
+            z = liq ? zl : zv;
+            lnPhi = liq ? gl : gv;
+        }
+        return new double[] {z, lnPhi};
+    }
+
+    /** G^R/RT = Z - 1 - ln(Z - B) - (A/B) I, the same expression as {@link #reducedResidualGibbs}. */
+    private double gResidual(double z, double bb, double q) {
+        return z - 1.0 - Math.log(z - bb) - q * integralI(z, bb);
     }
 
     /** ln phi of a pure fluid (or of the mixture as a whole: G^R/RT) at root z. */

@@ -67,10 +67,28 @@ public final class CubicSolver {
 
     /** The real roots in ascending order (repeated roots repeated); returns how many (1 or 3). */
     static int realRoots(double c2, double c1, double c0, double[] out) {
-        return roots(c2, c1, c0, out, new RootCase[1]);
+        return count(rootsCoded(c2, c1, c0, out));
     }
 
     static int roots(double c2, double c1, double c0, double[] out, RootCase[] kind) {
+        int code = rootsCoded(c2, c1, c0, out);
+        kind[0] = CASES[code];
+        return count(code);
+    }
+
+    private static final RootCase[] CASES = {RootCase.ONE_REAL, RootCase.DOUBLE, RootCase.TRIPLE,
+            RootCase.THREE_DISTINCT};
+
+    /** Number of real roots (with multiplicity) for a code of {@link #rootsCoded}. */
+    static int count(int code) {
+        return code == 0 ? 1 : 3;
+    }
+
+    /**
+     * The real roots in ascending order without allocating; returns a code for the root case:
+     * 0 one real root, 1 double, 2 triple, 3 three distinct (index into {@link #CASES}).
+     */
+    static int rootsCoded(double c2, double c1, double c0, double[] out) {
         double c2over3 = c2 / 3.0;
         double p = c1 - c2 * c2over3;
         double q = (2.0 * c2over3 * c2over3 - c1) * c2over3 + c0;
@@ -97,17 +115,16 @@ public final class CubicSolver {
         double tol = DOUBLE_ROOT_TOLERANCE * Math.max(e1 * e1, Math.abs(4.0 * e0));
         if (qd < -tol) {
             out[0] = z1;
-            kind[0] = RootCase.ONE_REAL;
-            return 1;
+            return 0;
         }
         double z2;
         double z3;
+        int code;
         if (Math.abs(qd) <= tol) {
             z2 = -0.5 * e1;
             z3 = z2;
-            kind[0] = Math.abs(z2 - z1) <= TRIPLE_ROOT_TOLERANCE * Math.max(Math.abs(z1), 1e-300)
-                    ? RootCase.TRIPLE : RootCase.DOUBLE;
-            if (kind[0] == RootCase.TRIPLE) {
+            code = Math.abs(z2 - z1) <= TRIPLE_ROOT_TOLERANCE * Math.max(Math.abs(z1), 1e-300) ? 2 : 1;
+            if (code == 2) {
                 double mean = (z1 + 2 * z2) / 3.0;
                 z1 = mean;
                 z2 = mean;
@@ -117,10 +134,10 @@ public final class CubicSolver {
             double r = -0.5 * (e1 + Math.copySign(Math.sqrt(qd), e1));
             z2 = polish(r, c2, c1, c0);
             z3 = r != 0.0 ? polish(e0 / r, c2, c1, c0) : 0.0;
-            kind[0] = RootCase.THREE_DISTINCT;
+            code = 3;
         }
         sort3(z1, z2, z3, out);
-        return 3;
+        return code;
     }
 
     private static void sort3(double a, double b, double c, double[] out) {

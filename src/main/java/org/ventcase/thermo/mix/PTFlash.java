@@ -27,7 +27,7 @@ import org.ventcase.thermo.PhaseRequest;
  * (4) where substitution is slow (near critical points) a second-order step: Newton's method on
  * the vapour mole numbers v_i minimising the Gibbs energy, Hessian
  * H_ij = (delta_ij/y_i - 1 + Phi^V_ij)/V + (delta_ij/x_i - 1 + Phi^L_ij)/L with
- * Phi_ij = N d ln phi_i/d n_j (forward differences on the same root), step limited to keep
+ * Phi_ij = N d ln phi_i/d n_j (analytic, {@link CubicModel#lnPhiDerivatives}), step limited to keep
  * 0 < v_i < z_i and halved until G decreases. Converged when
  * max_i |ln f_i^V - ln f_i^L| < 1e-10. A run whose K-values collapse to 1 (trivial solution) is
  * reported as such.
@@ -72,8 +72,9 @@ public final class PTFlash {
         double[] z = model.checkState(t, p, z0);
         int n = z.length;
         List<String> warnings = new ArrayList<>();
+        CubicModel.AtTemperature at = model.at(t);
         double[] lnPhiZ = new double[n];
-        PhaseEval.lnPhi(model, t, p, z, PhaseRequest.STABLE, lnPhiZ);
+        PhaseEval.lnPhi(model, at, p, z, PhaseRequest.STABLE, lnPhiZ);
         int present = 0;
         for (double v : z) {
             if (v > 0) {
@@ -86,7 +87,7 @@ public final class PTFlash {
                     "one component present: a pure fluid at given (T, P) is one phase except on its saturation curve",
                     0, List.of());
         } else {
-            stab = stability.test(t, p, z, lnPhiZ, false);
+            stab = stability.test(at, p, z, lnPhiZ, false);
         }
         warnings.addAll(stab.warnings());
         if (stab.stable()) {
@@ -103,7 +104,7 @@ public final class PTFlash {
                 lnK[i] = wil[i];
             }
         }
-        Split s = split(t, p, z, lnK);
+        Split s = split(at, p, z, lnK);
         if (s == null) {
             throw new ConvergenceException("PT flash", 0, Double.NaN, String.format(Locale.ROOT,
                     "the stability test found the feed unstable (tm = %.3g, trial %s) but the phase split collapsed to "
@@ -133,7 +134,8 @@ public final class PTFlash {
      * Converges a phase split from initial ln K; returns null when it collapses to the trivial
      * solution. The vapour fraction may end outside (0, 1).
      */
-    Split split(double t, double p, double[] z, double[] lnK0) {
+    Split split(CubicModel.AtTemperature at, double p, double[] z, double[] lnK0) {
+        double t = at.t();
         int n = z.length;
         double[] lnK = lnK0.clone();
         double[] k = new double[n];
@@ -158,8 +160,8 @@ public final class PTFlash {
                 return null;
             }
             compositions(z, k, beta, x, y);
-            PhaseEval.lnPhi(model, t, p, x, PhaseRequest.STABLE, lnPhiL);
-            PhaseEval.lnPhi(model, t, p, y, PhaseRequest.STABLE, lnPhiV);
+            PhaseEval.lnPhi(model, at, p, x, PhaseRequest.STABLE, lnPhiL);
+            PhaseEval.lnPhi(model, at, p, y, PhaseRequest.STABLE, lnPhiV);
             err = 0;
             double sk = 0;
             double num = 0;
@@ -213,10 +215,10 @@ public final class PTFlash {
             }
             if (!(beta > 1e-12 && beta < 1 - 1e-12)) {
                 // Newton on vapour moles needs both phases present; finish by substitution alone.
-                beta = finishBySubstitution(t, p, z, lnK, x, y, s);
+                beta = finishBySubstitution(at, p, z, lnK, x, y, s);
             } else {
                 compositions(z, k, beta, x, y);
-                beta = newton(t, p, z, beta, x, y, s);
+                beta = newton(at, p, z, beta, x, y, s);
             }
             if (Double.isNaN(beta)) {
                 return null;
@@ -239,8 +241,9 @@ public final class PTFlash {
         return s;
     }
 
-    private double finishBySubstitution(double t, double p, double[] z, double[] lnK, double[] x, double[] y,
-                                        Split s) {
+    private double finishBySubstitution(CubicModel.AtTemperature at, double p, double[] z, double[] lnK, double[] x,
+                                        double[] y, Split s) {
+        double t = at.t();
         int n = z.length;
         double[] k = new double[n];
         double[] lnPhiL = new double[n];
@@ -257,8 +260,8 @@ public final class PTFlash {
                 return Double.NaN;
             }
             compositions(z, k, beta, x, y);
-            PhaseEval.lnPhi(model, t, p, x, PhaseRequest.STABLE, lnPhiL);
-            PhaseEval.lnPhi(model, t, p, y, PhaseRequest.STABLE, lnPhiV);
+            PhaseEval.lnPhi(model, at, p, x, PhaseRequest.STABLE, lnPhiL);
+            PhaseEval.lnPhi(model, at, p, y, PhaseRequest.STABLE, lnPhiV);
             err = 0;
             for (int i = 0; i < n; i++) {
                 double next = lnPhiL[i] - lnPhiV[i];
@@ -292,7 +295,9 @@ public final class PTFlash {
     }
 
     /** Newton on vapour moles; updates x, y; returns beta (NaN on collapse). */
-    private double newton(double t, double p, double[] z, double beta0, double[] x, double[] y, Split s) {
+    private double newton(CubicModel.AtTemperature at, double p, double[] z, double beta0, double[] x, double[] y,
+                          Split s) {
+        double t = at.t();
         int n = z.length;
         double[] v = new double[n];
         double[] l = new double[n];
@@ -318,8 +323,8 @@ public final class PTFlash {
         for (int it = 1; it <= NEWTON_MAX; it++) {
             double vv = molesToFractions(v, y);
             double ll = molesToFractions(l, x);
-            MixParams mL = model.mix(t, x);
-            MixParams mV = model.mix(t, y);
+            MixParams mL = model.mix(at, x);
+            MixParams mV = model.mix(at, y);
             double zL = PhaseEval.chooseZ(model, mL, p, PhaseRequest.STABLE);
             double zV = PhaseEval.chooseZ(model, mV, p, PhaseRequest.STABLE);
             model.lnPhi(mL, p, zL, lnPhiL);
@@ -339,8 +344,8 @@ public final class PTFlash {
                 return vv;
             }
             s.newton++;
-            PhaseEval.dLnPhiDn(model, t, p, x, PhaseEval.branchOf(model, mL, p, zL), lnPhiL, phiL, sx, so);
-            PhaseEval.dLnPhiDn(model, t, p, y, PhaseEval.branchOf(model, mV, p, zV), lnPhiV, phiV, sx, so);
+            model.lnPhiDerivatives(at, mL, x, p, zL, null, null, phiL);
+            model.lnPhiDerivatives(at, mV, y, p, zV, null, null, phiV);
             double shift = 0;
             boolean accepted = false;
             for (int attempt = 0; attempt < 10 && !accepted; attempt++) {
@@ -374,7 +379,7 @@ public final class PTFlash {
                     for (int i = 0; i < n; i++) {
                         vt[i] = z[i] > 0 ? v[i] + step * dv[i] : 0;
                     }
-                    double gNew = gibbsOf(t, p, z, vt, sx, so);
+                    double gNew = gibbsOf(at, p, z, vt, sx, so);
                     if (gNew <= gibbs + 1e-14 * Math.abs(gibbs)) {
                         accepted = true;
                         for (int i = 0; i < n; i++) {
@@ -397,7 +402,7 @@ public final class PTFlash {
                 String.format(Locale.ROOT, "T = %.6g K, P = %.6g Pa after %d substitution steps", t, p, s.ss));
     }
 
-    private double gibbsOf(double t, double p, double[] z, double[] v, double[] y, double[] lnPhi) {
+    private double gibbsOf(CubicModel.AtTemperature at, double p, double[] z, double[] v, double[] y, double[] lnPhi) {
         int n = z.length;
         double[] l = new double[n];
         double[] x = new double[n];
@@ -407,13 +412,13 @@ public final class PTFlash {
         molesToFractions(v, y);
         molesToFractions(l, x);
         double g = 0;
-        PhaseEval.lnPhi(model, t, p, y, PhaseRequest.STABLE, lnPhi);
+        PhaseEval.lnPhi(model, at, p, y, PhaseRequest.STABLE, lnPhi);
         for (int i = 0; i < n; i++) {
             if (z[i] > 0) {
                 g += v[i] * (Math.log(y[i]) + lnPhi[i]);
             }
         }
-        PhaseEval.lnPhi(model, t, p, x, PhaseRequest.STABLE, lnPhi);
+        PhaseEval.lnPhi(model, at, p, x, PhaseRequest.STABLE, lnPhi);
         for (int i = 0; i < n; i++) {
             if (z[i] > 0) {
                 g += l[i] * (Math.log(x[i]) + lnPhi[i]);

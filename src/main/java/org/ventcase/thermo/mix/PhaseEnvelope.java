@@ -9,6 +9,7 @@ import org.ventcase.common.ConvergenceException;
 import org.ventcase.common.NoSolutionException;
 import org.ventcase.thermo.CubicModel;
 import org.ventcase.thermo.DensityBasis;
+import org.ventcase.thermo.MixParams;
 import org.ventcase.thermo.PhaseRequest;
 import org.ventcase.thermo.PureSaturation;
 import org.ventcase.thermo.SaturationResult;
@@ -21,8 +22,8 @@ import org.ventcase.thermo.SaturationResult;
  * F_{n+1} = sum_i z_i (K_i - 1) = 0, and F_{n+2} = X_s - S = 0 with one variable X_s specified.
  * The set of solutions is the whole phase boundary: starting on the bubble curve at low pressure
  * (w vapour), it passes the critical point where every ln K changes sign, and continues down the
- * dew curve (w liquid). Each point is found by Newton's method (Jacobian by forward differences,
- * iterations to max |Delta X| < 1e-9), started from a linear predictor along the sensitivity
+ * dew curve (w liquid). Each point is found by Newton's method (analytic Jacobian from the
+ * composition, temperature and pressure derivatives of ln phi, iterations to max |Delta X| < 1e-9), started from a linear predictor along the sensitivity
  * dX/dS = J^-1 e_{n+2}. The specified variable is the one changing fastest along the curve; the
  * step grows when Newton needs few iterations and shrinks when it needs many or fails. Near the
  * critical point the specified variable is an ln K, stepped across zero symmetrically, and the
@@ -151,7 +152,7 @@ public final class PhaseEnvelope {
         double[] sens = new double[m];
         double[][] jac = new double[m][m];
         // initial sensitivity
-        jacobian(z, x, spec, true, wk, jac);
+        evaluate(z, x, spec, x[spec], true, wk, wk.f, jac);
         unitSolve(jac, m, sens);
         boolean finished = false;
         while (points.size() < MAX_POINTS) {
@@ -248,7 +249,7 @@ public final class PhaseEnvelope {
             } else if (its > 5) {
                 ds *= 0.6;
             }
-            jacobian(z, x, spec, Math.signum(x[ref]) == refSign, wk, jac);
+            evaluate(z, x, spec, x[spec], Math.signum(x[ref]) == refSign, wk, wk.f, jac);
             unitSolve(jac, m, sens);
             if (!finite(sens)) {
                 warnings.add("singular Jacobian while tracing; stopped");
@@ -288,22 +289,38 @@ public final class PhaseEnvelope {
     private static final class Work {
         final double[] w;
         final double[] f;
-        final double[] f2;
         final double[] lnPhiZ;
         final double[] lnPhiW;
         final double[] rhs;
+        final double[] dTZ;
+        final double[] dPZ;
+        final double[] dTW;
+        final double[] dPW;
+        final double[][] phiW;
 
         Work(int n) {
             w = new double[n];
             f = new double[n + 2];
-            f2 = new double[n + 2];
             lnPhiZ = new double[n];
             lnPhiW = new double[n];
             rhs = new double[n + 2];
+            dTZ = new double[n];
+            dPZ = new double[n];
+            dTW = new double[n];
+            dPW = new double[n];
+            phiW = new double[n][n];
         }
     }
 
-    private void residual(double[] z, double[] x, int spec, double target, boolean bubbleRoots, Work wk, double[] out) {
+    /**
+     * The residual F(X) into {@code out} and, where {@code jac} is not null, its Jacobian,
+     * analytically: with w = K z/sum(K z) and Phi^W_ij = N d ln phi_i^W/d n_j,
+     * dF_i/d ln K_j = delta_ij + Phi^W_ij w_j, dF_i/d ln T = T (d ln phi_i^W/dT - d ln phi_i^Z/dT),
+     * dF_i/d ln P = d ln phi_i^W/d ln P - d ln phi_i^Z/d ln P, dF_{n+1}/d ln K_j = z_j K_j and
+     * dF_{n+2}/dX = e_spec ({@link CubicModel#lnPhiDerivatives}).
+     */
+    private void evaluate(double[] z, double[] x, int spec, double target, boolean bubbleRoots, Work wk,
+                          double[] out, double[][] jac) {
         int n = z.length;
         double t = Math.exp(x[n]);
         double p = Math.exp(x[n + 1]);
@@ -318,28 +335,41 @@ public final class PhaseEnvelope {
         for (int i = 0; i < n; i++) {
             wk.w[i] /= s;
         }
-        PhaseEval.lnPhi(model, t, p, z, bubbleRoots ? PhaseRequest.LIQUID : PhaseRequest.VAPOR, wk.lnPhiZ);
-        PhaseEval.lnPhi(model, t, p, wk.w, bubbleRoots ? PhaseRequest.VAPOR : PhaseRequest.LIQUID, wk.lnPhiW);
+        CubicModel.AtTemperature at = model.at(t);
+        MixParams mZ = model.mix(at, z);
+        double zZ = model.chooseZ(mZ, p, bubbleRoots ? PhaseRequest.LIQUID : PhaseRequest.VAPOR);
+        model.lnPhi(mZ, p, zZ, wk.lnPhiZ);
+        MixParams mW = model.mix(at, wk.w);
+        double zW = model.chooseZ(mW, p, bubbleRoots ? PhaseRequest.VAPOR : PhaseRequest.LIQUID);
+        model.lnPhi(mW, p, zW, wk.lnPhiW);
         for (int i = 0; i < n; i++) {
             out[i] = x[i] + wk.lnPhiW[i] - wk.lnPhiZ[i];
         }
         out[n] = sum;
         out[n + 1] = x[spec] - target;
-    }
-
-    private void jacobian(double[] z, double[] x, int spec, boolean bubbleRoots, Work wk, double[][] jac) {
-        int m = x.length;
-        double target = x[spec];
-        residual(z, x, spec, target, bubbleRoots, wk, wk.f);
-        for (int j = 0; j < m; j++) {
-            double h = 1e-7;
-            double keep = x[j];
-            x[j] = keep + h;
-            residual(z, x, spec, target, bubbleRoots, wk, wk.f2);
-            x[j] = keep;
-            for (int i = 0; i < m; i++) {
-                jac[i][j] = (wk.f2[i] - wk.f[i]) / h;
+        if (jac == null) {
+            return;
+        }
+        model.lnPhiDerivatives(at, mZ, z, p, zZ, wk.dTZ, wk.dPZ, null);
+        model.lnPhiDerivatives(at, mW, wk.w, p, zW, wk.dTW, wk.dPW, wk.phiW);
+        int m = n + 2;
+        for (int i = 0; i < n; i++) {
+            double[] row = jac[i];
+            double[] phiRow = wk.phiW[i];
+            for (int j = 0; j < n; j++) {
+                row[j] = phiRow[j] * wk.w[j];
             }
+            row[i] += 1.0;
+            row[n] = t * (wk.dTW[i] - wk.dTZ[i]);
+            row[n + 1] = wk.dPW[i] - wk.dPZ[i];
+        }
+        for (int j = 0; j < n; j++) {
+            jac[n][j] = z[j] * Math.exp(x[j]);
+        }
+        jac[n][n] = 0;
+        jac[n][n + 1] = 0;
+        for (int j = 0; j < m; j++) {
+            jac[n + 1][j] = j == spec ? 1.0 : 0.0;
         }
     }
 
@@ -357,8 +387,7 @@ public final class PhaseEnvelope {
     private int newton(double[] z, double[] x, int spec, double target, boolean bubbleRoots, Work wk, double[][] jac) {
         int m = x.length;
         for (int it = 1; it <= NEWTON_MAX; it++) {
-            jacobian(z, x, spec, bubbleRoots, wk, jac);
-            residual(z, x, spec, target, bubbleRoots, wk, wk.rhs);
+            evaluate(z, x, spec, target, bubbleRoots, wk, wk.rhs, jac);
             for (int i = 0; i < m; i++) {
                 wk.rhs[i] = -wk.rhs[i];
             }

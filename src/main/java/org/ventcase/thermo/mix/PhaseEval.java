@@ -3,7 +3,6 @@ package org.ventcase.thermo.mix;
 import static org.ventcase.common.PhysicalConstants.R;
 
 import org.ventcase.thermo.CubicModel;
-import org.ventcase.thermo.CubicRoots;
 import org.ventcase.thermo.MixParams;
 import org.ventcase.thermo.PhaseRequest;
 
@@ -32,25 +31,7 @@ final class PhaseEval {
 
     /** Z of the requested root; the MixParams must be at (T, x). */
     static double chooseZ(CubicModel model, MixParams m, double p, PhaseRequest req) {
-        CubicRoots r = model.roots(m, p);
-        if (r.count() == 1 || req == PhaseRequest.LIQUID) {
-            return r.smallest();
-        }
-        if (req == PhaseRequest.VAPOR) {
-            return r.largest();
-        }
-        double zl = r.smallest();
-        double zv = r.largest();
-        return model.reducedResidualGibbs(m, p, zl) < model.reducedResidualGibbs(m, p, zv) ? zl : zv;
-    }
-
-    /** Whether Z is the smallest of several roots (for keeping the same branch under perturbation). */
-    static PhaseRequest branchOf(CubicModel model, MixParams m, double p, double z) {
-        CubicRoots r = model.roots(m, p);
-        if (r.count() == 1) {
-            return PhaseRequest.STABLE;
-        }
-        return Math.abs(z - r.smallest()) <= Math.abs(z - r.largest()) ? PhaseRequest.LIQUID : PhaseRequest.VAPOR;
+        return model.chooseZ(m, p, req);
     }
 
     /**
@@ -58,7 +39,16 @@ final class PhaseEval {
      * x must be normalised.
      */
     static double lnPhi(CubicModel model, double t, double p, double[] x, PhaseRequest req, double[] out) {
-        MixParams m = model.mix(t, x);
+        return lnPhi(model, model.at(t), p, x, req, out);
+    }
+
+    /**
+     * ln phi at (at.t(), P, x) with the per-temperature parameters already evaluated; writes into
+     * {@code out} and returns Z. x must be normalised.
+     */
+    static double lnPhi(CubicModel model, CubicModel.AtTemperature at, double p, double[] x, PhaseRequest req,
+                        double[] out) {
+        MixParams m = model.mix(at, x);
         double z = chooseZ(model, m, p, req);
         model.lnPhi(m, p, z, out);
         return z;
@@ -67,9 +57,9 @@ final class PhaseEval {
     /**
      * ln phi and its ln P derivative at (T, P, x); returns Z.
      */
-    static double lnPhiAndDp(CubicModel model, double t, double p, double[] x, PhaseRequest req, double[] out,
-                             double[] dLnPhiDlnP) {
-        MixParams m = model.mix(t, x);
+    static double lnPhiAndDp(CubicModel model, CubicModel.AtTemperature at, double p, double[] x, PhaseRequest req,
+                             double[] out, double[] dLnPhiDlnP) {
+        MixParams m = model.mix(at, x);
         double z = chooseZ(model, m, p, req);
         model.lnPhi(m, p, z, out);
         dLnPhiDlnP(model, m, p, z, dLnPhiDlnP);
@@ -95,33 +85,6 @@ final class PhaseEval {
             double dPdn = rt / vb + rt * bi[i] / (vb * vb) - 2 * aBar[i] / d + a * (u * v + 2 * w * b) * bi[i] / (d * d);
             double vbar = -dPdn / dPdV;
             out[i] = p * vbar / rt - 1.0;
-        }
-    }
-
-    /**
-     * Phi_ij = N (d ln phi_i/d n_j)_{T,P} at composition x (N = 1), by forward differences on the
-     * same root branch; symmetrised. Written into {@code phi} (n x n). {@code base} holds ln phi at x.
-     */
-    static void dLnPhiDn(CubicModel model, double t, double p, double[] x, PhaseRequest branch, double[] base,
-                         double[][] phi, double[] scratchX, double[] scratchOut) {
-        int n = x.length;
-        for (int j = 0; j < n; j++) {
-            double h = 1e-6 * Math.max(x[j], 1e-3);
-            double sum = 1.0 + h;
-            for (int i = 0; i < n; i++) {
-                scratchX[i] = (x[i] + (i == j ? h : 0.0)) / sum;
-            }
-            lnPhi(model, t, p, scratchX, branch, scratchOut);
-            for (int i = 0; i < n; i++) {
-                phi[i][j] = (scratchOut[i] - base[i]) / h;
-            }
-        }
-        for (int i = 0; i < n; i++) {
-            for (int j = i + 1; j < n; j++) {
-                double avg = 0.5 * (phi[i][j] + phi[j][i]);
-                phi[i][j] = avg;
-                phi[j][i] = avg;
-            }
         }
     }
 

@@ -8,6 +8,7 @@ import org.ventcase.common.ConvergenceException;
 import org.ventcase.common.InvalidInputException;
 import org.ventcase.common.NoSolutionException;
 import org.ventcase.thermo.CubicModel;
+import org.ventcase.thermo.MixParams;
 import org.ventcase.thermo.PhaseRequest;
 import org.ventcase.thermo.mix.SaturationPoint.Kind;
 
@@ -19,7 +20,8 @@ import org.ventcase.thermo.mix.SaturationPoint.Kind;
  * point satisfies f = ln sum_i z_i K_i = 0 (dew: ln sum_i z_i/K_i = 0). Each iteration updates
  * K from the fugacity coefficients and takes one Newton step on the free variable (ln P, or T)
  * with df/d ln P = sum_i y_i (d ln phi_i^L/d ln P - d ln phi_i^V/d ln P) from the partial molar
- * volumes (analytic), or df/dT by a central difference. Steps are limited (|Delta ln P| <= 0.5,
+ * volumes, or df/dT = sum_i y_i (d ln phi_i^L/dT - d ln phi_i^V/dT) (both analytic,
+ * {@link CubicModel#lnPhiDerivatives}). Steps are limited (|Delta ln P| <= 0.5,
  * |Delta T| <= 0.1 T). Start: Wilson's K-values, ln K_i = ln(Pc_i/P) + 5.373 (1 + omega_i)
  * (1 - Tc_i/T), which give the bubble pressure sum z_i P_i^W(T) and dew pressure
  * 1/sum(z_i/P_i^W) directly, and the temperatures by bisection. Liquid uses the smallest cubic
@@ -139,11 +141,10 @@ public final class SaturationPoints {
         double[] lnPhiW = new double[n];
         double[] dF = new double[n];
         double[] dW = new double[n];
-        double[] lnPhiF2 = new double[n];
-        double[] lnPhiW2 = new double[n];
         PhaseRequest feedRoot = bubble ? PhaseRequest.LIQUID : PhaseRequest.VAPOR;
         PhaseRequest incRoot = bubble ? PhaseRequest.VAPOR : PhaseRequest.LIQUID;
         double f = Double.NaN;
+        CubicModel.AtTemperature at = null;
         for (int it = 1; it <= MAX_ITER; it++) {
             // incipient composition from current K
             double s = 0;
@@ -157,12 +158,15 @@ public final class SaturationPoints {
             double dmax = 0;
             double sk = 0;
             double sum = 0;
+            if (at == null || at.t() != t) {
+                at = model.at(t);
+            }
             if (pressureFree) {
-                PhaseEval.lnPhiAndDp(model, t, p, z, feedRoot, lnPhiF, dF);
-                PhaseEval.lnPhiAndDp(model, t, p, w, incRoot, lnPhiW, dW);
+                PhaseEval.lnPhiAndDp(model, at, p, z, feedRoot, lnPhiF, dF);
+                PhaseEval.lnPhiAndDp(model, at, p, w, incRoot, lnPhiW, dW);
             } else {
-                PhaseEval.lnPhi(model, t, p, z, feedRoot, lnPhiF);
-                PhaseEval.lnPhi(model, t, p, w, incRoot, lnPhiW);
+                PhaseEval.lnPhi(model, at, p, z, feedRoot, lnPhiF);
+                PhaseEval.lnPhi(model, at, p, w, incRoot, lnPhiW);
             }
             double df = 0;
             for (int i = 0; i < n; i++) {
@@ -215,15 +219,14 @@ public final class SaturationPoints {
                             kind.label(), t, kind.label()));
                 }
             } else {
-                double h = 1e-4 * t;
-                PhaseEval.lnPhi(model, t + h, p, z, feedRoot, lnPhiF);
-                PhaseEval.lnPhi(model, t + h, p, w, incRoot, lnPhiW);
-                PhaseEval.lnPhi(model, t - h, p, z, feedRoot, lnPhiF2);
-                PhaseEval.lnPhi(model, t - h, p, w, incRoot, lnPhiW2);
+                MixParams mF = model.mix(at, z);
+                double zF = model.chooseZ(mF, p, feedRoot);
+                model.lnPhiDerivatives(at, mF, z, p, zF, dF, null, null);
+                MixParams mW = model.mix(at, w);
+                double zW = model.chooseZ(mW, p, incRoot);
+                model.lnPhiDerivatives(at, mW, w, p, zW, dW, null, null);
                 for (int i = 0; i < n; i++) {
-                    double lkp = bubble ? lnPhiF[i] - lnPhiW[i] : lnPhiW[i] - lnPhiF[i];
-                    double lkm = bubble ? lnPhiF2[i] - lnPhiW2[i] : lnPhiW2[i] - lnPhiF2[i];
-                    double dlnK = (lkp - lkm) / (2 * h);
+                    double dlnK = bubble ? dF[i] - dW[i] : dW[i] - dF[i];
                     df += w[i] * (bubble ? dlnK : -dlnK);
                 }
                 double step = -f / df;

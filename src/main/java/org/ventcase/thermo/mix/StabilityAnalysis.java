@@ -25,7 +25,7 @@ import org.ventcase.thermo.PhaseRequest;
  * solution) is discarded.
  *
  * <p>Root of each phase: the one with the lower Gibbs energy. The composition derivatives of
- * ln phi in the Newton step are forward differences on the same root branch.
+ * ln phi in the Newton step are analytic ({@link CubicModel#lnPhiDerivatives}) at that root.
  *
  * <p>Source: M.L. Michelsen, The isothermal flash problem. Part I. Stability, Fluid Phase
  * Equilib. 9 (1982) 1-19, DOI 10.1016/0378-3812(82)85001-2; M.L. Michelsen, J.M. Mollerup,
@@ -49,8 +49,9 @@ public final class StabilityAnalysis {
     public StabilityResult test(double t, double p, double[] z0) {
         double[] z = model.checkState(t, p, z0);
         double[] lnPhiZ = new double[z.length];
-        PhaseEval.lnPhi(model, t, p, z, PhaseRequest.STABLE, lnPhiZ);
-        return test(t, p, z, lnPhiZ, true);
+        CubicModel.AtTemperature at = model.at(t);
+        PhaseEval.lnPhi(model, at, p, z, PhaseRequest.STABLE, lnPhiZ);
+        return test(at, p, z, lnPhiZ, true);
     }
 
     /**
@@ -60,12 +61,18 @@ public final class StabilityAnalysis {
      *                   trials when a Wilson trial already did
      */
     StabilityResult test(double t, double p, double[] z, double[] lnPhiZ, boolean exhaustive) {
+        return test(model.at(t), p, z, lnPhiZ, exhaustive);
+    }
+
+    /** As {@link #test(double, double, double[], double[], boolean)} with the per-temperature parameters given. */
+    StabilityResult test(CubicModel.AtTemperature at, double p, double[] z, double[] lnPhiZ, boolean exhaustive) {
+        double t = at.t();
         int n = z.length;
         double[] d = new double[n];
         for (int i = 0; i < n; i++) {
             d[i] = z[i] > 0 ? Math.log(z[i]) + lnPhiZ[i] : Double.NEGATIVE_INFINITY;
         }
-        MixParams mz = model.mix(t, z);
+        MixParams mz = model.mix(at, z);
         double zFeed = PhaseEval.chooseZ(model, mz, p, PhaseRequest.STABLE);
         double[] lnK = new double[n];
         PhaseEval.wilsonLnK(model, t, p, lnK);
@@ -99,7 +106,7 @@ public final class StabilityAnalysis {
                     lnW[i] = z[i] > 0 ? (i == c ? 0.0 : Math.log(1e-3 * z[i])) : Double.NEGATIVE_INFINITY;
                 }
             }
-            Trial r = runTrial(t, p, z, d, lnW, name, zFeed, exhaustive);
+            Trial r = runTrial(at, p, z, d, lnW, name, zFeed, exhaustive);
             iterations += r.iterations;
             if (r.warning != null) {
                 warnings.add(r.warning);
@@ -129,8 +136,8 @@ public final class StabilityAnalysis {
         String warning;
     }
 
-    private Trial runTrial(double t, double p, double[] z, double[] d, double[] lnW0, String name, double zFeed,
-                           boolean exhaustive) {
+    private Trial runTrial(CubicModel.AtTemperature at, double p, double[] z, double[] d, double[] lnW0, String name,
+                           double zFeed, boolean exhaustive) {
         int n = z.length;
         double[] lnW = lnW0.clone();
         double[] w = new double[n];
@@ -150,7 +157,7 @@ public final class StabilityAnalysis {
         double gmax = Double.NaN;
         for (; it < SS_ITER; it++) {
             double sumW = toMoles(lnW, w);
-            zTrial = PhaseEval.lnPhi(model, t, p, w, PhaseRequest.STABLE, lnPhi);
+            zTrial = PhaseEval.lnPhi(model, at, p, w, PhaseRequest.STABLE, lnPhi);
             tm = 1.0;
             gmax = 0;
             for (int i = 0; i < n; i++) {
@@ -212,13 +219,13 @@ public final class StabilityAnalysis {
         }
         int ssIt = it;
         if (!converged && !out.trivial) {
-            NewtonOut nw = newton(t, p, z, d, lnW);
+            NewtonOut nw = newton(at, p, z, d, lnW);
             it += nw.iterations;
             tm = nw.tm;
             gmax = nw.gmax;
             converged = nw.converged;
             toMoles(lnW, w);
-            zTrial = PhaseEval.lnPhi(model, t, p, w, PhaseRequest.STABLE, lnPhi);
+            zTrial = PhaseEval.lnPhi(model, at, p, w, PhaseRequest.STABLE, lnPhi);
             out.trivial = isTrivial(w, z);
             if (!converged && !out.trivial) {
                 out.warning = String.format(Locale.ROOT,
@@ -259,7 +266,7 @@ public final class StabilityAnalysis {
     }
 
     /** Newton's method in alpha_i = 2 sqrt(W_i); updates lnW in place. */
-    private NewtonOut newton(double t, double p, double[] z, double[] d, double[] lnW) {
+    private NewtonOut newton(CubicModel.AtTemperature at, double p, double[] z, double[] d, double[] lnW) {
         int n = z.length;
         double[] w = new double[n];
         double[] lnPhi = new double[n];
@@ -268,17 +275,14 @@ public final class StabilityAnalysis {
         double[][] phi = new double[n][n];
         double[][] h = new double[n][n];
         double[] rhs = new double[n];
-        double[] sx = new double[n];
-        double[] so = new double[n];
         double[] trialLnW = new double[n];
         double tm = Double.NaN;
         double gmax = Double.NaN;
         for (int it = 1; it <= NEWTON_ITER; it++) {
             double sumW = toMoles(lnW, w);
-            MixParams m = model.mix(t, w);
+            MixParams m = model.mix(at, w);
             double zz = PhaseEval.chooseZ(model, m, p, PhaseRequest.STABLE);
             model.lnPhi(m, p, zz, lnPhi);
-            PhaseRequest branch = PhaseEval.branchOf(model, m, p, zz);
             tm = tmOf(z, d, lnW, lnPhi, g);
             gmax = 0;
             for (int i = 0; i < n; i++) {
@@ -292,7 +296,7 @@ public final class StabilityAnalysis {
             if (isTrivial(w, z)) {
                 return new NewtonOut(it - 1, tm, gmax, false);
             }
-            PhaseEval.dLnPhiDn(model, t, p, w, branch, lnPhi, phi, sx, so);
+            model.lnPhiDerivatives(at, m, w, p, zz, null, null, phi);
             double shift = 0;
             boolean accepted = false;
             for (int attempt = 0; attempt < 8 && !accepted; attempt++) {
@@ -327,7 +331,7 @@ public final class StabilityAnalysis {
                     }
                 }
                 toMoles(trialLnW, w);
-                PhaseEval.lnPhi(model, t, p, w, PhaseRequest.STABLE, lnPhi);
+                PhaseEval.lnPhi(model, at, p, w, PhaseRequest.STABLE, lnPhi);
                 double tmNew = tmOf(z, d, trialLnW, lnPhi, null);
                 if (tmNew <= tm + 1e-12 * Math.max(1, Math.abs(tm))) {
                     accepted = true;
