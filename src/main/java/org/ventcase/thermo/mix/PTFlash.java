@@ -44,7 +44,7 @@ public final class PTFlash {
     static final double TOL = 1e-10;
     private static final int SS_MAX = 100;
     private static final int SS_BEFORE_NEWTON = 25;
-    private static final int NEWTON_MAX = 50;
+    private static final int NEWTON_MAX = 100;
 
     private final CubicModel model;
     private final StabilityAnalysis stability;
@@ -320,6 +320,7 @@ public final class PTFlash {
         double[] sx = new double[n];
         double[] so = new double[n];
         double err = Double.NaN;
+        double shift = 0;
         for (int it = 1; it <= NEWTON_MAX; it++) {
             double vv = molesToFractions(v, y);
             double ll = molesToFractions(l, x);
@@ -346,9 +347,14 @@ public final class PTFlash {
             s.newton++;
             model.lnPhiDerivatives(at, mL, x, p, zL, null, null, phiL);
             model.lnPhiDerivatives(at, mV, y, p, zV, null, null, phiV);
-            double shift = 0;
+            // Levenberg-Marquardt-type safeguard (Michelsen 1982, part II: restricted-step Newton):
+            // where the Hessian is not positive definite - near the critical point, or far from the
+            // solution with a trial phase inside its spinodal - the Newton direction need not go
+            // downhill in G. The diagonal shift is kept between iterations: raised until the step is
+            // a descent direction that lowers G, lowered again after each success, so the method
+            // returns to pure Newton (quadratic convergence) close to the solution.
             boolean accepted = false;
-            for (int attempt = 0; attempt < 10 && !accepted; attempt++) {
+            for (int attempt = 0; attempt < 16 && !accepted; attempt++) {
                 for (int i = 0; i < n; i++) {
                     for (int j = 0; j < n; j++) {
                         if (z[i] > 0 && z[j] > 0) {
@@ -357,10 +363,18 @@ public final class PTFlash {
                             h[i][j] = 0;
                         }
                     }
-                    h[i][i] += z[i] > 0 ? 1 / v[i] + 1 / l[i] + shift * (1 / v[i] + 1 / l[i]) : 1.0;
+                    h[i][i] += z[i] > 0 ? (1 + shift) * (1 / v[i] + 1 / l[i]) : 1.0;
                     dv[i] = -g[i];
                 }
                 if (!PhaseEval.solve(h, dv)) {
+                    shift = shift == 0 ? 0.1 : shift * 10;
+                    continue;
+                }
+                double slope = 0;
+                for (int i = 0; i < n; i++) {
+                    slope += g[i] * dv[i];
+                }
+                if (!(slope < 0)) {
                     shift = shift == 0 ? 0.1 : shift * 10;
                     continue;
                 }
@@ -375,12 +389,12 @@ public final class PTFlash {
                         step = Math.min(step, 0.9 * (z[i] - v[i]) / dv[i]);
                     }
                 }
-                for (int half = 0; half < 12 && !accepted; half++) {
+                for (int half = 0; half < 4 && !accepted; half++) {
                     for (int i = 0; i < n; i++) {
                         vt[i] = z[i] > 0 ? v[i] + step * dv[i] : 0;
                     }
                     double gNew = gibbsOf(at, p, z, vt, sx, so);
-                    if (gNew <= gibbs + 1e-14 * Math.abs(gibbs)) {
+                    if (gNew <= gibbs + 1e-4 * step * slope + 1e-14 * Math.abs(gibbs)) {
                         accepted = true;
                         for (int i = 0; i < n; i++) {
                             v[i] = vt[i];
@@ -390,7 +404,9 @@ public final class PTFlash {
                         step *= 0.5;
                     }
                 }
-                if (!accepted) {
+                if (accepted) {
+                    shift = shift < 1e-3 ? 0 : shift / 10;
+                } else {
                     shift = shift == 0 ? 0.1 : shift * 10;
                 }
             }
