@@ -73,7 +73,8 @@ public final class DisplayUnits {
         if (!Double.isFinite(si)) {
             throw new IllegalArgumentException("not a finite " + k + " value: " + si);
         }
-        return String.format(Locale.ROOT, "%." + decimals(k, s) + "f %s", convert(k, si, s), unit(k, s));
+        // a no-break space keeps a number and its unit on one line
+        return String.format(Locale.ROOT, "%." + decimals(k, s) + "f\u00A0%s", convert(k, si, s), unit(k, s));
     }
 
     private static double convert(Kind k, double si, UnitSystem s) {

@@ -249,8 +249,8 @@ public final class SheetModels {
                     u.value(Kind.MASS_FLOW, c.reliefLoadKgPerS()), false));
         }
         return new Figure.LineChart("Fire relief load against fill level, all other inputs as in the case. "
-                + "The load follows the fire-exposed wetted area (Q = C F A^0.82) and is flat once the liquid "
-                + "stands above the fire height.", "Liquid level, % of vessel volume",
+                + "The load follows the fire-exposed wetted area (Q = C F A^0.82) and is flat where the fire "
+                + "zone, not the liquid, limits the wetted area.", "Liquid level, % of vessel volume",
                 "Relief load, " + u.unit(Kind.MASS_FLOW),
                 List.of(new Figure.Series("Relief load W", x, y, false)), markers);
     }

@@ -22,7 +22,10 @@ final class VesselDrawing {
     }
 
     /** A label to place on one side, pushed apart vertically from its neighbours. */
-    private record SideLabel(String text, float y) {
+    private record SideLabel(String text, float y, float anchorX, float anchorY) {
+        SideLabel(String text, float y) {
+            this(text, y, Float.NaN, Float.NaN);
+        }
     }
 
     /** Scene extent in m: {width, height above grade}, with the padding the drawing adds. */
@@ -146,6 +149,8 @@ final class VesselDrawing {
         List<SideLabel> left = new ArrayList<>();
         if (e > 0) {
             dimension(c, dimX, gradeY, dimX, lo[1]);
+            float lowX = horizontal ? vesselLeft : (vesselLeft + vesselRight) / 2;
+            c.dashed(dimX - 3, lo[1], lowX, lo[1], 0.3f, PdfCanvas.MUTED, 1f, 1.5f);
             left.add(new SideLabel(s.labels().elevation(), (gradeY + lo[1]) / 2));
         }
         left.add(new SideLabel(s.labels().level(), levelY));
@@ -161,46 +166,43 @@ final class VesselDrawing {
         // leader from the level label to the vessel wall
         c.dashed(areaX - 4, levelY, vesselLeft, levelY, 0.3f, PdfCanvas.ACCENT, 1f, 1.5f);
 
-        // dimension: diameter (right of the vessel) and tangent length (above)
-        float ddx = vesselRight + 10;
-        float[] dBottom = horizontal || sphere ? lo : m.at(width, e + d1);
-        float[] dTop = horizontal || sphere ? hi : m.at(width, e + d1);
-        if (horizontal || sphere) {
-            dimension(c, ddx, dBottom[1], ddx, dTop[1]);
-        } else {
-            float[] a = m.at(0, e + d1 + s.tangentLengthM() / 2);
-            float[] b = m.at(width, e + d1 + s.tangentLengthM() / 2);
-            dimension(c, a[0], a[1], b[0], b[1]);
-        }
+        // dimensions: horizontal and sphere: diameter on the right, tangent length above;
+        // vertical: diameter above the top head, tangent length on the right
         List<SideLabel> right = new ArrayList<>();
+        float labelX = areaX + areaW + 8;
         right.add(new SideLabel(s.labels().fireHeight(), fireY + 3));
-        float dMid = horizontal || sphere ? (dBottom[1] + dTop[1]) / 2 : m.at(0, e + d1 + s.tangentLengthM() / 2)[1];
-        right.add(new SideLabel(s.labels().diameter(), dMid));
-        if (!sphere) {
+        float ddx = vesselRight + 10;
+        if (horizontal || sphere) {
+            dimension(c, ddx, lo[1], ddx, hi[1]);
+            float mid = (lo[1] + hi[1]) / 2;
+            right.add(new SideLabel(s.labels().diameter(), mid - 2, ddx + 3, mid));
             if (horizontal) {
                 float[] a = m.at(d1, e + height);
                 float[] b = m.at(d1 + s.tangentLengthM(), e + height);
                 float y = a[1] + 8;
                 dimension(c, a[0], y, b[0], y);
                 c.textCentre(s.labels().length(), (a[0] + b[0]) / 2, y + 3, c.regular, LABEL_SIZE, PdfCanvas.INK);
-            } else {
-                float[] a = m.at(width, e + d1);
-                float[] b = m.at(width, e + d1 + s.tangentLengthM());
-                float x = a[0] + 10;
-                dimension(c, x, a[1], x, b[1]);
-                right.add(new SideLabel(s.labels().length(), (a[1] + b[1]) / 2 + 10));
             }
+        } else {
+            float y = hi[1] + 8;
+            dimension(c, vesselLeft, y, vesselRight, y);
+            c.textCentre(s.labels().diameter(), (vesselLeft + vesselRight) / 2, y + 3, c.regular, LABEL_SIZE,
+                    PdfCanvas.INK);
+            float[] a = m.at(width, e + d1);
+            float[] b = m.at(width, e + d1 + s.tangentLengthM());
+            dimension(c, ddx, a[1], ddx, b[1]);
+            float mid = (a[1] + b[1]) / 2;
+            right.add(new SideLabel(s.labels().length(), mid - 2, ddx + 3, mid));
         }
-        right.add(new SideLabel(s.labels().fireArea(), fireLevelY));
         placeLeft(c, left, areaX - 6, by + 2, by + bh - 4);
-        placeRight(c, right, Math.max(vesselRight + 24, areaX + areaW - 40), by + 2, by + bh - 4, bx + bw);
+        placeRight(c, right, labelX, by + 2, by + bh - 4, bx + bw);
         // legend top left
         float ly = by + bh - 6;
         float lx = bx + 2;
         c.fillRect(lx, ly - 6, 10, 6, PdfCanvas.LIQUID);
         c.text("liquid", lx + 14, ly - 6, c.regular, LABEL_SIZE, PdfCanvas.MUTED);
         c.line(lx, ly - 14, lx + 10, ly - 14, 2.4f, PdfCanvas.FIRE);
-        c.text("fire-exposed wetted wall", lx + 14, ly - 16.5f, c.regular, LABEL_SIZE, PdfCanvas.MUTED);
+        c.text(s.labels().fireArea(), lx + 14, ly - 16.5f, c.regular, LABEL_SIZE, PdfCanvas.MUTED);
         c.dashed(lx, ly - 25, lx + 10, ly - 25, 0.7f, PdfCanvas.FIRE, 3f, 1.5f);
         c.text("fire height", lx + 14, ly - 27.5f, c.regular, LABEL_SIZE, PdfCanvas.MUTED);
     }
@@ -296,7 +298,7 @@ final class VesselDrawing {
         float last = lo - gap;
         for (SideLabel l : sorted) {
             float y = Math.max(l.y(), last + gap);
-            out.add(new SideLabel(l.text(), y));
+            out.add(new SideLabel(l.text(), y, l.anchorX(), l.anchorY()));
             last = y;
         }
         // if the top overflows, shift everything down
@@ -304,7 +306,7 @@ final class VesselDrawing {
             float shift = last - hi;
             List<SideLabel> moved = new ArrayList<>();
             for (SideLabel l : out) {
-                moved.add(new SideLabel(l.text(), Math.max(lo, l.y() - shift)));
+                moved.add(new SideLabel(l.text(), Math.max(lo, l.y() - shift), l.anchorX(), l.anchorY()));
             }
             return moved;
         }
@@ -323,6 +325,15 @@ final class VesselDrawing {
         float max = limit - x;
         for (SideLabel l : spread(labels, lo + 3, hi)) {
             List<String> lines = PdfCanvas.wrap(l.text(), c.regular, LABEL_SIZE, max);
+            if (!Float.isNaN(l.anchorX())) {
+                c.cs.setStrokingColor(PdfCanvas.MUTED[0], PdfCanvas.MUTED[1], PdfCanvas.MUTED[2]);
+                c.cs.setLineWidth(0.3f);
+                c.cs.setLineDashPattern(new float[] {1f, 1.5f}, 0);
+                c.cs.moveTo(l.anchorX(), l.anchorY());
+                c.cs.lineTo(x - 3, l.y());
+                c.cs.stroke();
+                c.cs.setLineDashPattern(new float[0], 0);
+            }
             float y = l.y() - 2.5f;
             for (String line : lines) {
                 c.text(line, x, y, c.regular, LABEL_SIZE, PdfCanvas.INK);
