@@ -406,8 +406,11 @@ public final class CalculationSheet {
                 }
                 t.text(cells[i][0], x + 5, gridTop - 8, regular, 6f, PdfCanvas.MUTED);
                 String v = cells[i][1];
-                List<String> lines = PdfCanvas.wrap(v, bold, 8f, cw - 10);
-                t.text(lines.isEmpty() ? "" : lines.get(0) + (lines.size() > 1 ? "…" : ""), x + 5, yb + 5, bold, 8f,
+                // a long entry is set smaller to fit its cell (down to 5.5 pt), and cut with an ellipsis only beyond that
+                float vw = PdfCanvas.width(bold, 8f, v);
+                float sz = vw <= cw - 10 ? 8f : Math.max(5.5f, 8f * (cw - 10) / vw);
+                List<String> lines = PdfCanvas.wrap(v, bold, sz, cw - 10);
+                t.text(lines.isEmpty() ? "" : lines.get(0) + (lines.size() > 1 ? "…" : ""), x + 5, yb + 5, bold, sz,
                         PdfCanvas.INK);
                 x += cw;
             }
