@@ -26,8 +26,9 @@ import picocli.CommandLine.Spec;
                 "First-pass estimates only: final relief design must be verified by a qualified engineer under "
                         + "the applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) "
                         + "and local regulations."},
-        subcommands = {DemoCommand.class, PropsCommand.class, SatCommand.class, VesselCommand.class,
-                InventoryCommand.class, FlashCommand.class, EnvelopeCommand.class, NewCommand.class, CheckCommand.class,
+        subcommands = {DemoCommand.class, SheetCommand.class, PropsCommand.class, SatCommand.class,
+                VesselCommand.class, InventoryCommand.class, FlashCommand.class, EnvelopeCommand.class,
+                NewCommand.class, CheckCommand.class,
                 CommandLine.HelpCommand.class},
         footer = ExitCode.HELP_LIST)
 public final class Main implements Callable<Integer> {

@@ -66,6 +66,26 @@ final class HeadGeometry {
      * Builds the geometry of {@code head} on a shell of inside diameter {@code diameter}, checking
      * the diameter-dependent limits and naming the field as {@code field + ".depth"} etc.
      */
+    /**
+     * Points along the head's inside profile, from the tangent line (r = R, z = 0) to the head's
+     * outermost point on the axis (r = 0, z = depth), {@code perPiece} + 1 points per profile piece
+     * (shared end points listed once). A flat head gives the two ends of its plate.
+     */
+    double[][] profile(int perPiece) {
+        java.util.List<double[]> pts = new java.util.ArrayList<>();
+        pts.add(new double[] {radius, 0.0});
+        for (ProfilePiece p : pieces) {
+            for (int i = 1; i <= perPiece; i++) {
+                double t = p.t0() + (p.t1() - p.t0()) * i / perPiece;
+                pts.add(new double[] {p.r(t), p.z(t)});
+            }
+        }
+        if (pieces.isEmpty()) {
+            pts.add(new double[] {0.0, 0.0});
+        }
+        return pts.toArray(new double[0][]);
+    }
+
     static HeadGeometry of(Head head, double diameter, String field) {
         double r = diameter / 2.0;
         List<ProfilePiece> pieces = new ArrayList<>();

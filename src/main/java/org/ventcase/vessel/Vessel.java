@@ -184,6 +184,25 @@ public final class Vessel {
     }
 
     /**
+     * The inside profile of the first (left/bottom) or second (right/top) head, for drawings:
+     * points (r, z), r the distance from the vessel axis and z the axial distance outward from
+     * the tangent line, both in m, running from (D/2, 0) to (0, head depth). Each curved piece of
+     * the profile (ellipse quadrant; knuckle and crown arcs; hemisphere; cone line) is sampled at
+     * {@code perPiece} equal parameter steps. Empty for a sphere (see {@link #diameter()}).
+     *
+     * @param first    true for the left/bottom head, false for the right/top head
+     * @param perPiece samples per profile piece, 1..1000
+     */
+    public java.util.List<double[]> headProfile(boolean first, int perPiece) {
+        InvalidInputException.requireInRange("perPiece", perPiece, 1, 1000, "");
+        if (shape == Shape.SPHERE) {
+            return java.util.List.of();
+        }
+        double[][] pts = (first ? this.first : this.second).profile(perPiece);
+        return java.util.List.of(pts);
+    }
+
+    /**
      * Outside surface area, m2, when a wall thickness t is given: the area of the same vessel
      * with outside dimensions D + 2t and each head radius or depth grown by t (exact for shells,
      * spheres, hemispheres and torispherical arcs, whose offset surfaces are again arcs; an

@@ -36,7 +36,9 @@ class LayeringTest {
                     "org.apache.pdfbox", "javafx"),
             "inventory", List.of("org.ventcase.relief", "org.ventcase.device", "org.ventcase.casefile",
                     "org.ventcase.cli", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx"),
-            "casefile", List.of("org.ventcase.cli", "picocli", "org.apache.pdfbox", "javafx"));
+            "casefile", List.of("org.ventcase.cli", "picocli", "org.apache.pdfbox", "javafx"),
+            "report", List.of("org.ventcase.cli", "picocli", "com.fasterxml", "javafx"),
+            "cli", List.of("org.apache.pdfbox", "javafx"));
 
     @Test
     void packagesImportOnlyWhatTheirLayerAllows() throws IOException {
@@ -59,6 +61,26 @@ class LayeringTest {
                                     || e.getKey().equals("common") && l.contains(bad)) {
                                 violations.add(f + ": " + l);
                             }
+                        }
+                    }
+                }
+            }
+        }
+        assertTrue(violations.isEmpty(), String.join("\n", violations));
+    }
+
+    @Test
+    void reportTakesOnlyTheTextBlocksFromCasefile() throws IOException {
+        List<String> violations = new ArrayList<>();
+        Path dir = SRC.resolve("report");
+        if (Files.isDirectory(dir)) {
+            try (Stream<Path> files = Files.walk(dir)) {
+                for (Path f : (Iterable<Path>) files.filter(p -> p.toString().endsWith(".java"))::iterator) {
+                    for (String line : Files.readAllLines(f)) {
+                        String l = line.trim();
+                        if (l.startsWith("import org.ventcase.casefile.")
+                                && !l.equals("import org.ventcase.casefile.Templates;")) {
+                            violations.add(f + ": " + l);
                         }
                     }
                 }

@@ -1,0 +1,157 @@
+package org.ventcase.report;
+
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.apache.pdfbox.pdmodel.font.PDFont;
+
+/**
+ * Thin drawing helpers over one page's content stream: text in the sheet's fonts, wrapping,
+ * lines, rectangles and circles, with the sheet's palette. Coordinates in PDF points, origin at
+ * the bottom left of the page.
+ */
+final class PdfCanvas {
+
+    /** Grey levels and tints of the sheet, one place. */
+    static final float[] INK = {0.12f, 0.12f, 0.13f};
+    static final float[] MUTED = {0.40f, 0.41f, 0.43f};
+    static final float[] RULE = {0.62f, 0.63f, 0.65f};
+    static final float[] HAIRLINE = {0.82f, 0.83f, 0.84f};
+    static final float[] HEADER_FILL = {0.925f, 0.93f, 0.935f};
+    static final float[] EMPHASIS_FILL = {0.88f, 0.915f, 0.95f};
+    static final float[] ACCENT = {0.19f, 0.33f, 0.49f};
+    static final float[] LIQUID = {0.80f, 0.86f, 0.92f};
+    static final float[] FIRE = {0.78f, 0.36f, 0.20f};
+    static final float[] FIRE_TINT = {0.97f, 0.88f, 0.83f};
+    static final float[] WARNING_FILL = {0.985f, 0.955f, 0.90f};
+    static final float[] WARNING_RULE = {0.80f, 0.55f, 0.20f};
+
+    final PDPageContentStream cs;
+    final PDFont regular;
+    final PDFont bold;
+
+    PdfCanvas(PDPageContentStream cs, PDFont regular, PDFont bold) {
+        this.cs = cs;
+        this.regular = regular;
+        this.bold = bold;
+    }
+
+    /** Replaces characters the fonts cannot show as text (controls, tabs) with spaces. */
+    static String clean(String s) {
+        StringBuilder sb = new StringBuilder(s.length());
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            sb.append(Character.isISOControl(c) ? ' ' : c);
+        }
+        return sb.toString();
+    }
+
+    static float width(PDFont font, float size, String s) {
+        try {
+            return font.getStringWidth(clean(s)) / 1000f * size;
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    /**
+     * Breaks text into lines no wider than {@code max}: at spaces where possible, inside a word
+     * only when the word alone is too wide. Line breaks in the text are kept.
+     */
+    static List<String> wrap(String text, PDFont font, float size, float max) {
+        List<String> lines = new ArrayList<>();
+        for (String para : clean(text.replace("\r", "")).split("\n", -1)) {
+            String[] words = para.split(" ");
+            StringBuilder line = new StringBuilder();
+            for (String w : words) {
+                if (w.isEmpty()) {
+                    continue;
+                }
+                String trial = line.length() == 0 ? w : line + " " + w;
+                if (width(font, size, trial) <= max) {
+                    line.setLength(0);
+                    line.append(trial);
+                    continue;
+                }
+                if (line.length() > 0) {
+                    lines.add(line.toString());
+                    line.setLength(0);
+                }
+                String rest = w;
+                while (width(font, size, rest) > max) {
+                    int n = rest.length() - 1;
+                    while (n > 1 && width(font, size, rest.substring(0, n)) > max) {
+                        n--;
+                    }
+                    lines.add(rest.substring(0, n));
+                    rest = rest.substring(n);
+                }
+                line.append(rest);
+            }
+            lines.add(line.toString());
+        }
+        return lines;
+    }
+
+    void text(String s, float x, float y, PDFont font, float size, float[] color) throws IOException {
+        String t = clean(s);
+        if (t.isEmpty()) {
+            return;
+        }
+        cs.beginText();
+        cs.setFont(font, size);
+        cs.setNonStrokingColor(color[0], color[1], color[2]);
+        cs.newLineAtOffset(x, y);
+        cs.showText(t);
+        cs.endText();
+    }
+
+    void textRight(String s, float xRight, float y, PDFont font, float size, float[] color) throws IOException {
+        text(s, xRight - width(font, size, s), y, font, size, color);
+    }
+
+    void textCentre(String s, float xCentre, float y, PDFont font, float size, float[] color) throws IOException {
+        text(s, xCentre - width(font, size, s) / 2, y, font, size, color);
+    }
+
+    void line(float x0, float y0, float x1, float y1, float w, float[] color) throws IOException {
+        cs.setStrokingColor(color[0], color[1], color[2]);
+        cs.setLineWidth(w);
+        cs.moveTo(x0, y0);
+        cs.lineTo(x1, y1);
+        cs.stroke();
+    }
+
+    void dashed(float x0, float y0, float x1, float y1, float w, float[] color, float on, float off)
+            throws IOException {
+        cs.setLineDashPattern(new float[] {on, off}, 0);
+        line(x0, y0, x1, y1, w, color);
+        cs.setLineDashPattern(new float[0], 0);
+    }
+
+    void fillRect(float x, float y, float w, float h, float[] color) throws IOException {
+        cs.setNonStrokingColor(color[0], color[1], color[2]);
+        cs.addRect(x, y, w, h);
+        cs.fill();
+    }
+
+    void strokeRect(float x, float y, float w, float h, float lw, float[] color) throws IOException {
+        cs.setStrokingColor(color[0], color[1], color[2]);
+        cs.setLineWidth(lw);
+        cs.addRect(x, y, w, h);
+        cs.stroke();
+    }
+
+    /** Adds a circle to the current path (four Bezier arcs). */
+    void circlePath(float cx, float cy, float r) throws IOException {
+        float k = 0.5523f * r;
+        cs.moveTo(cx + r, cy);
+        cs.curveTo(cx + r, cy + k, cx + k, cy + r, cx, cy + r);
+        cs.curveTo(cx - k, cy + r, cx - r, cy + k, cx - r, cy);
+        cs.curveTo(cx - r, cy - k, cx - k, cy - r, cx, cy - r);
+        cs.curveTo(cx + k, cy - r, cx + r, cy - k, cx + r, cy);
+        cs.closePath();
+    }
+}

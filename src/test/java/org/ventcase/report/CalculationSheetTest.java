@@ -1,0 +1,263 @@
+package org.ventcase.report;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.geom.Rectangle2D;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.stream.Stream;
+
+import javax.imageio.ImageIO;
+
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.cos.COSName;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.PDPage;
+import org.apache.pdfbox.pdmodel.PDResources;
+import org.apache.pdfbox.pdmodel.common.PDRectangle;
+import org.apache.pdfbox.pdmodel.font.PDFont;
+import org.apache.pdfbox.rendering.PDFRenderer;
+import org.apache.pdfbox.text.PDFTextStripper;
+import org.apache.pdfbox.text.PDFTextStripperByArea;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.ventcase.casefile.Templates;
+import org.ventcase.relief.WettedFireResult;
+
+/** The written PDF, read back with PDFBox: content, title blocks, fonts, sizes, metadata. */
+class CalculationSheetTest {
+
+    @TempDir
+    Path dir;
+
+    /** Top of the body below a one-line title block, in points from the top of the page. */
+    private static final float BODY_TOP = CalculationSheet.MARGIN_TOP + 56 + 4;
+
+    private record Sheet(List<String> titleBlocks, String body, String all, int pages, PDRectangle size) {
+    }
+
+    private static String norm(String s) {
+        return s.replaceAll("[\\s\\u00A0]+", " ");
+    }
+
+    private Sheet write(SheetModel m, CalculationSheet.PageSize size, String name) throws IOException {
+        Path pdf = dir.resolve(name);
+        CalculationSheet.write(m, pdf, size);
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            List<String> blocks = new ArrayList<>();
+            StringBuilder body = new StringBuilder();
+            for (PDPage page : doc.getPages()) {
+                PDRectangle box = page.getMediaBox();
+                PDFTextStripperByArea area = new PDFTextStripperByArea();
+                area.addRegion("title", new Rectangle2D.Float(0, 0, box.getWidth(), BODY_TOP));
+                area.addRegion("body", new Rectangle2D.Float(0, BODY_TOP, box.getWidth(),
+                        box.getHeight() - BODY_TOP - CalculationSheet.MARGIN_BOTTOM - 8));
+                area.extractRegions(page);
+                blocks.add(norm(area.getTextForRegion("title")));
+                body.append(area.getTextForRegion("body")).append('\n');
+            }
+            String all = new PDFTextStripper().getText(doc);
+            return new Sheet(blocks, norm(body.toString()), norm(all), doc.getNumberOfPages(),
+                    doc.getPage(0).getMediaBox());
+        }
+    }
+
+    private static String f(String fmt, double v) {
+        return String.format(Locale.ROOT, fmt, v);
+    }
+
+    @Test
+    void everyResultNumberAppearsWithItsUnit() throws IOException {
+        WettedFireResult r = SheetFixtures.bullet();
+        Sheet s = write(SheetModels.from(r, SheetFixtures.identity()), CalculationSheet.PageSize.A4, "si.pdf");
+        List<String> expected = List.of(
+                f("%.1f mm2", r.sizing().areaMm2()),
+                f("%.4f in2", r.sizing().areaMm2() / 645.16),
+                r.orifice().designation() + " (API Std 526), effective area " + f("%.1f mm2", r.orifice().selectedAreaMm2()),
+                f("%.1f kg/h", r.reliefLoadKgPerS() * 3600),
+                f("%.1f kPa abs", r.relieving().relievingPressurePa() / 1e3),
+                f("%.2f °C", r.relief().temperatureK() - 273.15),
+                f("%.2f kJ/kg", r.latentHeat().usedJPerKg() / 1e3),
+                "Compressibility Z (vapour root) " + f("%.4f", r.relievedVapor().z()),
+                "k = Cp/Cv, ideal gas (used for sizing) " + f("%.4f", r.relievedVapor().kIdeal()),
+                f("%.3f kg/kmol", r.relievedVapor().molarMass()),
+                "Liquid mass " + f("%.1f kg", r.liquidMassKg()),
+                "Vapour mass " + f("%.1f kg", r.vaporMassKg()),
+                "Wetted area at the liquid level " + f("%.3f m2", r.vessel().wettedArea()),
+                "Fire-exposed wetted area " + f("%.3f m2", r.vessel().fire().area()),
+                f("%.1f %%", r.orifice().marginPercent()));
+        for (String e : expected) {
+            assertTrue(s.body().contains(e), "missing on the sheet: " + e);
+        }
+        // the trace is printed as computed
+        for (var step : r.trace()) {
+            assertTrue(s.body().contains(norm(step.title())), step.title());
+            for (String v : step.outputs().values()) {
+                assertTrue(s.body().contains(norm(v)), "trace output " + v);
+            }
+        }
+    }
+
+    @Test
+    void usSheetLeadsWithCustomaryUnits() throws IOException {
+        WettedFireResult r = SheetFixtures.bullet();
+        Sheet s = write(SheetModels.from(r, SheetFixtures.identity(), UnitSystem.US), CalculationSheet.PageSize.LETTER,
+                "us.pdf");
+        // Definitions: in2 = mm2 / 645.16; lb/h = kg/s x 3600 / 0.45359237; psi = Pa / 6894.757
+        assertTrue(s.body().contains(f("%.4f in2", r.sizing().areaMm2() / 645.16) + " ["
+                + f("%.1f mm2", r.sizing().areaMm2()) + "]"), "required area in2 [mm2]");
+        // the loads table wraps "lb/h [kg/h]" in its narrow column, so the two parts are looked for apart
+        assertTrue(s.body().contains(f("%.0f lb/h", r.reliefLoadKgPerS() * 3600 / 0.45359237)));
+        assertTrue(s.body().contains("[" + f("%.1f kg/h", r.reliefLoadKgPerS() * 3600) + "]"));
+        assertTrue(s.body().contains(f("%.2f psia", r.relieving().relievingPressurePa() / 6894.757293168361)));
+        assertTrue(s.body().contains("largest: 95.0 % of volume, "), "chart marker key");
+    }
+
+    @Test
+    void cautionsAndCodeDeferralAreOnTheSheet() throws IOException {
+        SheetModel m = SheetModels.from(SheetFixtures.bullet(), SheetFixtures.identity());
+        Sheet s = write(m, CalculationSheet.PageSize.A4, "text.pdf");
+        for (String p : SheetModels.paragraphs(Templates.text("cautions").orElseThrow())) {
+            assertTrue(s.body().contains(norm(p)), "caution: " + p);
+        }
+        assertTrue(s.body().contains(norm(m.deferral())), "deferral");
+        assertTrue(s.body().contains("ASME BPVC Section VIII"));
+        assertTrue(s.body().contains("qualified engineer"));
+        for (String w : m.warnings()) {
+            assertTrue(s.body().contains(norm(w)), "warning: " + w);
+        }
+    }
+
+    @Test
+    void titleBlockOnEveryPageWithPageCount() throws IOException {
+        Sheet s = write(SheetModels.from(SheetFixtures.bullet(), SheetFixtures.identity()),
+                CalculationSheet.PageSize.A4, "pages.pdf");
+        assertTrue(s.pages() >= 4, "pages: " + s.pages());
+        for (int i = 0; i < s.pages(); i++) {
+            String t = s.titleBlocks().get(i);
+            assertTrue(t.contains("Test bullet T-0001 (invented): fire relief basis"), t);
+            assertTrue(t.contains("T-0001") && t.contains("2026-02-03") && t.contains("A. Tester (invented)"), t);
+            assertTrue(t.contains("page " + (i + 1) + " of " + s.pages()), t);
+        }
+        assertTrue(s.all().contains("0123456789abcdef0123456789abcdef0123456789abcdef0123456789abcdef"), "input hash");
+    }
+
+    @Test
+    void noUndefinedValuesOnAnySheet() throws IOException {
+        for (WettedFireResult r : List.of(SheetFixtures.bullet(), SheetFixtures.drum(), SheetFixtures.sphere())) {
+            for (UnitSystem u : UnitSystem.values()) {
+                Sheet s = write(SheetModels.from(r, SheetFixtures.identity(), u), CalculationSheet.PageSize.A4,
+                        "nan-" + u + ".pdf");
+                assertFalse(s.all().contains("NaN"), "NaN on the sheet");
+                assertFalse(s.all().toLowerCase(Locale.ROOT).contains("null"), "null on the sheet");
+                assertFalse(s.all().contains("Infinity"));
+            }
+        }
+    }
+
+    @Test
+    void writerRefusesAModelThatWouldPrintNaNAndLeavesNoFile() {
+        SheetModel m = SheetModels.from(SheetFixtures.bullet(), SheetFixtures.identity());
+        SheetModel bad = new SheetModel(m.identity(), m.units(), m.revisions(), m.signOff(), m.inputs(), m.loads(),
+                m.results(), List.of("density NaN kg/m3"), m.figures(), m.method(), m.cautions(), m.deferral(),
+                m.unitNote());
+        Path pdf = dir.resolve("bad.pdf");
+        assertThrows(IllegalArgumentException.class, () -> CalculationSheet.write(bad, pdf, CalculationSheet.PageSize.A4));
+        assertFalse(Files.exists(pdf));
+    }
+
+    @Test
+    void fontsAreEmbeddedOnEveryPage() throws IOException {
+        Path pdf = dir.resolve("fonts.pdf");
+        CalculationSheet.write(SheetModels.from(SheetFixtures.bullet(), SheetFixtures.identity()), pdf,
+                CalculationSheet.PageSize.A4);
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            int fonts = 0;
+            for (PDPage page : doc.getPages()) {
+                PDResources res = page.getResources();
+                for (COSName n : res.getFontNames()) {
+                    PDFont font = res.getFont(n);
+                    assertTrue(font.isEmbedded(), font.getName() + " not embedded");
+                    assertTrue(font.getName().contains("DejaVuSans"), font.getName());
+                    fonts++;
+                }
+            }
+            assertTrue(fonts >= 2 * doc.getNumberOfPages(), "regular and bold on every page");
+        }
+    }
+
+    @Test
+    void a4AndLetterSizesAndPdfAIdentification() throws IOException {
+        SheetModel m = SheetModels.from(SheetFixtures.bullet(), SheetFixtures.identity());
+        // ISO 216: A4 = 210 x 297 mm = 595.28 x 841.89 pt; US Letter 8.5 x 11 in = 612 x 792 pt
+        Sheet a4 = write(m, CalculationSheet.PageSize.A4, "a4.pdf");
+        assertEquals(595.28, a4.size().getWidth(), 0.01);
+        assertEquals(841.89, a4.size().getHeight(), 0.01);
+        Sheet letter = write(m, CalculationSheet.PageSize.LETTER, "letter.pdf");
+        assertEquals(612, letter.size().getWidth(), 0.01);
+        assertEquals(792, letter.size().getHeight(), 0.01);
+        try (PDDocument doc = Loader.loadPDF(dir.resolve("a4.pdf").toFile())) {
+            String xmp = new String(doc.getDocumentCatalog().getMetadata().toByteArray(),
+                    java.nio.charset.StandardCharsets.UTF_8);
+            assertTrue(xmp.contains("<pdfaid:part>2</pdfaid:part>") && xmp.contains("<pdfaid:conformance>B<"));
+            assertTrue(xmp.contains(doc.getDocumentInformation().getTitle()));
+            assertEquals(1, doc.getDocumentCatalog().getOutputIntents().size());
+        }
+    }
+
+    @Test
+    void writeIsAtomicAndLeavesNoTemporaryFiles() throws IOException {
+        Path pdf = dir.resolve("atomic.pdf");
+        Files.writeString(pdf, "old");
+        CalculationSheet.write(SheetModels.from(SheetFixtures.bullet(), SheetFixtures.identity()), pdf,
+                CalculationSheet.PageSize.A4);
+        assertTrue(new String(Files.readAllBytes(pdf), 0, 5, java.nio.charset.StandardCharsets.US_ASCII)
+                .startsWith("%PDF-"));
+        try (Stream<Path> files = Files.list(dir)) {
+            assertEquals(List.of(pdf), files.toList());
+        }
+    }
+
+    /**
+     * Renders every page of the three vessel shapes to PNG under target/sheet-png (kept out of the
+     * repository) for a person to look at, and checks each page has ink on it.
+     */
+    @Test
+    void pagesRenderForEveryVesselShape() throws IOException {
+        Path out = Path.of("target", "sheet-png");
+        Files.createDirectories(out);
+        String[] names = {"bullet", "drum", "sphere"};
+        List<WettedFireResult> cases = List.of(SheetFixtures.bullet(), SheetFixtures.drum(), SheetFixtures.sphere());
+        for (int c = 0; c < cases.size(); c++) {
+            Path pdf = dir.resolve(names[c] + ".pdf");
+            CalculationSheet.write(SheetModels.from(cases.get(c), SheetFixtures.identity(),
+                    c == 1 ? UnitSystem.US : UnitSystem.SI), pdf, c == 1 ? CalculationSheet.PageSize.LETTER
+                    : CalculationSheet.PageSize.A4);
+            Files.copy(pdf, out.resolve(names[c] + ".pdf"), java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+            try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+                PDFRenderer renderer = new PDFRenderer(doc);
+                for (int i = 0; i < doc.getNumberOfPages(); i++) {
+                    BufferedImage img = renderer.renderImageWithDPI(i, 60);
+                    int dark = 0;
+                    for (int y = 0; y < img.getHeight(); y += 2) {
+                        for (int x = 0; x < img.getWidth(); x += 2) {
+                            if ((img.getRGB(x, y) & 0xff) < 128) {
+                                dark++;
+                            }
+                        }
+                    }
+                    assertTrue(dark > 100, names[c] + " page " + (i + 1) + " is blank");
+                    ImageIO.write(img, "png", out.resolve(names[c] + "-" + (i + 1) + ".png").toFile());
+                }
+            }
+        }
+    }
+}
