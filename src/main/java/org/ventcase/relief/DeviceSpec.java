@@ -39,6 +39,12 @@ public record DeviceSpec(double backPressurePa, double kd, double kb, double kc,
         return new DeviceSpec(backPressurePa, GasSizingInput.DEFAULT_KD, 1, 1, OptionalDouble.empty());
     }
 
+    /** Conventional valve in liquid service: Kd 0.65, Kw = Kc = 1, no MDMT check. */
+    public static DeviceSpec liquidValve(double backPressurePa) {
+        return new DeviceSpec(backPressurePa, org.ventcase.device.LiquidSizingInput.DEFAULT_KD, 1, 1,
+                OptionalDouble.empty());
+    }
+
     /** The same device with a minimum design metal temperature for the outlet check. */
     public DeviceSpec withMinimumDesignMetalTemperature(double kelvin) {
         return new DeviceSpec(backPressurePa, kd, kb, kc, OptionalDouble.of(kelvin));
