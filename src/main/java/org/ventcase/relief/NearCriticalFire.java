@@ -112,7 +112,7 @@ public final class NearCriticalFire {
                 excess = s.hOut - s.h;
             }
             double denom = s.v + dvdh * excess;
-            double w = in.heatW() * dvdh / denom;
+            double w = generalLoad(in.heatW(), dvdh, s.v, excess);
             double rate = in.vesselVolumeM3() * dhdT * denom / (s.v * s.v * in.heatW()); // s per K
             if (k > 0) {
                 t += 0.5 * (rate + prevRate) * dT;
@@ -164,6 +164,19 @@ public final class NearCriticalFire {
                     curve.get(gov).temperatureK(), curve.get(gov).massFlowKgPerS() * 3600));
         }
         return new NearCriticalFireResult(in, tOpen, m0, curve, gov, maxW, gf, gs, new ArrayList<>(warnings));
+    }
+
+    /**
+     * The general constant-pressure, fixed-volume balance: W = Q (dv/dh)_P / [v + (dv/dh)_P (h_out - h)].
+     *
+     * @param heatW        Q, W
+     * @param dvdh         (dv/dh)_P of the contents, m3/J
+     * @param v            specific volume of the contents, m3/kg
+     * @param hOutMinusH   h_out - h, J/kg
+     * @return W, kg/s
+     */
+    public static double generalLoad(double heatW, double dvdh, double v, double hOutMinusH) {
+        return heatW * dvdh / (v + dvdh * hOutMinusH);
     }
 
     /** Contents at (T, P): specific volume and enthalpy, the outflow phase's properties. */

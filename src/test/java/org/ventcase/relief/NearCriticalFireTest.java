@@ -16,6 +16,8 @@ import org.ventcase.thermo.DensityBasis;
 import org.ventcase.thermo.EosVariant;
 import org.ventcase.thermo.FluidProperties;
 import org.ventcase.thermo.PhaseRequest;
+import org.ventcase.thermo.PureSaturation;
+import org.ventcase.thermo.SaturationResult;
 import org.ventcase.thermo.mix.MixtureThermo;
 
 class NearCriticalFireTest {
@@ -89,6 +91,26 @@ class NearCriticalFireTest {
         double lost = c.get(0).massKg() - c.get(c.size() - 1).massKg();
         assertEquals(lost, vented, 0.005 * lost);
         assertTrue(r.warnings().stream().anyMatch(w -> w.contains("transient")));
+    }
+
+    @Test
+    void generalBalanceWithSaturatedVapourOutflowIsQOverLTimesDisplacement() {
+        // Pure n-butane, two-phase at P1 = 10 bar abs (below its critical point). Along the two-phase line at
+        // fixed P: v = v_L + q (v_V - v_L), h = h_L + q L, so (dv/dh)_P = (v_V - v_L)/L; saturated vapour
+        // leaves, h_out = h_V. The balance must give Q/L (1 - rho_V/rho_L) at any quality q (hand algebra:
+        // v + (dv/dh)(h_V - h) = v_V).
+        SaturationResult s = new PureSaturation(CubicModel.pure(EosVariant.PR78,
+                ComponentLibrary.builtIn().get("n-butane"))).atPressure(10e5, DensityBasis.TRANSLATED);
+        double vl = 1 / s.liquid().density();
+        double vv = 1 / s.vapor().density();
+        double l = s.latentHeatJkg();
+        double expected = Q / l * (1 - s.vapor().density() / s.liquid().density());
+        for (double q : new double[] {0.01, 0.3, 0.9}) {
+            double v = vl + q * (vv - vl);
+            double w = NearCriticalFire.generalLoad(Q, (vv - vl) / l, v, (1 - q) * l);
+            // Tolerance 1e-12 relative: an algebraic identity evaluated in floating point.
+            assertEquals(expected, w, 1e-12 * expected, "quality " + q);
+        }
     }
 
     @Test
