@@ -7,9 +7,14 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 
 import org.ventcase.common.ConvergenceException;
+import org.ventcase.common.PhysicalConstants;
 import org.ventcase.device.GasSizingResult;
 import org.ventcase.thermo.CubicModel;
 import org.ventcase.thermo.DensityBasis;
+import org.ventcase.thermo.MixParams;
+import org.ventcase.thermo.PhaseRequest;
+import org.ventcase.thermo.mix.SaturationPoint;
+import org.ventcase.thermo.mix.SaturationPoints;
 
 /**
  * Boil-off of a multicomponent liquid in a rigid vessel held at the relieving pressure P1, heated
@@ -107,6 +112,8 @@ public final class BoilOff {
         double[] total = new double[n];
         double[] lNew = new double[n];
         double[] x = new double[n];
+        BoilingState prev = null;
+        double nGPrev = nG;
         for (int k = 1; k <= in.steps(); k++) {
             double[] y = b.vapour();
             for (int i = 0; i < n; i++) {
@@ -117,18 +124,28 @@ public final class BoilOff {
                 sumTotal += v;
             }
             double nLNew = k == in.steps() ? nL0 * stopFraction : nL0 - k * dnL;
-            BoilingState bn = b;
+            // Predictor: extrapolate T, ln K and n_G linearly from the last two points.
+            double tGuess = b.temperatureK();
+            double[] lnK = b.lnK();
             double nGNew = nG;
+            if (prev != null) {
+                double[] lnKPrev = prev.lnK();
+                for (int i = 0; i < n; i++) {
+                    lnK[i] = 2 * lnK[i] - lnKPrev[i];
+                }
+                tGuess = 2 * tGuess - prev.temperatureK();
+                nGNew = 2 * nG - nGPrev;
+            }
             double dn = 0;
             boolean converged = false;
             boolean liquidFull = false;
+            Light lb = null;
             int it;
             for (it = 0; it < INNER_MAX; it++) {
                 // Mass balance at fixed K: A_i = N_i - y_i dn/2 = n_L' x_i' + c y_i', c = dn/2 + n_G', y' = K x'
                 // -> x_i' = A_i / (n_L' + c K_i), normalised; then the bubble point of x' updates T and K.
                 dn = sumTotal - nGNew - nLNew;
                 double c = 0.5 * dn + nGNew;
-                double[] lnK = bn.lnK();
                 double s = 0;
                 for (int i = 0; i < n; i++) {
                     double a = total[i] - 0.5 * y[i] * dn;
@@ -138,33 +155,48 @@ public final class BoilOff {
                 for (int i = 0; i < n; i++) {
                     x[i] /= s;
                 }
-                double[] yPrev = bn.vapour();
-                bn = BoilingState.at(model, basis, p1, x, bn.temperatureK(), lnK);
-                double nGNext = (vTot - nLNew * bn.liquidMolarVolume()) / bn.vapourMolarVolume();
+                double[] yPrev = new double[n];
+                double sy = 0;
+                for (int i = 0; i < n; i++) {
+                    yPrev[i] = x[i] * Math.exp(lnK[i]);
+                    sy += yPrev[i];
+                }
+                for (int i = 0; i < n; i++) {
+                    yPrev[i] /= sy;
+                }
+                lb = light(model, basis, p1, x, tGuess, lnK);
+                tGuess = lb.t;
+                lnK = lb.lnK;
+                double nGNext = (vTot - nLNew * lb.vL) / lb.vV;
                 if (!(nGNext > 0)) {
                     liquidFull = true;
                     break;
                 }
                 double change = Math.abs(nGNext - nGNew) + Math.abs(s - 1) * nLNew;
-                double[] ynn = bn.vapour();
                 for (int i = 0; i < n; i++) {
-                    change = Math.max(change, Math.abs(ynn[i] - yPrev[i]) * sumTotal);
+                    change = Math.max(change, Math.abs(lb.y[i] - yPrev[i]) * sumTotal);
                 }
                 nGNew = nGNext;
                 if (change <= INNER_TOL * sumTotal) {
-                    dn = sumTotal - nGNew - nLNew;
-                    double[] xn = bn.liquid();
-                    for (int i = 0; i < n; i++) {
-                        lNew[i] = nLNew * xn[i];
-                        double residual = total[i] - 0.5 * (y[i] + ynn[i]) * dn - nGNew * ynn[i] - lNew[i];
-                        if (!(Math.abs(residual) <= 1e-8 * sumTotal)) {
-                            throw new ConvergenceException("boil-off step (component balance)", it, residual,
-                                    String.format(Locale.ROOT, "component %s in step %d of %d",
-                                            spec.components().get(i).name(), k, in.steps()));
-                        }
-                    }
                     converged = true;
                     break;
+                }
+            }
+            BoilingState bn = b;
+            if (converged) {
+                bn = BoilingState.at(model, basis, p1, x, lb.t, lb.lnK);
+                nGNew = (vTot - nLNew * bn.liquidMolarVolume()) / bn.vapourMolarVolume();
+                dn = sumTotal - nGNew - nLNew;
+                double[] xn = bn.liquid();
+                double[] ynn = bn.vapour();
+                for (int i = 0; i < n; i++) {
+                    lNew[i] = nLNew * xn[i];
+                    double residual = total[i] - 0.5 * (y[i] + ynn[i]) * dn - nGNew * ynn[i] - lNew[i];
+                    if (!(Math.abs(residual) <= 1e-8 * sumTotal)) {
+                        throw new ConvergenceException("boil-off step (component balance)", it, residual,
+                                String.format(Locale.ROOT, "component %s in step %d of %d",
+                                        spec.components().get(i).name(), k, in.steps()));
+                    }
                 }
             }
             if (liquidFull) {
@@ -201,6 +233,8 @@ public final class BoilOff {
             ventedH += ventEnthalpy;
             double w = ventMass / dt;
             System.arraycopy(lNew, 0, lMoles, 0, n);
+            prev = b;
+            nGPrev = nG;
             nL = nLNew;
             nG = nGNew;
             u = uNew;
@@ -248,6 +282,57 @@ public final class BoilOff {
         return new BoilOffResult(in, curve, peak, w0, a0, wPeak, curve.get(peak).requiredAreaM2(),
                 100 * (curve.get(peak).requiredAreaM2() - a0) / a0, 100 * (wPeak - w0) / w0, peakVapour, peakSizing,
                 reason, bal, new ArrayList<>(warnings));
+    }
+
+    /** Bubble point and phase volumes only: the inner loop's evaluation (no full property sets). */
+    private static final class Light {
+        double t;
+        double[] y;
+        double[] lnK;
+        double vL;
+        double vV;
+    }
+
+    private static Light light(CubicModel model, DensityBasis basis, double p, double[] x, double t0, double[] lnK0) {
+        int present = 0;
+        for (double v : x) {
+            if (v > 0) {
+                present++;
+            }
+        }
+        Light l = new Light();
+        if (present == 1) {
+            BoilingState b = BoilingState.at(model, basis, p, x, t0, lnK0);
+            l.t = b.temperatureK();
+            l.y = b.vapour();
+            l.lnK = b.lnK();
+            l.vL = b.liquidMolarVolume();
+            l.vV = b.vapourMolarVolume();
+            return l;
+        }
+        SaturationPoint sp = new SaturationPoints(model).temperature(SaturationPoint.Kind.BUBBLE, p, x, t0, lnK0);
+        l.t = sp.temperatureK();
+        l.y = sp.incipientComposition();
+        double[] k = sp.kValues();
+        l.lnK = new double[k.length];
+        for (int i = 0; i < k.length; i++) {
+            l.lnK[i] = Math.log(k[i]);
+        }
+        l.vL = molarVolume(model, basis, l.t, p, x, PhaseRequest.LIQUID);
+        l.vV = molarVolume(model, basis, l.t, p, l.y, PhaseRequest.VAPOR);
+        return l;
+    }
+
+    /** Molar volume of the requested root on the density basis, as CubicModel.properties computes it. */
+    private static double molarVolume(CubicModel model, DensityBasis basis, double t, double p, double[] x,
+                                      PhaseRequest req) {
+        MixParams m = model.mix(t, x);
+        double v = model.select(m, p, req).z() * PhysicalConstants.R * t / p;
+        if (basis == DensityBasis.TRANSLATED && model.hasVolumeShift()) {
+            double vt = v - model.volumeShift(x);
+            return vt > 0 ? vt : v;
+        }
+        return v;
     }
 
     private static double area(double w, BoilingState s, MixtureSpec spec, DeviceSpec d) {
