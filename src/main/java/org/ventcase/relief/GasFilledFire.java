@@ -2,7 +2,6 @@ package org.ventcase.relief;
 
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
-import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
@@ -83,5 +82,4 @@ public final class GasFilledFire {
         return new GasFilledFireResult(in, area, rule, load, gas, gs, fPrime, aFPrimeMm2 * 1e-6, ratio, ex,
                 new ArrayList<>(warnings));
     }
-
 }
