@@ -1,0 +1,350 @@
+package org.ventcase.relief;
+
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.OptionalDouble;
+
+import org.ventcase.common.ConvergenceException;
+import org.ventcase.common.PhysicalConstants;
+import org.ventcase.device.GasSizingResult;
+import org.ventcase.thermo.CubicModel;
+import org.ventcase.thermo.DensityBasis;
+import org.ventcase.thermo.MixParams;
+import org.ventcase.thermo.PhaseRequest;
+import org.ventcase.thermo.mix.SaturationPoint;
+import org.ventcase.thermo.mix.SaturationPoints;
+
+/**
+ * Boil-off of a multicomponent liquid in a rigid vessel held at the relieving pressure P1, heated
+ * at a constant rate Q, the equilibrium vapour leaving through the relief device. The liquid's
+ * composition and temperature move as the lighter components boil away; the load curve shows
+ * how the relief rate and the required area change.
+ *
+ * <p>Model. The contents are liquid x at its bubble point T_b(x, P1) and vapour y(x), its
+ * incipient vapour, filling the fixed volume V: n_L v_L + n_G v_V = V. The state is fixed by the
+ * liquid moles L_i. Balances, with n_out moles vented of composition y and molar enthalpy H_V:
+ * <pre>
+ *   dN_i = -y_i dn_out                         (N_i = L_i + n_G y_i)
+ *   dU   = Q dt - H_V dn_out                   (U = n_L H_L + n_G H_V - P1 V)
+ * </pre>
+ * Discretisation: equal steps in liquid moles; at each step the vented moles follow from the
+ * total moles and the new state (Delta n = sum N_i - n_G' - n_L'), the liquid from
+ * L_i' = N_i - ybar_i Delta n - n_G' y_i' with ybar the mean of the vapour compositions at both
+ * ends of the step, iterated to convergence (max change below 1e-10 of the moles); the step's
+ * duration from the energy balance with the mean vented enthalpy:
+ * Q Delta t = U' - U + Delta n (H_V + H_V')/2. Both balances therefore close step by step to
+ * round-off; the result reports them. For a pure fluid every step gives exactly
+ * W = Q/L (1 - rho_V/rho_L). The relief rate of a step is its vented mass over its duration;
+ * its required area uses the vapour at the end of the step.
+ *
+ * <p>Assumptions (stated on the result): thermodynamic equilibrium between the phases at every
+ * instant, no liquid carry-over (vapour-only relief), constant P1 (the valve holds the pressure),
+ * constant Q, and the opening state taken as the stored liquid composition at its bubble point at
+ * P1 (flashing or condensation during the pressure rise before opening is not followed).
+ * Enthalpies on the density basis (see {@link BoilingState}).
+ *
+ * <p>Source: the balances are the standard open-system mass and energy balances (e.g. J.M. Smith,
+ * H.C. Van Ness, M.M. Abbott, Introduction to Chemical Engineering Thermodynamics, 7th ed., 2005,
+ * section 2.12); the fire-case use of a boil-off curve for wide-boiling mixtures is common practice
+ * (API Std 521 discusses relieving multicomponent liquids; clause not cited, from memory).
+ */
+public final class BoilOff {
+
+    /** Liquid fraction (of the initial liquid moles) taken as "exhausted". */
+    public static final double EXHAUSTED_FRACTION = 1e-3;
+    private static final int INNER_MAX = 50;
+    private static final double INNER_TOL = 1e-10;
+
+    private BoilOff() {
+    }
+
+    /** Runs the simulation. */
+    public static BoilOffResult run(BoilOffInput in) {
+        MixtureSpec spec = in.fluid();
+        CubicModel model = spec.model();
+        DensityBasis basis = spec.densityBasis();
+        LinkedHashSet<String> warnings = new LinkedHashSet<>(spec.kijWarnings());
+        double p1 = in.relievingPressurePa();
+        double q = in.heatW();
+        double vTot = in.vessel().totalVolume();
+        double h0 = in.vessel().heightOf(in.level());
+        double vl0 = in.vessel().liquidVolume(h0);
+        int n = spec.components().size();
+        double[] mw = new double[n];
+        for (int i = 0; i < n; i++) {
+            mw[i] = spec.components().get(i).molarMass() * 1e-3;
+        }
+
+        MixtureFire.Load initial = MixtureFire.load(model, spec, p1, q, true);
+        BoilingState b = initial.state();
+        warnings.addAll(b.warnings());
+        double nL = vl0 / b.liquidMolarVolume();
+        double nG = (vTot - vl0) / b.vapourMolarVolume();
+        double nL0 = nL;
+        double[] liq = b.liquid();
+        double[] lMoles = new double[n];
+        for (int i = 0; i < n; i++) {
+            lMoles[i] = nL * liq[i];
+        }
+        double u = nL * b.hLiquidJmol() + nG * b.hVapourJmol() - p1 * vTot;
+        double u0 = u;
+        double mass0 = nL * b.liquidProps().molarMass() * 1e-3 + nG * b.vapourProps().molarMass() * 1e-3;
+
+        List<BoilOffPoint> curve = new ArrayList<>();
+        List<BoilingState> states = new ArrayList<>();
+        List<Double> loads = new ArrayList<>();
+        double initialArea = area(initial.w(), b, spec, in.device());
+        curve.add(point(0, b, nL, nG, initial.w(), b.hVapourJmol() / (b.vapourProps().molarMass() * 1e-3),
+                initialArea));
+        states.add(b);
+        loads.add(initial.w());
+
+        boolean toExhaustion = in.stopLiquidFraction() == 0;
+        double stopFraction = toExhaustion ? EXHAUSTED_FRACTION : in.stopLiquidFraction();
+        double dnL = nL0 * (1 - stopFraction) / in.steps();
+        double t = 0;
+        double vented = 0;
+        double ventedH = 0;
+        BoilOffResult.StopReason reason = toExhaustion ? BoilOffResult.StopReason.LIQUID_EXHAUSTED
+                : BoilOffResult.StopReason.LIQUID_FRACTION_REACHED;
+        double[] total = new double[n];
+        double[] lNew = new double[n];
+        double[] x = new double[n];
+        BoilingState prev = null;
+        double nGPrev = nG;
+        for (int k = 1; k <= in.steps(); k++) {
+            double[] y = b.vapour();
+            for (int i = 0; i < n; i++) {
+                total[i] = lMoles[i] + nG * y[i];
+            }
+            double sumTotal = 0;
+            for (double v : total) {
+                sumTotal += v;
+            }
+            double nLNew = k == in.steps() ? nL0 * stopFraction : nL0 - k * dnL;
+            // Predictor: extrapolate T, ln K and n_G linearly from the last two points.
+            double tGuess = b.temperatureK();
+            double[] lnK = b.lnK();
+            double nGNew = nG;
+            if (prev != null) {
+                double[] lnKPrev = prev.lnK();
+                for (int i = 0; i < n; i++) {
+                    lnK[i] = 2 * lnK[i] - lnKPrev[i];
+                }
+                tGuess = 2 * tGuess - prev.temperatureK();
+                nGNew = 2 * nG - nGPrev;
+            }
+            double dn = 0;
+            boolean converged = false;
+            boolean liquidFull = false;
+            Light lb = null;
+            int it;
+            for (it = 0; it < INNER_MAX; it++) {
+                // Mass balance at fixed K: A_i = N_i - y_i dn/2 = n_L' x_i' + c y_i', c = dn/2 + n_G', y' = K x'
+                // -> x_i' = A_i / (n_L' + c K_i), normalised; then the bubble point of x' updates T and K.
+                dn = sumTotal - nGNew - nLNew;
+                double c = 0.5 * dn + nGNew;
+                double s = 0;
+                for (int i = 0; i < n; i++) {
+                    double a = total[i] - 0.5 * y[i] * dn;
+                    x[i] = a > 0 ? a / (nLNew + c * Math.exp(lnK[i])) : 0.0;
+                    s += x[i];
+                }
+                for (int i = 0; i < n; i++) {
+                    x[i] /= s;
+                }
+                double[] yPrev = new double[n];
+                double sy = 0;
+                for (int i = 0; i < n; i++) {
+                    yPrev[i] = x[i] * Math.exp(lnK[i]);
+                    sy += yPrev[i];
+                }
+                for (int i = 0; i < n; i++) {
+                    yPrev[i] /= sy;
+                }
+                lb = light(model, basis, p1, x, tGuess, lnK);
+                tGuess = lb.t;
+                lnK = lb.lnK;
+                double nGNext = (vTot - nLNew * lb.vL) / lb.vV;
+                if (!(nGNext > 0)) {
+                    liquidFull = true;
+                    break;
+                }
+                double change = Math.abs(nGNext - nGNew) + Math.abs(s - 1) * nLNew;
+                for (int i = 0; i < n; i++) {
+                    change = Math.max(change, Math.abs(lb.y[i] - yPrev[i]) * sumTotal);
+                }
+                nGNew = nGNext;
+                if (change <= INNER_TOL * sumTotal) {
+                    converged = true;
+                    break;
+                }
+            }
+            BoilingState bn = b;
+            if (converged) {
+                bn = BoilingState.at(model, basis, p1, x, lb.t, lb.lnK);
+                nGNew = (vTot - nLNew * bn.liquidMolarVolume()) / bn.vapourMolarVolume();
+                dn = sumTotal - nGNew - nLNew;
+                double[] xn = bn.liquid();
+                double[] ynn = bn.vapour();
+                for (int i = 0; i < n; i++) {
+                    lNew[i] = nLNew * xn[i];
+                    double residual = total[i] - 0.5 * (y[i] + ynn[i]) * dn - nGNew * ynn[i] - lNew[i];
+                    if (!(Math.abs(residual) <= 1e-8 * sumTotal)) {
+                        throw new ConvergenceException("boil-off step (component balance)", it, residual,
+                                String.format(Locale.ROOT, "component %s in step %d of %d",
+                                        spec.components().get(i).name(), k, in.steps()));
+                    }
+                }
+            }
+            if (liquidFull) {
+                warnings.add(String.format(Locale.ROOT, "At %.0f s the expanding liquid would fill the vessel: the "
+                        + "vapour-only boil-off model ends here; liquid or two-phase relief must be considered.", t));
+                reason = BoilOffResult.StopReason.VESSEL_LIQUID_FULL;
+                break;
+            }
+            if (!converged) {
+                throw new ConvergenceException("boil-off step (substitution on the end state)", INNER_MAX, Double.NaN,
+                        String.format(Locale.ROOT, "step %d of %d at T = %.3f K", k, in.steps(), bn.temperatureK()));
+            }
+            if (!(dn > 0)) {
+                warnings.add(String.format(Locale.ROOT, "At %.0f s no vapour leaves (the liquid's expansion takes the "
+                        + "volume): the device would close; the run ends here.", t));
+                reason = BoilOffResult.StopReason.VESSEL_LIQUID_FULL;
+                break;
+            }
+            double[] yn = bn.vapour();
+            double ventMass = 0;
+            for (int i = 0; i < n; i++) {
+                ventMass += 0.5 * (y[i] + yn[i]) * dn * mw[i];
+            }
+            double ventEnthalpy = dn * 0.5 * (b.hVapourJmol() + bn.hVapourJmol());
+            double uNew = nLNew * bn.hLiquidJmol() + nGNew * bn.hVapourJmol() - p1 * vTot;
+            double dt = (uNew - u + ventEnthalpy) / q;
+            if (!(dt > 0)) {
+                throw new ConvergenceException("boil-off step (energy balance)", k, dt, String.format(Locale.ROOT,
+                        "the step needs no heat (dt = %.3g s) at T = %.3f K: the state is not boiling normally", dt,
+                        bn.temperatureK()));
+            }
+            t += dt;
+            vented += ventMass;
+            ventedH += ventEnthalpy;
+            double w = ventMass / dt;
+            System.arraycopy(lNew, 0, lMoles, 0, n);
+            prev = b;
+            nGPrev = nG;
+            nL = nLNew;
+            nG = nGNew;
+            u = uNew;
+            b = bn;
+            warnings.addAll(bn.warnings());
+            curve.add(point(t, bn, nL, nG, w, ventEnthalpy / ventMass, area(w, bn, spec, in.device())));
+            states.add(bn);
+            loads.add(w);
+            if (t >= in.timeLimitS()) {
+                reason = BoilOffResult.StopReason.TIME_LIMIT;
+                break;
+            }
+        }
+        int peak = 0;
+        for (int i = 1; i < curve.size(); i++) {
+            if (curve.get(i).requiredAreaM2() > curve.get(peak).requiredAreaM2()) {
+                peak = i;
+            }
+        }
+        BoilingState ps = states.get(peak);
+        double wPeak = loads.get(peak);
+        RelievedFluid peakVapour = RelievedFluid.of(RelievedFluid.Phase.VAPOUR, spec, ps.vapourProps(),
+                OptionalDouble.of(ps.latentHeatJPerKg()), MixtureFire.LATENT_HEAT_DEFINITION, OptionalDouble.empty(), "");
+        GasSizingResult peakSizing = ScenarioSupport.sizeGas(wPeak, peakVapour, in.device());
+        warnings.addAll(peakSizing.warnings());
+        double massF = 0;
+        double[] xf = b.liquid();
+        double[] yf = b.vapour();
+        for (int i = 0; i < n; i++) {
+            massF += (nL * xf[i] + nG * yf[i]) * mw[i];
+        }
+        BoilOffResult.Balance bal = new BoilOffResult.Balance(mass0, massF, vented, q * t, u0, u, ventedH,
+                mass0 - massF - vented, q * t - (u - u0) - ventedH);
+        if (peak == curve.size() - 1 && curve.size() > 2) {
+            warnings.add("The largest required area is at the last point of the run: the load may rise further "
+                    + "beyond the stop condition.");
+        }
+        if (initial.latent().minimumApplied()) {
+            warnings.add(initial.latent().warning());
+        }
+        warnings.add("Boil-off model: equilibrium between liquid and vapour, vapour-only relief (no liquid "
+                + "carry-over), constant P1 and Q; the opening state is the stored liquid at its bubble point at P1.");
+        double a0 = curve.get(0).requiredAreaM2();
+        double w0 = curve.get(0).massFlowKgPerS();
+        return new BoilOffResult(in, curve, peak, w0, a0, wPeak, curve.get(peak).requiredAreaM2(),
+                100 * (curve.get(peak).requiredAreaM2() - a0) / a0, 100 * (wPeak - w0) / w0, peakVapour, peakSizing,
+                reason, bal, new ArrayList<>(warnings));
+    }
+
+    /** Bubble point and phase volumes only: the inner loop's evaluation (no full property sets). */
+    private static final class Light {
+        double t;
+        double[] y;
+        double[] lnK;
+        double vL;
+        double vV;
+    }
+
+    private static Light light(CubicModel model, DensityBasis basis, double p, double[] x, double t0, double[] lnK0) {
+        int present = 0;
+        for (double v : x) {
+            if (v > 0) {
+                present++;
+            }
+        }
+        Light l = new Light();
+        if (present == 1) {
+            BoilingState b = BoilingState.at(model, basis, p, x, t0, lnK0);
+            l.t = b.temperatureK();
+            l.y = b.vapour();
+            l.lnK = b.lnK();
+            l.vL = b.liquidMolarVolume();
+            l.vV = b.vapourMolarVolume();
+            return l;
+        }
+        SaturationPoint sp = new SaturationPoints(model).temperature(SaturationPoint.Kind.BUBBLE, p, x, t0, lnK0);
+        l.t = sp.temperatureK();
+        l.y = sp.incipientComposition();
+        double[] k = sp.kValues();
+        l.lnK = new double[k.length];
+        for (int i = 0; i < k.length; i++) {
+            l.lnK[i] = Math.log(k[i]);
+        }
+        l.vL = molarVolume(model, basis, l.t, p, x, PhaseRequest.LIQUID);
+        l.vV = molarVolume(model, basis, l.t, p, l.y, PhaseRequest.VAPOR);
+        return l;
+    }
+
+    /** Molar volume of the requested root on the density basis, as CubicModel.properties computes it. */
+    private static double molarVolume(CubicModel model, DensityBasis basis, double t, double p, double[] x,
+                                      PhaseRequest req) {
+        MixParams m = model.mix(t, x);
+        double v = model.select(m, p, req).z() * PhysicalConstants.R * t / p;
+        if (basis == DensityBasis.TRANSLATED && model.hasVolumeShift()) {
+            double vt = v - model.volumeShift(x);
+            return vt > 0 ? vt : v;
+        }
+        return v;
+    }
+
+    private static double area(double w, BoilingState s, MixtureSpec spec, DeviceSpec d) {
+        RelievedFluid f = RelievedFluid.of(RelievedFluid.Phase.VAPOUR, spec, s.vapourProps(), OptionalDouble.empty(), "",
+                OptionalDouble.empty(), "");
+        return ScenarioSupport.sizeGas(w, f, d).areaM2();
+    }
+
+    private static BoilOffPoint point(double t, BoilingState s, double nL, double nG, double w, double hOut,
+                                      double area) {
+        return new BoilOffPoint(t, s.temperatureK(), s.liquid(), s.vapour(), nL * s.liquidProps().molarMass() * 1e-3,
+                nG * s.vapourProps().molarMass() * 1e-3, w, hOut, s.vapourProps().molarMass(), s.vapourProps().z(),
+                s.vapourProps().kIdeal(), area);
+    }
+}

@@ -1,0 +1,144 @@
+package org.ventcase.relief;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.ventcase.thermo.Component;
+import org.ventcase.thermo.CubicModel;
+import org.ventcase.thermo.DensityBasis;
+import org.ventcase.thermo.FluidProperties;
+import org.ventcase.thermo.PhaseRequest;
+import org.ventcase.thermo.PureSaturation;
+import org.ventcase.thermo.SaturationResult;
+import org.ventcase.thermo.mix.MixtureThermo;
+import org.ventcase.thermo.mix.SaturationPoint;
+import org.ventcase.thermo.mix.SaturationPoints;
+
+/**
+ * A liquid at its bubble point at pressure P together with its incipient (equilibrium) vapour:
+ * the state of a boiling liquid in a vessel held at the relieving pressure.
+ *
+ * <p>Latent heat of a mixture, as used by every Ventcase fire case: the molar enthalpy of the
+ * incipient vapour minus that of the liquid, both at the bubble point (T_b, P), divided by the
+ * molar mass of the vapour: L = (H_V(T_b, P, y) - H_L(T_b, P, x)) / M_V, in J per kg of vapour.
+ * For a pure fluid it is the ordinary latent heat h_V - h_L at Tsat(P).
+ *
+ * <p>Enthalpies are on the same density basis as the volumes: with a volume translation c
+ * (v = v_cubic - c, Peneloux), H = H_cubic - P c, since the translation shifts the Gibbs energy
+ * by -P c and leaves the entropy and phase equilibrium unchanged (A. Peneloux, E. Rauzy, R. Freze,
+ * Fluid Phase Equilib. 8 (1982) 7-23). This keeps U = H - P V exact in the balances; for a pure
+ * fluid the latent heat is unaffected.
+ *
+ * @param temperatureK  bubble temperature, K
+ * @param pressurePa    Pa absolute
+ * @param liquid        liquid mole fractions (copied)
+ * @param vapour        incipient vapour mole fractions (copied)
+ * @param liquidProps   liquid-root properties at (T_b, P, x)
+ * @param vapourProps   vapour-root properties at (T_b, P, y)
+ * @param hLiquidJmol   liquid molar enthalpy, J/mol (ideal gas at 298.15 K, 101325 Pa = 0)
+ * @param hVapourJmol   vapour molar enthalpy, J/mol
+ * @param lnK           ln K_i (copied), for warm starts
+ * @param method        how the bubble point was found
+ * @param warnings      what the user must know
+ */
+public record BoilingState(double temperatureK, double pressurePa, double[] liquid, double[] vapour,
+                           FluidProperties liquidProps, FluidProperties vapourProps, double hLiquidJmol,
+                           double hVapourJmol, double[] lnK, String method, List<String> warnings) {
+
+    public BoilingState {
+        liquid = liquid.clone();
+        vapour = vapour.clone();
+        lnK = lnK.clone();
+        warnings = List.copyOf(warnings);
+    }
+
+    @Override
+    public double[] liquid() {
+        return liquid.clone();
+    }
+
+    @Override
+    public double[] vapour() {
+        return vapour.clone();
+    }
+
+    @Override
+    public double[] lnK() {
+        return lnK.clone();
+    }
+
+    /** L = (H_V - H_L) / M_V, J per kg of vapour (see the class comment). */
+    public double latentHeatJPerKg() {
+        return (hVapourJmol - hLiquidJmol) / (vapourProps.molarMass() * 1e-3);
+    }
+
+    /** Liquid molar volume on the density basis, m3/mol. */
+    public double liquidMolarVolume() {
+        return liquidProps.molarVolume();
+    }
+
+    /** Vapour molar volume on the density basis, m3/mol. */
+    public double vapourMolarVolume() {
+        return vapourProps.molarVolume();
+    }
+
+    /**
+     * The bubble point of liquid x at pressure p, with its incipient vapour.
+     *
+     * @param t0   temperature guess, K, or NaN for the Wilson estimate
+     * @param lnK0 ln K guess, or null
+     */
+    static BoilingState at(CubicModel model, DensityBasis basis, double p, double[] x, double t0, double[] lnK0) {
+        int n = x.length;
+        int present = 0;
+        int only = -1;
+        for (int i = 0; i < n; i++) {
+            if (x[i] > 0) {
+                present++;
+                only = i;
+            }
+        }
+        double t;
+        double[] y;
+        double[] lnK = new double[n];
+        List<String> warnings = new ArrayList<>();
+        String method;
+        if (present == 1) {
+            Component c = model.components().get(only);
+            SaturationResult sat = new PureSaturation(CubicModel.pure(model.variant(), c)).atPressure(p,
+                    DensityBasis.CUBIC);
+            t = sat.temperatureK();
+            y = new double[n];
+            y[only] = 1.0;
+            method = "one component present: saturation temperature by equal fugacity (PureSaturation)";
+        } else {
+            SaturationPoint sp = new SaturationPoints(model).temperature(SaturationPoint.Kind.BUBBLE, p, x, t0, lnK0);
+            t = sp.temperatureK();
+            y = sp.incipientComposition();
+            double[] k = sp.kValues();
+            for (int i = 0; i < n; i++) {
+                lnK[i] = Math.log(k[i]);
+            }
+            warnings.addAll(sp.warnings());
+            method = "bubble temperature: Newton on T with fugacity K-value updates (SaturationPoints)";
+        }
+        FluidProperties lp = model.properties(t, p, x, PhaseRequest.LIQUID, basis);
+        FluidProperties vp = model.properties(t, p, y, PhaseRequest.VAPOR, basis);
+        warnings.addAll(lp.warnings());
+        warnings.addAll(vp.warnings());
+        return new BoilingState(t, p, x, y, lp, vp, enthalpy(model, lp), enthalpy(model, vp), lnK, method, warnings);
+    }
+
+    /**
+     * Molar enthalpy of a single phase on its density basis, J/mol: ideal-gas part + residual
+     * part - P c(x) when a volume translation is in use (see the class comment).
+     */
+    static double enthalpy(CubicModel model, FluidProperties fp) {
+        double[] x = fp.composition();
+        double h = MixtureThermo.idealGasEnthalpy(model, fp.temperatureK(), x) + fp.residualEnthalpy();
+        if (fp.densityBasis() == DensityBasis.TRANSLATED) {
+            h -= fp.pressurePa() * (fp.molarVolumeCubic() - fp.molarVolume());
+        }
+        return h;
+    }
+}

@@ -1,0 +1,126 @@
+package org.ventcase.relief;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.OptionalDouble;
+
+import org.ventcase.thermo.DensityBasis;
+import org.ventcase.thermo.EosVariant;
+import org.ventcase.thermo.FluidProperties;
+
+/**
+ * The relieved fluid at relieving conditions, as a reviewer checks it: one record per scenario
+ * result, every number with the model that produced it.
+ *
+ * @param phase                 what is relieved
+ * @param temperatureK          relieving temperature T, K
+ * @param pressurePa            relieving pressure P1, Pa absolute
+ * @param componentNames        component names in order
+ * @param composition           mole fractions of the relieved fluid (copied)
+ * @param molarMass             M, kg/kmol
+ * @param z                     compressibility factor of the selected cubic root (before any
+ *                              volume translation; the Z the API 520 gas equation takes)
+ * @param density               kg/m3 on {@code densityBasis}
+ * @param densityBasis          TRANSLATED (Peneloux-type shift) or CUBIC
+ * @param kIdeal                ideal-gas Cp/Cv at T (the k of the API 520 gas equations)
+ * @param isentropicExponent    real-fluid isentropic exponent -(v/P)(Cp/Cv)(dP/dv)_T
+ * @param latentHeatJPerKg      latent heat where the scenario has one (definition in
+ *                              {@code latentHeatDefinition}), J/kg
+ * @param latentHeatDefinition  the definition used, or empty
+ * @param viscosityPaS          dynamic viscosity where a liquid is relieved, Pa s
+ * @param viscositySource       where the viscosity came from, or empty
+ * @param eos                   equation of state
+ * @param provenance            root chosen and why; ideal-gas Cp source
+ * @param warnings              what the user must know about these numbers
+ */
+public record RelievedFluid(Phase phase, double temperatureK, double pressurePa, List<String> componentNames,
+                            double[] composition, double molarMass, double z, double density,
+                            DensityBasis densityBasis, double kIdeal, double isentropicExponent,
+                            OptionalDouble latentHeatJPerKg, String latentHeatDefinition,
+                            OptionalDouble viscosityPaS, String viscositySource, EosVariant eos, String provenance,
+                            List<String> warnings) {
+
+    /** What leaves through the device. */
+    public enum Phase {
+        /** Vapour in equilibrium with a liquid (fire, boil-off). */
+        VAPOUR("vapour"),
+        /** Gas or supercritical fluid, no liquid present. */
+        GAS("gas"),
+        /** Liquid. */
+        LIQUID("liquid");
+
+        private final String label;
+
+        Phase(String label) {
+            this.label = label;
+        }
+
+        public String label() {
+            return label;
+        }
+    }
+
+    public RelievedFluid {
+        componentNames = List.copyOf(componentNames);
+        composition = composition.clone();
+        latentHeatJPerKg = latentHeatJPerKg == null ? OptionalDouble.empty() : latentHeatJPerKg;
+        viscosityPaS = viscosityPaS == null ? OptionalDouble.empty() : viscosityPaS;
+        latentHeatDefinition = latentHeatDefinition == null ? "" : latentHeatDefinition;
+        viscositySource = viscositySource == null ? "" : viscositySource;
+        warnings = List.copyOf(warnings);
+    }
+
+    @Override
+    public double[] composition() {
+        return composition.clone();
+    }
+
+    /** From single-phase EOS properties. */
+    static RelievedFluid of(Phase phase, MixtureSpec spec, FluidProperties fp, OptionalDouble latent,
+                            String latentDefinition, OptionalDouble viscosity, String viscositySource) {
+        List<String> w = new ArrayList<>(fp.warnings());
+        String prov = String.format(Locale.ROOT, "%s (%s); %s; density basis %s; ideal-gas Cp: %s",
+                spec.eos().displayName(), spec.eos().citation(), fp.rootReason(), fp.densityBasis().label(),
+                cpSources(spec, fp.composition()));
+        return new RelievedFluid(phase, fp.temperatureK(), fp.pressurePa(), spec.names(), fp.composition(),
+                fp.molarMass(), fp.z(), fp.density(), fp.densityBasis(), fp.kIdeal(), fp.isentropicExponent(), latent,
+                latentDefinition, viscosity, viscositySource, spec.eos(), prov, w);
+    }
+
+    private static String cpSources(MixtureSpec spec, double[] x) {
+        StringBuilder sb = new StringBuilder();
+        for (int i = 0; i < x.length; i++) {
+            if (x[i] > 0) {
+                sb.append(sb.length() == 0 ? "" : "; ").append(spec.components().get(i).name()).append(": ")
+                        .append(spec.components().get(i).cp().source());
+            }
+        }
+        return sb.toString();
+    }
+
+    /** One line per property, for a reviewer's table. */
+    public List<String> table() {
+        List<String> out = new ArrayList<>();
+        out.add("Relieved phase: " + phase.label());
+        out.add(String.format(Locale.ROOT, "T = %.2f K (%.2f C)", temperatureK, temperatureK - 273.15));
+        out.add(String.format(Locale.ROOT, "P = %.1f kPa abs", pressurePa / 1e3));
+        StringBuilder c = new StringBuilder("Composition (mole fractions): ");
+        for (int i = 0; i < composition.length; i++) {
+            c.append(i == 0 ? "" : ", ").append(componentNames.get(i)).append(' ')
+                    .append(String.format(Locale.ROOT, "%.5f", composition[i]));
+        }
+        out.add(c.toString());
+        out.add(String.format(Locale.ROOT, "M = %.3f kg/kmol", molarMass));
+        out.add(String.format(Locale.ROOT, "Z = %.5f (cubic root)", z));
+        out.add(String.format(Locale.ROOT, "Density = %.4g kg/m3 (%s basis)", density, densityBasis.label()));
+        out.add(String.format(Locale.ROOT, "k = Cp/Cv ideal gas = %.4f", kIdeal));
+        out.add(String.format(Locale.ROOT, "Real-fluid isentropic exponent = %.4f", isentropicExponent));
+        latentHeatJPerKg.ifPresent(l -> out.add(String.format(Locale.ROOT, "Latent heat = %.2f kJ/kg (%s)", l / 1e3,
+                latentHeatDefinition)));
+        viscosityPaS.ifPresent(v -> out.add(String.format(Locale.ROOT, "Viscosity = %.4g mPa s (%s)", v * 1e3,
+                viscositySource)));
+        out.add("Model: " + provenance);
+        return out;
+    }
+}

@@ -1,0 +1,69 @@
+package org.ventcase.relief;
+
+import java.util.Locale;
+import java.util.OptionalDouble;
+
+import org.ventcase.common.TraceStep;
+import org.ventcase.device.GasSizing;
+import org.ventcase.device.GasSizingInput;
+import org.ventcase.device.GasSizingResult;
+
+/** Small shared pieces of the scenario classes: gas sizing from a relieved fluid, and formatting. */
+final class ScenarioSupport {
+
+    private ScenarioSupport() {
+    }
+
+    /** API 520 gas sizing for the relieved fluid at rate w (kg/s), with the device's coefficients. */
+    static GasSizingResult sizeGas(double w, RelievedFluid f, DeviceSpec d) {
+        return GasSizing.size(new GasSizingInput(w, f.pressurePa(), d.backPressurePa(), f.temperatureK(), f.z(),
+                f.molarMass(), OptionalDouble.of(f.kIdeal()), d.kd(), d.kb(), d.kc()));
+    }
+
+    static TraceStep sizingStep(GasSizingResult gs) {
+        TraceStep.Builder sz = TraceStep.of("Required effective area").equation(gs.equation()).source(gs.source());
+        for (String line : gs.trace()) {
+            sz.note(line);
+        }
+        return sz.out("Flow regime", gs.regime().name().toLowerCase(Locale.ROOT))
+                .out("Required area", String.format(Locale.ROOT, "%.1f mm2 (%.4f in2)", gs.areaMm2(),
+                        gs.areaMm2() / 645.16)).build();
+    }
+
+    static TraceStep fluidStep(String title, RelievedFluid f) {
+        TraceStep.Builder b = TraceStep.of(title)
+                .equation("cubic EOS at relieving conditions; k = Cp_ig/Cv_ig per API 520")
+                .source(f.provenance());
+        for (String line : f.table()) {
+            b.out(line.contains("=") ? line.substring(0, line.indexOf('=')).trim() : "Item",
+                    line.contains("=") ? line.substring(line.indexOf('=') + 1).trim() : line);
+        }
+        return b.build();
+    }
+
+    static TraceStep expansionStep(IsenthalpicExpansion.Result e) {
+        return TraceStep.of("Temperature after expansion to the back pressure").equation(e.equation())
+                .source("first law, steady adiabatic flow without work: isenthalpic (common practice)")
+                .out("T2", kelvinC(e.downstreamTemperatureK()))
+                .out("Vapour fraction after expansion", String.format(Locale.ROOT, "%.4f", e.vapourFraction()))
+                .out("Minimum design metal temperature", e.minimumDesignMetalTemperatureK().isPresent()
+                        ? kelvinC(e.minimumDesignMetalTemperatureK().getAsDouble()) : "not given (no check)")
+                .build();
+    }
+
+    static String kpa(double pa) {
+        return String.format(Locale.ROOT, "%.1f kPa", pa / 1e3);
+    }
+
+    static String kelvinC(double k) {
+        return String.format(Locale.ROOT, "%.2f K (%.2f C)", k, k - 273.15);
+    }
+
+    static String fractions(double[] x) {
+        StringBuilder sb = new StringBuilder();
+        for (double v : x) {
+            sb.append(sb.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.4f", v));
+        }
+        return "[" + sb + "]";
+    }
+}
