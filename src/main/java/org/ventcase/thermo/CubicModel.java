@@ -305,7 +305,7 @@ public final class CubicModel {
         double c2 = (u - 1.0) * bb - 1.0;
         double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
         double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
-        return CubicSolver.solve(c2, c1, c0, bb);
+        return CubicSolver.solve(c2, c1, c0, bb, 1.0 + bb + 1e-12);
     }
 
     /**
@@ -321,7 +321,7 @@ public final class CubicModel {
         double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
         double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
         double[] all = new double[3];
-        int nAll = CubicSolver.count(CubicSolver.rootsCoded(c2, c1, c0, all));
+        int nAll = CubicSolver.count(CubicSolver.rootsCoded(c2, c1, c0, 1.0 + bb + 1e-12, all));
         double zl = Double.NaN;
         double zv = Double.NaN;
         int nPhys = 0;
@@ -536,7 +536,7 @@ public final class CubicModel {
         double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
         double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
         double[] all = new double[3];
-        int nAll = CubicSolver.count(CubicSolver.rootsCoded(c2, c1, c0, all));
+        int nAll = CubicSolver.count(CubicSolver.rootsCoded(c2, c1, c0, 1.0 + bb + 1e-12, all));
         double zl = Double.NaN;
         double zv = Double.NaN;
         int nPhys = 0;

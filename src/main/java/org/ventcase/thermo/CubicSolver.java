@@ -39,9 +39,18 @@ public final class CubicSolver {
      * @param b dimensionless co-volume B = b P / (R T); physical roots satisfy Z > B
      */
     public static CubicRoots solve(double c2, double c1, double c0, double b) {
+        return solve(c2, c1, c0, b, 1.0 + Math.max(Math.abs(c2), Math.max(Math.abs(c1), Math.abs(c0))));
+    }
+
+    /**
+     * As {@link #solve(double, double, double, double)} with an upper bound on the largest real
+     * root (the equations of state pass 1 + B).
+     */
+    public static CubicRoots solve(double c2, double c1, double c0, double b, double upper) {
         double[] all = new double[3];
-        RootCase[] rc = new RootCase[1];
-        int n = roots(c2, c1, c0, all, rc);
+        int code = rootsCoded(c2, c1, c0, upper, all);
+        RootCase[] rc = {CASES[code]};
+        int n = count(code);
         if (n == 1 && all[0] > b) {
             return CubicRoots.owning(new double[] {all[0]}, NONE, rc[0]);
         }
@@ -89,6 +98,19 @@ public final class CubicSolver {
      * 0 one real root, 1 double, 2 triple, 3 three distinct (index into {@link #CASES}).
      */
     static int rootsCoded(double c2, double c1, double c0, double[] out) {
+        return rootsCoded(c2, c1, c0, 1.0 + Math.max(Math.abs(c2), Math.max(Math.abs(c1), Math.abs(c0))), out);
+    }
+
+    /**
+     * As {@link #rootsCoded(double, double, double, double[])} with a caller's upper bound on the
+     * largest real root (for the cubic equations of state Z <= 1 + B, since the attraction term
+     * can only lower Z below v/(v - b)); a tighter start saves Newton steps.
+     */
+    static int rootsCoded(double c2, double c1, double c0, double upper, double[] out) {
+        double zTop = largestRootByNewton(c2, c1, c0, upper);
+        if (!Double.isNaN(zTop)) {
+            return deflated(zTop, c2, c1, c0, out);
+        }
         double c2over3 = c2 / 3.0;
         double p = c1 - c2 * c2over3;
         double q = (2.0 * c2over3 * c2over3 - c1) * c2over3 + c0;
@@ -107,7 +129,46 @@ public final class CubicSolver {
         } else {
             t = 0.0;
         }
-        double z1 = polish(t - c2over3, c2, c1, c0);
+        return deflated(polish(t - c2over3, c2, c1, c0), c2, c1, c0, out);
+    }
+
+    /**
+     * The largest real root by Newton's method from Cauchy's upper bound 1 + max|c_i|, or NaN
+     * when that does not apply. Above the inflection point Z = -c2/3 the cubic is convex, so
+     * Newton's iterates from above decrease monotonically to the largest root whenever that root
+     * lies at or above the inflection (always the case with three real roots). An iterate that
+     * falls below the inflection means the only real root lies in the concave part: the caller
+     * then takes the analytic solution. Cheaper than the trigonometric form (no acos, cos, cbrt)
+     * and as accurate: iteration stops when the iterates stop decreasing, i.e. at round-off.
+     * Source: W.H. Press et al., Numerical Recipes, 3rd ed., 2007, 9.4 (Newton) and 9.5 (bounds
+     * and deflation); Cauchy's bound on polynomial roots.
+     */
+    static double largestRootByNewton(double c2, double c1, double c0, double upper) {
+        double inflection = -c2 / 3.0;
+        double z = upper;
+        if (!(((z + c2) * z + c1) * z + c0 > 0)) {
+            return Double.NaN;
+        }
+        for (int i = 0; i < 100; i++) {
+            double f = ((z + c2) * z + c1) * z + c0;
+            double df = (3.0 * z + 2.0 * c2) * z + c1;
+            if (!(df > 0)) {
+                return Double.NaN;
+            }
+            double zn = z - f / df;
+            if (zn < inflection) {
+                return Double.NaN;
+            }
+            if (!(zn < z)) {
+                return z;
+            }
+            z = zn;
+        }
+        return Double.NaN;
+    }
+
+    /** Deflates a known real root z1 and solves the remaining quadratic in stable form. */
+    private static int deflated(double z1, double c2, double c1, double c0, double[] out) {
         // Deflate: (Z - z1)(Z^2 + e1 Z + e0)
         double e1 = c2 + z1;
         double e0 = z1 != 0.0 ? -c0 / z1 : c1 + z1 * e1;
