@@ -78,6 +78,11 @@ public final class WizardApp extends Application {
 
     private static volatile WizardApp current;
 
+    /** The window (for tests). */
+    Stage stage() {
+        return stage;
+    }
+
     /** The running app, for tests. */
     public static WizardApp current() {
         return current;
