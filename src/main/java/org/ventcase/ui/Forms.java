@@ -90,6 +90,7 @@ final class Forms {
         Label l = new Label(text);
         l.getStyleClass().add("form-heading");
         GridPane.setMargin(l, new Insets(10, 0, 2, 0));
+        GridPane.setHalignment(l, HPos.LEFT);
         grid.add(l, 0, row++, 4, 1);
     }
 

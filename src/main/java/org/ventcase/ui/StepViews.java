@@ -461,7 +461,7 @@ final class StepViews {
     }
 
     private static String g(double v) {
-        return String.format(Locale.ROOT, "%,.4g", v);
+        return Math.abs(v) >= 1e4 ? String.format(Locale.ROOT, "%,.0f", v) : String.format(Locale.ROOT, "%.4g", v);
     }
 
     static String pressure(double pa, UnitSystem u) {

@@ -219,7 +219,7 @@ final class VesselSketchView extends Pane {
         g.setFill(STEEL);
         g.setTextAlign(TextAlignment.LEFT);
         g.setTextBaseline(VPos.TOP);
-        g.fillText(Messages.get("sketch.title", s.vessel().describe()), 6, 6, w - 12);
+        g.fillText(Messages.get("sketch.title"), 6, 6);
     }
 
     private static String fmt(double v) {
