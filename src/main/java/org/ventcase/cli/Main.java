@@ -17,8 +17,9 @@ import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Spec;
 
 /**
- * The {@code ventcase} command: with no arguments it prints help (the wizard comes in a later
- * release); with a sub-command it runs headless. Only this class calls {@link System#exit}.
+ * The {@code ventcase} command: with no arguments it opens the case wizard where a display is
+ * available (otherwise it says how to run headless and prints help); with a sub-command it runs
+ * headless. Only this class calls {@link System#exit}.
  */
 @Command(name = "ventcase", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         header = "Ventcase: first-pass relief basis for vessels holding liquefied gases and volatile liquids.",
@@ -45,7 +46,37 @@ public final class Main implements Callable<Integer> {
     public static void main(String[] args) {
         PrintWriter out = new PrintWriter(System.out, true);
         PrintWriter err = new PrintWriter(System.err, true);
+        if (args.length == 0) {
+            if (displayAvailable(System.getenv("DISPLAY"), System.getenv("WAYLAND_DISPLAY"),
+                    System.getProperty("java.awt.headless"), System.getProperty("os.name"))) {
+                org.ventcase.ui.WizardLauncher.launch();
+                System.exit(ExitCode.OK);
+            }
+            out.println(NO_DISPLAY);
+            out.println();
+        }
         System.exit(run(out, err, args));
+    }
+
+    /** Printed when {@code ventcase} is started without arguments and without a display. */
+    static final String NO_DISPLAY = "ventcase: no display is available, so the case wizard cannot open. Run the "
+            + "headless commands instead, e.g. 'ventcase new --template vertical-drum case.json', "
+            + "'ventcase check case.json', 'ventcase demo'; or start the wizard where a display is available "
+            + "(on a server: 'Xvfb :99 &' and DISPLAY=:99). Commands:";
+
+    /**
+     * True when a window can be opened: Windows and macOS have a display; elsewhere DISPLAY or
+     * WAYLAND_DISPLAY must be set; never when java.awt.headless is true.
+     */
+    static boolean displayAvailable(String display, String wayland, String headless, String osName) {
+        if ("true".equalsIgnoreCase(headless)) {
+            return false;
+        }
+        String os = osName == null ? "" : osName.toLowerCase(java.util.Locale.ROOT);
+        if (os.startsWith("windows") || os.startsWith("mac")) {
+            return true;
+        }
+        return display != null && !display.isBlank() || wayland != null && !wayland.isBlank();
     }
 
     /** Runs the command line with the given writers; returns the exit code. */

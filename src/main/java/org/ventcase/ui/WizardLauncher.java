@@ -1,0 +1,22 @@
+package org.ventcase.ui;
+
+import javafx.application.Application;
+
+/**
+ * Starts the wizard. A plain class (not an {@link Application}), so that a shaded jar without the
+ * module path can launch JavaFX; {@code ventcase} with no arguments calls {@link #launch}.
+ */
+public final class WizardLauncher {
+
+    private WizardLauncher() {
+    }
+
+    /** Opens the wizard and returns when its window closes. */
+    public static void launch(String... args) {
+        Application.launch(WizardApp.class, args);
+    }
+
+    public static void main(String[] args) {
+        launch(args);
+    }
+}
