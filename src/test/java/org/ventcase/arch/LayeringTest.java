@@ -38,7 +38,9 @@ class LayeringTest {
                     "org.ventcase.cli", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx"),
             "casefile", List.of("org.ventcase.cli", "picocli", "org.apache.pdfbox", "javafx"),
             "report", List.of("org.ventcase.cli", "picocli", "com.fasterxml", "javafx"),
-            "cli", List.of("org.apache.pdfbox", "javafx"));
+            "cli", List.of("org.apache.pdfbox", "javafx"),
+            "calc", List.of("org.ventcase.casefile", "org.ventcase.cli", "org.ventcase.report", "com.fasterxml",
+                    "picocli", "org.apache.pdfbox", "javafx"));
 
     @Test
     void packagesImportOnlyWhatTheirLayerAllows() throws IOException {
