@@ -22,25 +22,25 @@ class LayeringTest {
     private static final Path SRC = Path.of("src/main/java/org/ventcase");
 
     /** Package -> import prefixes it may NOT use. */
-    private static final Map<String, List<String>> FORBIDDEN = Map.of(
-            "common", List.of("org.ventcase.", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx"),
-            "units", List.of("org.ventcase.thermo", "org.ventcase.vessel", "org.ventcase.relief", "org.ventcase.device",
-                    "org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli", "javafx"),
-            "thermo", List.of("org.ventcase.vessel", "org.ventcase.relief", "org.ventcase.device",
-                    "org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx"),
-            "vessel", List.of("org.ventcase.thermo", "org.ventcase.relief", "org.ventcase.device",
-                    "org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx"),
-            "relief", List.of("org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli",
-                    "org.apache.pdfbox", "javafx"),
-            "device", List.of("org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli",
-                    "org.apache.pdfbox", "javafx"),
-            "inventory", List.of("org.ventcase.relief", "org.ventcase.device", "org.ventcase.casefile",
-                    "org.ventcase.cli", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx"),
-            "casefile", List.of("org.ventcase.cli", "picocli", "org.apache.pdfbox", "javafx"),
-            "report", List.of("org.ventcase.cli", "picocli", "com.fasterxml", "javafx"),
-            "cli", List.of("org.apache.pdfbox", "javafx"),
-            "calc", List.of("org.ventcase.casefile", "org.ventcase.cli", "org.ventcase.report", "com.fasterxml",
-                    "picocli", "org.apache.pdfbox", "javafx"));
+    private static final Map<String, List<String>> FORBIDDEN = Map.ofEntries(
+            Map.entry("common", List.of("org.ventcase.", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx")),
+            Map.entry("units", List.of("org.ventcase.thermo", "org.ventcase.vessel", "org.ventcase.relief", "org.ventcase.device",
+                    "org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli", "javafx")),
+            Map.entry("thermo", List.of("org.ventcase.vessel", "org.ventcase.relief", "org.ventcase.device",
+                    "org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx")),
+            Map.entry("vessel", List.of("org.ventcase.thermo", "org.ventcase.relief", "org.ventcase.device",
+                    "org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx")),
+            Map.entry("relief", List.of("org.ventcase.calc", "org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli",
+                    "org.apache.pdfbox", "javafx")),
+            Map.entry("device", List.of("org.ventcase.calc", "org.ventcase.casefile", "org.ventcase.cli", "com.fasterxml", "picocli",
+                    "org.apache.pdfbox", "javafx")),
+            Map.entry("inventory", List.of("org.ventcase.calc", "org.ventcase.relief", "org.ventcase.device", "org.ventcase.casefile",
+                    "org.ventcase.cli", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx")),
+            Map.entry("casefile", List.of("org.ventcase.cli", "picocli", "org.apache.pdfbox", "javafx")),
+            Map.entry("report", List.of("org.ventcase.cli", "picocli", "com.fasterxml", "javafx")),
+            Map.entry("cli", List.of("org.apache.pdfbox", "javafx")),
+            Map.entry("calc", List.of("org.ventcase.casefile", "org.ventcase.cli", "org.ventcase.report", "com.fasterxml",
+                    "picocli", "org.apache.pdfbox", "javafx")));
 
     @Test
     void packagesImportOnlyWhatTheirLayerAllows() throws IOException {
