@@ -345,7 +345,7 @@ public final class CaseCalculation {
         }
         NearCriticalFireResult r = NearCriticalFire.run(new NearCriticalFireInput(c.liquid(), c.in().vessel()
                 .totalVolume(), h.heatW(), p1, t0, c.inv().pressurePa(), t0 + NEAR_CRITICAL_HEAT_UP_K, f.steps(),
-                c.in().device().gas()));
+                c.in().device().gas(), OptionalDouble.of(c.level().totalVolume() / c.inv().totalMassKg())));
         NearCriticalFireResult.Point g = r.governing();
         o.t1 = OptionalDouble.of(g.temperatureK());
         o.w = OptionalDouble.of(g.massFlowKgPerS());

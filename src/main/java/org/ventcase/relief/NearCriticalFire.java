@@ -61,7 +61,8 @@ public final class NearCriticalFire {
         double p1 = in.relievingPressurePa();
         LinkedHashSet<String> warnings = new LinkedHashSet<>(spec.kijWarnings());
 
-        double v0 = state(model, flash, z, in.initialTemperatureK(), in.initialPressurePa(), basis).v;
+        double v0 = in.initialSpecificVolumeM3Kg().isPresent() ? in.initialSpecificVolumeM3Kg().getAsDouble()
+                : state(model, flash, z, in.initialTemperatureK(), in.initialPressurePa(), basis).v;
         double m0 = in.vesselVolumeM3() / v0;
         double tLo = in.initialTemperatureK();
         double tHi = in.finalTemperatureK();
@@ -166,7 +167,9 @@ public final class NearCriticalFire {
         }
         List<TraceStep> trace = new ArrayList<>();
         trace.add(TraceStep.of("Opening: heat-up at constant volume to P1")
-                .equation("v0 = v(T0, P0); T_open solves v(T_open, P1) = v0 (bisection); m = V / v0")
+                .equation(in.initialSpecificVolumeM3Kg().isPresent()
+                        ? "v0 = V / m of the inventory; T_open solves v(T_open, P1) = v0 (bisection); m = V / v0"
+                        : "v0 = v(T0, P0); T_open solves v(T_open, P1) = v0 (bisection); m = V / v0")
                 .source(spec.eos().displayName() + " (" + spec.eos().citation() + "); PT flash for the phase split")
                 .in("Initial state T0, P0", ScenarioSupport.kelvinC(in.initialTemperatureK()) + ", "
                         + ScenarioSupport.kpa(in.initialPressurePa()) + " abs")
