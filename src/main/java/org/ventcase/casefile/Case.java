@@ -202,6 +202,13 @@ public record Case(Integer schemaVersion, Identity identity, Fluid fluid, Vessel
      * @param inflowPhase         blocked-outlet: vapour or liquid
      * @param heatInput           thermal-expansion: heat transfer rate to the blocked-in liquid
      * @param blockedInVolume     thermal-expansion: volume of the blocked-in liquid
+     * @param duration            fire-boil-off: how long the fire lasts ("2 h"); optional, the run
+     *                            goes on until the stop condition when left out
+     * @param stopAtLiquidFraction fire-boil-off: end the run when the liquid (moles) has fallen to
+     *                            this fraction of the liquid at opening, 0 to 0.999; optional, 0
+     *                            (run until the liquid is exhausted)
+     * @param steps               fire-near-critical: number of temperature steps of the heat-up;
+     *                            optional, 100
      */
     public record Scenario(String type, String label, String fireFighting, String environmentFactor,
                            Boolean insulationCredit,
@@ -211,7 +218,10 @@ public record Case(Integer schemaVersion, Identity identity, Fluid fluid, Vessel
                            String inflow,
                            String inflowPhase,
                            @Quantity(Dimension.POWER) String heatInput,
-                           @Quantity(Dimension.VOLUME) String blockedInVolume) {
+                           @Quantity(Dimension.VOLUME) String blockedInVolume,
+                           @Quantity(Dimension.TIME) String duration,
+                           Double stopAtLiquidFraction,
+                           Integer steps) {
     }
 
     /**

@@ -805,19 +805,63 @@ public final class CaseValidator {
             }
             Optional<RelievingPressureInput> relieving = relieving(t, device);
             Optional<? extends ValidatedCase.ScenarioSpec> spec = switch (t) {
-                case FIRE_WETTED, FIRE_NEAR_CRITICAL -> {
-                    Optional<FireFighting> ff = choice(p + ".fireFighting", s.fireFighting(), options(
-                            "adequate", FireFighting.ADEQUATE_DRAINAGE_AND_FIREFIGHTING,
-                            "inadequate", FireFighting.INADEQUATE), true);
+                case FIRE_WETTED -> {
+                    Optional<FireFighting> ff = fireFighting(p, s);
                     Optional<ValidatedCase.FireFactor> f = fireFactor(p, s, vessel);
                     yield ff.isPresent() && f.isPresent() && relieving.isPresent()
-                            ? Optional.of(new ValidatedCase.WettedFire(i, t, label, ff.get(), f.get(), relieving.get()))
+                            ? Optional.of(new ValidatedCase.WettedFire(i, label, ff.get(), f.get(), relieving.get()))
+                            : Optional.empty();
+                }
+                case FIRE_NEAR_CRITICAL -> {
+                    Optional<FireFighting> ff = fireFighting(p, s);
+                    Optional<ValidatedCase.FireFactor> f = fireFactor(p, s, vessel);
+                    int steps = ValidatedCase.DEFAULT_NEAR_CRITICAL_STEPS;
+                    boolean stepsOk = true;
+                    if (s.steps() != null) {
+                        if (s.steps() < 2 || s.steps() > 2000) {
+                            problem(p + ".steps", String.valueOf(s.steps()), "expected a whole number of temperature "
+                                    + "steps from 2 to 2000");
+                            stepsOk = false;
+                        } else {
+                            steps = s.steps();
+                        }
+                    }
+                    int st = steps;
+                    yield ff.isPresent() && f.isPresent() && relieving.isPresent() && stepsOk
+                            ? Optional.of(new ValidatedCase.NearCriticalFire(i, label, ff.get(), f.get(),
+                            relieving.get(), st))
                             : Optional.empty();
                 }
                 case FIRE_BOIL_OFF -> {
+                    Optional<FireFighting> ff = fireFighting(p, s);
                     Optional<ValidatedCase.FireFactor> f = fireFactor(p, s, vessel);
-                    yield f.isPresent() && relieving.isPresent()
-                            ? Optional.of(new ValidatedCase.BoilOffFire(i, label, f.get(), relieving.get()))
+                    OptionalDouble duration = OptionalDouble.empty();
+                    boolean ok = true;
+                    if (s.duration() != null) {
+                        Optional<Double> d = positive(p + ".duration",
+                                quantity(p + ".duration", s.duration(), Dimension.TIME, true), "s");
+                        if (d.isPresent()) {
+                            duration = OptionalDouble.of(d.get());
+                        } else {
+                            ok = false;
+                        }
+                    }
+                    double stop = 0;
+                    if (s.stopAtLiquidFraction() != null) {
+                        if (!(s.stopAtLiquidFraction() >= 0 && s.stopAtLiquidFraction() <= 0.999)) {
+                            problem(p + ".stopAtLiquidFraction", String.valueOf(s.stopAtLiquidFraction()),
+                                    "expected a fraction of the liquid at opening from 0 (run until the liquid is "
+                                            + "exhausted) to 0.999");
+                            ok = false;
+                        } else {
+                            stop = s.stopAtLiquidFraction();
+                        }
+                    }
+                    OptionalDouble dur = duration;
+                    double stp = stop;
+                    yield ff.isPresent() && f.isPresent() && relieving.isPresent() && ok
+                            ? Optional.of(new ValidatedCase.BoilOffFire(i, label, ff.get(), f.get(), relieving.get(),
+                            dur, stp))
                             : Optional.empty();
                 }
                 case FIRE_GAS_FILLED -> {
@@ -883,6 +927,12 @@ public final class CaseValidator {
             }
         }
         return m;
+    }
+
+    private Optional<FireFighting> fireFighting(String p, Case.Scenario s) {
+        return choice(p + ".fireFighting", s.fireFighting(), options(
+                "adequate", FireFighting.ADEQUATE_DRAINAGE_AND_FIREFIGHTING,
+                "inadequate", FireFighting.INADEQUATE), true);
     }
 
     private Optional<ValidatedCase.FireFactor> fireFactor(String p, Case.Scenario s,

@@ -18,12 +18,14 @@ public enum ScenarioType {
     FIRE_WETTED("fire-wetted", ScenarioKind.FIRE, Set.of("fireFighting", "environmentFactor", "insulationCredit")),
     /** Wetted vessel in a pool fire with near-critical or supercritical contents (stepwise heat-up). */
     FIRE_NEAR_CRITICAL("fire-near-critical", ScenarioKind.FIRE,
-            Set.of("fireFighting", "environmentFactor", "insulationCredit")),
+            Set.of("fireFighting", "environmentFactor", "insulationCredit", "steps")),
     /**
-     * Fire on atmospheric or low-pressure storage: heat input from the NFPA 30 / API Std 2000
-     * table, boil-off at the relieving pressure.
+     * Wetted vessel in a pool fire, multicomponent boil-off simulated at constant relieving
+     * pressure in the fixed vessel volume: heat from the API 521 wetted-vessel correlation,
+     * equilibrium vapour out, the liquid's composition and temperature followed as it boils away.
      */
-    FIRE_BOIL_OFF("fire-boil-off", ScenarioKind.FIRE, Set.of("environmentFactor", "insulationCredit")),
+    FIRE_BOIL_OFF("fire-boil-off", ScenarioKind.FIRE,
+            Set.of("fireFighting", "environmentFactor", "insulationCredit", "duration", "stopAtLiquidFraction")),
     /** Gas-filled (unwetted) vessel in a pool fire. */
     FIRE_GAS_FILLED("fire-gas-filled", ScenarioKind.FIRE, Set.of("wallTemperature")),
     /** Inflow that cannot leave through a closed or blocked outlet. */

@@ -146,8 +146,8 @@ public record ValidatedCase(Case source, String inputHash, Identity identity, Fl
     }
 
     /** One scenario, ready for calculation. */
-    public sealed interface ScenarioSpec permits WettedFire, BoilOffFire, GasFilledFire, BlockedOutlet,
-            ThermalExpansionCase {
+    public sealed interface ScenarioSpec permits WettedFire, NearCriticalFire, BoilOffFire, GasFilledFire,
+            BlockedOutlet, ThermalExpansionCase {
         /** Position in the file's list. */
         int index();
 
@@ -160,13 +160,41 @@ public record ValidatedCase(Case source, String inputHash, Identity identity, Fl
         RelievingPressureInput relieving();
     }
 
-    /** {@code fire-wetted} or {@code fire-near-critical}. */
-    public record WettedFire(int index, ScenarioType type, String label, FireFighting fireFighting, FireFactor factor,
+    /** {@code fire-wetted}. */
+    public record WettedFire(int index, String label, FireFighting fireFighting, FireFactor factor,
                              RelievingPressureInput relieving) implements ScenarioSpec {
+        @Override
+        public ScenarioType type() {
+            return ScenarioType.FIRE_WETTED;
+        }
     }
 
-    /** {@code fire-boil-off}: low-pressure storage heat-input table. */
-    public record BoilOffFire(int index, String label, FireFactor factor, RelievingPressureInput relieving)
+    /** Default number of temperature steps of the near-critical heat-up. */
+    public static final int DEFAULT_NEAR_CRITICAL_STEPS = 100;
+
+    /**
+     * {@code fire-near-critical}: stepwise (dv/dh)_P heat-up at P1 in the fixed vessel volume.
+     *
+     * @param steps number of temperature steps (2 to 2000; {@link #DEFAULT_NEAR_CRITICAL_STEPS} when not given)
+     */
+    public record NearCriticalFire(int index, String label, FireFighting fireFighting, FireFactor factor,
+                                   RelievingPressureInput relieving, int steps) implements ScenarioSpec {
+        @Override
+        public ScenarioType type() {
+            return ScenarioType.FIRE_NEAR_CRITICAL;
+        }
+    }
+
+    /**
+     * {@code fire-boil-off}: multicomponent boil-off at constant P1 in the fixed vessel volume, heat
+     * from the API 521 wetted-vessel correlation.
+     *
+     * @param durationS            fire duration, s, when given (the run stops at the first step past it)
+     * @param stopAtLiquidFraction stop when the liquid moles fall to this fraction of those at
+     *                             opening; 0 runs until the liquid is exhausted
+     */
+    public record BoilOffFire(int index, String label, FireFighting fireFighting, FireFactor factor,
+                              RelievingPressureInput relieving, OptionalDouble durationS, double stopAtLiquidFraction)
             implements ScenarioSpec {
         @Override
         public ScenarioType type() {

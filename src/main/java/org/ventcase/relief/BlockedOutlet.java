@@ -2,11 +2,13 @@ package org.ventcase.relief;
 
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
+import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.ventcase.common.NoSolutionException;
+import org.ventcase.common.TraceStep;
 import org.ventcase.device.GasSizingResult;
 import org.ventcase.device.LiquidSizing;
 import org.ventcase.device.LiquidSizingInput;
@@ -92,8 +94,23 @@ public final class BlockedOutlet {
             IsenthalpicExpansion.Result ex = IsenthalpicExpansion.toBackPressure(spec, rf,
                     in.device().backPressurePa(), in.device().minimumDesignMetalTemperatureK());
             warnings.addAll(ex.warnings());
+            List<TraceStep> trace = new ArrayList<>();
+            trace.add(loadStep(in, w, basis));
+            trace.add(ScenarioSupport.fluidStep("Relieved liquid at relieving conditions", rf));
+            TraceStep.Builder lsz = TraceStep.of("Required effective area (liquid)")
+                    .equation("A = 11.78 Q / (Kd Kw Kc Kv) sqrt(G / (P1 - P2)); A mm2, Q L/min, P kPa")
+                    .source(ls.source())
+                    .in("Q at relieving conditions", String.format(Locale.ROOT, "%.4g m3/h", q * 3600))
+                    .in("G = rho / 999.0 kg/m3", String.format(Locale.ROOT, "%.4f", g));
+            for (String line : ls.trace()) {
+                lsz.note(line);
+            }
+            trace.add(lsz.out("Kv", String.format(Locale.ROOT, "%.4f", ls.kv()))
+                    .out("Required area", String.format(Locale.ROOT, "%.1f mm2 (%.4f in2)", ls.areaMm2(),
+                            ls.areaMm2() / 645.16)).build());
+            trace.add(ScenarioSupport.expansionStep(ex));
             return new BlockedOutletResult(in, w, basis, rf, Optional.empty(), Optional.of(ls), OptionalDouble.of(q),
-                    OptionalDouble.of(g), ex, new ArrayList<>(warnings));
+                    OptionalDouble.of(g), ex, trace, new ArrayList<>(warnings));
         }
         double t;
         if (in.vapourTemperature() == BlockedOutletInput.VapourTemperature.INFLOW_TEMPERATURE) {
@@ -113,8 +130,31 @@ public final class BlockedOutlet {
         IsenthalpicExpansion.Result ex = IsenthalpicExpansion.toBackPressure(spec, rf, in.device().backPressurePa(),
                 in.device().minimumDesignMetalTemperatureK());
         warnings.addAll(ex.warnings());
+        List<TraceStep> trace = new ArrayList<>();
+        trace.add(loadStep(in, w, basis));
+        trace.add(TraceStep.of("Relieving temperature of the gas or vapour")
+                .equation(in.vapourTemperature() == BlockedOutletInput.VapourTemperature.INFLOW_TEMPERATURE
+                        ? "T1 = inflow temperature" : "T1 = dew temperature of the inflow at P1 (Tsat for a pure fluid)")
+                .source(spec.eos().displayName() + " (" + spec.eos().citation() + ")")
+                .in("P1", ScenarioSupport.kpa(p1) + " abs")
+                .out("T1", ScenarioSupport.kelvinC(t)).build());
+        trace.add(ScenarioSupport.fluidStep("Relieved gas or vapour at relieving conditions", rf));
+        trace.add(ScenarioSupport.sizingStep(gs));
+        trace.add(ScenarioSupport.expansionStep(ex));
         return new BlockedOutletResult(in, w, basis, rf, Optional.of(gs), Optional.empty(), OptionalDouble.empty(),
-                OptionalDouble.empty(), ex, new ArrayList<>(warnings));
+                OptionalDouble.empty(), ex, trace, new ArrayList<>(warnings));
+    }
+
+    private static TraceStep loadStep(BlockedOutletInput in, double w, String basis) {
+        return TraceStep.of("Relief load: the maximum inflow")
+                .equation(in.inflow().kind() == InflowRate.Kind.MASS ? "W = inflow (mass)"
+                        : "W = V_std / (R T_std / P_std) x M")
+                .source("API Std 521 / ISO 23251: blocked outlet, relief at the maximum inflow (common practice)")
+                .in("Inflow", in.inflow().kind() == InflowRate.Kind.MASS
+                        ? String.format(Locale.ROOT, "%.1f kg/h", in.inflow().value() * 3600)
+                        : String.format(Locale.ROOT, "%.1f m3/h at reference conditions", in.inflow().value() * 3600))
+                .in("Relieved phase", in.phase().label())
+                .out("W", String.format(Locale.ROOT, "%.1f kg/h", w * 3600)).note(basis).build();
     }
 
     static double dewTemperature(CubicModel model, double p, double[] z) {

@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
+import org.ventcase.common.TraceStep;
 import org.ventcase.device.GasSizingResult;
 import org.ventcase.device.LiquidSizingResult;
 
@@ -19,14 +20,16 @@ import org.ventcase.device.LiquidSizingResult;
  * @param volumetricFlowM3PerS liquid volumetric flow at relieving conditions (liquid relief)
  * @param relativeDensity      G = rho / 999.0 kg/m3 (liquid relief)
  * @param expansion            the relieved fluid after isenthalpic expansion to the back pressure
+ * @param trace                the calculation steps in order
  * @param warnings             what the user must know
  */
 public record BlockedOutletResult(BlockedOutletInput input, double massFlowKgPerS, String inflowBasis,
                                   RelievedFluid relieved, Optional<GasSizingResult> gasSizing,
                                   Optional<LiquidSizingResult> liquidSizing, OptionalDouble volumetricFlowM3PerS,
                                   OptionalDouble relativeDensity, IsenthalpicExpansion.Result expansion,
-                                  List<String> warnings) {
+                                  List<TraceStep> trace, List<String> warnings) {
     public BlockedOutletResult {
+        trace = List.copyOf(trace);
         warnings = List.copyOf(warnings);
     }
 }

@@ -8,6 +8,7 @@ import java.util.OptionalDouble;
 
 import org.ventcase.common.ConvergenceException;
 import org.ventcase.common.PhysicalConstants;
+import org.ventcase.common.TraceStep;
 import org.ventcase.device.GasSizingResult;
 import org.ventcase.thermo.CubicModel;
 import org.ventcase.thermo.DensityBasis;
@@ -54,6 +55,8 @@ public final class BoilOff {
 
     /** Liquid fraction (of the initial liquid moles) taken as "exhausted". */
     public static final double EXHAUSTED_FRACTION = 1e-3;
+    /** A time limit at or above this (about 31.7 years) is printed as "none". */
+    public static final double NO_TIME_LIMIT_S = 1e9;
     private static final int INNER_MAX = 50;
     private static final double INNER_TOL = 1e-10;
 
@@ -279,9 +282,68 @@ public final class BoilOff {
                 + "carry-over), constant P1 and Q; the opening state is the stored liquid at its bubble point at P1.");
         double a0 = curve.get(0).requiredAreaM2();
         double w0 = curve.get(0).massFlowKgPerS();
+        List<TraceStep> trace = trace(in, initial, nL0, vl0, vTot, curve, peak, reason, bal, peakVapour, peakSizing);
         return new BoilOffResult(in, curve, peak, w0, a0, wPeak, curve.get(peak).requiredAreaM2(),
                 100 * (curve.get(peak).requiredAreaM2() - a0) / a0, 100 * (wPeak - w0) / w0, peakVapour, peakSizing,
-                reason, bal, new ArrayList<>(warnings));
+                reason, bal, trace, new ArrayList<>(warnings));
+    }
+
+    private static List<TraceStep> trace(BoilOffInput in, MixtureFire.Load initial, double nL0, double vl0,
+                                         double vTot, List<BoilOffPoint> curve, int peak,
+                                         BoilOffResult.StopReason reason, BoilOffResult.Balance bal,
+                                         RelievedFluid peakVapour, GasSizingResult peakSizing) {
+        List<TraceStep> trace = new ArrayList<>();
+        BoilingState b = initial.state();
+        MixtureSpec spec = in.fluid();
+        trace.add(TraceStep.of("Opening state: liquid at its bubble point at P1")
+                .equation("T_b(x, P1) by equal fugacities; n_L = V_L / v_L, n_G = (V - V_L) / v_V")
+                .source(spec.eos().displayName() + " (" + spec.eos().citation() + "); " + b.method())
+                .in("P1", ScenarioSupport.kpa(in.relievingPressurePa()) + " abs")
+                .in("Liquid composition x", ScenarioSupport.fractions(b.liquid()))
+                .in("Liquid volume at opening", String.format(Locale.ROOT, "%.3f m3 of %.3f m3", vl0, vTot))
+                .out("Bubble temperature", ScenarioSupport.kelvinC(b.temperatureK()))
+                .out("Incipient vapour y", ScenarioSupport.fractions(b.vapour()))
+                .out("Liquid moles", String.format(Locale.ROOT, "%.1f kmol", nL0 / 1e3))
+                .out("Latent heat (EOS)", String.format(Locale.ROOT, "%.2f kJ/kg", initial.latent().computedJPerKg() / 1e3))
+                .out("Opening load Q/L (1 - rho_V/rho_L)", String.format(Locale.ROOT, "%.1f kg/h", initial.w() * 3600))
+                .build());
+        BoilOffPoint last = curve.get(curve.size() - 1);
+        trace.add(TraceStep.of("Boil-off at constant P1 in the fixed vessel volume")
+                .equation("dN_i = -y_i dn_out; dU = Q dt - H_V dn_out; n_L v_L + n_G v_V = V; equal steps in liquid "
+                        + "moles, trapezoid-mean vented composition and enthalpy")
+                .source("open-system mass and energy balances (Smith, Van Ness, Abbott, 7th ed., 2005, section "
+                        + "2.12); boil-off curves for wide-boiling mixtures: common practice")
+                .in("Heat input Q", String.format(Locale.ROOT, "%.1f kW (constant)", in.heatW() / 1e3))
+                .in("Steps", Integer.toString(in.steps()))
+                .in("Stop at liquid fraction", in.stopLiquidFraction() == 0
+                        ? String.format(Locale.ROOT, "exhausted (%.1f %% left)", 100 * EXHAUSTED_FRACTION)
+                        : String.format(Locale.ROOT, "%.3f of the liquid moles at opening", in.stopLiquidFraction()))
+                .in("Time limit", in.timeLimitS() >= NO_TIME_LIMIT_S ? "none"
+                        : String.format(Locale.ROOT, "%.0f s (%.2f h)", in.timeLimitS(), in.timeLimitS() / 3600))
+                .out("Points on the load curve", Integer.toString(curve.size()))
+                .out("Run ended", reason.name().toLowerCase(Locale.ROOT).replace('_', ' ')
+                        + String.format(Locale.ROOT, " at %.0f s (%.2f h)", last.timeS(), last.timeS() / 3600))
+                .out("Liquid temperature at the end", ScenarioSupport.kelvinC(last.temperatureK()))
+                .out("Liquid left", String.format(Locale.ROOT, "%.0f kg", last.liquidMassKg()))
+                .out("Vented mass", String.format(Locale.ROOT, "%.0f kg", bal.ventedMassKg())).build());
+        BoilOffPoint p = curve.get(peak);
+        trace.add(TraceStep.of("Sizing point: largest required area on the load curve")
+                .equation("A(t) = API 520 gas area at W(t) and the vapour's T, Z, M, k at t; size for max A(t)")
+                .source("API Std 520 Part I gas sizing at each point; governing point by largest area")
+                .out("Opening: W, A", String.format(Locale.ROOT, "%.1f kg/h, %.1f mm2", curve.get(0).massFlowKgPerS()
+                        * 3600, curve.get(0).requiredAreaM2() * 1e6))
+                .out("Peak: time", String.format(Locale.ROOT, "%.0f s (point %d of %d)", p.timeS(), peak, curve.size() - 1))
+                .out("Peak: liquid temperature", ScenarioSupport.kelvinC(p.temperatureK()))
+                .out("Peak: W, A", String.format(Locale.ROOT, "%.1f kg/h, %.1f mm2", p.massFlowKgPerS() * 3600,
+                        p.requiredAreaM2() * 1e6)).build());
+        trace.add(TraceStep.of("Balances over the run")
+                .equation("mass: m_0 - m_end - m_vented = 0; energy: Q t - (U_end - U_0) - H_vented = 0")
+                .source("the simulated states (checked, not assumed)")
+                .out("Mass residual", closure(bal.massResidualKg(), bal.initialMassKg(), "kg", "initial mass"))
+                .out("Energy residual", closure(bal.energyResidualJ(), bal.heatInJ(), "J", "heat in")).build());
+        trace.add(ScenarioSupport.fluidStep("Relieved vapour at the sizing point", peakVapour));
+        trace.add(ScenarioSupport.sizingStep(peakSizing));
+        return trace;
     }
 
     /** Bubble point and phase volumes only: the inner loop's evaluation (no full property sets). */
@@ -346,5 +408,20 @@ public final class BoilOff {
         return new BoilOffPoint(t, s.temperatureK(), s.liquid(), s.vapour(), nL * s.liquidProps().molarMass() * 1e-3,
                 nG * s.vapourProps().molarMass() * 1e-3, w, hOut, s.vapourProps().molarMass(), s.vapourProps().z(),
                 s.vapourProps().kIdeal(), area);
+    }
+
+    /**
+     * A balance residual as a reviewer reads it: relative to its reference, and shown only as a
+     * bound where it is at round-off level (below 1e-9 of the reference), so the printed text does
+     * not change with the last bits of floating-point arithmetic.
+     */
+    static String closure(double residual, double reference, String unit, String what) {
+        double rel = Math.abs(residual) / Math.abs(reference);
+        if (rel < 1e-9) {
+            return String.format(Locale.ROOT, "below 1e-9 of the %s (%.4g %s): closes to round-off", what, reference,
+                    unit);
+        }
+        return String.format(Locale.ROOT, "%.3g %s (%.2g of the %s, %.4g %s)", residual, unit, rel, what, reference,
+                unit);
     }
 }

@@ -2,6 +2,7 @@ package org.ventcase.relief;
 
 import java.util.List;
 
+import org.ventcase.common.TraceStep;
 import org.ventcase.device.GasSizingResult;
 
 /**
@@ -20,13 +21,14 @@ import org.ventcase.device.GasSizingResult;
  * @param peakSizing            API 520 sizing at the peak
  * @param stopReason            why the simulation ended
  * @param balance               mass and energy balance over the run
+ * @param trace                 the calculation steps in order
  * @param warnings              what the user must know
  */
 public record BoilOffResult(BoilOffInput input, List<BoilOffPoint> curve, int peakIndex, double initialLoadKgPerS,
                             double initialAreaM2, double peakLoadKgPerS, double peakAreaM2,
                             double peakMinusInitialAreaPercent, double peakMinusInitialLoadPercent,
                             RelievedFluid peakVapour, GasSizingResult peakSizing, StopReason stopReason,
-                            Balance balance, List<String> warnings) {
+                            Balance balance, List<TraceStep> trace, List<String> warnings) {
 
     /** Why the run ended. */
     public enum StopReason {
@@ -53,6 +55,7 @@ public record BoilOffResult(BoilOffInput input, List<BoilOffPoint> curve, int pe
 
     public BoilOffResult {
         curve = List.copyOf(curve);
+        trace = List.copyOf(trace);
         warnings = List.copyOf(warnings);
     }
 

@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 
 import org.ventcase.common.NoSolutionException;
+import org.ventcase.common.TraceStep;
 import org.ventcase.device.GasSizingResult;
 import org.ventcase.thermo.CubicModel;
 import org.ventcase.thermo.DensityBasis;
@@ -60,7 +61,8 @@ public final class NearCriticalFire {
         double p1 = in.relievingPressurePa();
         LinkedHashSet<String> warnings = new LinkedHashSet<>(spec.kijWarnings());
 
-        double v0 = state(model, flash, z, in.initialTemperatureK(), in.initialPressurePa(), basis).v;
+        double v0 = in.initialSpecificVolumeM3Kg().isPresent() ? in.initialSpecificVolumeM3Kg().getAsDouble()
+                : state(model, flash, z, in.initialTemperatureK(), in.initialPressurePa(), basis).v;
         double m0 = in.vesselVolumeM3() / v0;
         double tLo = in.initialTemperatureK();
         double tHi = in.finalTemperatureK();
@@ -163,7 +165,40 @@ public final class NearCriticalFire {
                     curve.get(maxW).massFlowKgPerS() * 3600, curve.get(maxW).temperatureK(),
                     curve.get(gov).temperatureK(), curve.get(gov).massFlowKgPerS() * 3600));
         }
-        return new NearCriticalFireResult(in, tOpen, m0, curve, gov, maxW, gf, gs, new ArrayList<>(warnings));
+        List<TraceStep> trace = new ArrayList<>();
+        trace.add(TraceStep.of("Opening: heat-up at constant volume to P1")
+                .equation(in.initialSpecificVolumeM3Kg().isPresent()
+                        ? "v0 = V / m of the inventory; T_open solves v(T_open, P1) = v0 (bisection); m = V / v0"
+                        : "v0 = v(T0, P0); T_open solves v(T_open, P1) = v0 (bisection); m = V / v0")
+                .source(spec.eos().displayName() + " (" + spec.eos().citation() + "); PT flash for the phase split")
+                .in("Initial state T0, P0", ScenarioSupport.kelvinC(in.initialTemperatureK()) + ", "
+                        + ScenarioSupport.kpa(in.initialPressurePa()) + " abs")
+                .in("Composition", ScenarioSupport.fractions(z))
+                .in("Vessel volume V", String.format(Locale.ROOT, "%.3f m3", in.vesselVolumeM3()))
+                .in("P1", ScenarioSupport.kpa(p1) + " abs")
+                .out("Specific volume v0", String.format(Locale.ROOT, "%.5g m3/kg", v0))
+                .out("Contents' mass", String.format(Locale.ROOT, "%.0f kg", m0))
+                .out("Opening temperature", ScenarioSupport.kelvinC(tOpen)).build());
+        NearCriticalFireResult.Point gp = curve.get(gov);
+        NearCriticalFireResult.Point mp = curve.get(maxW);
+        trace.add(TraceStep.of("Stepwise heat-up at P1")
+                .equation("W = Q (dv/dh)_P / [v + (dv/dh)_P (h_out - h)]; single phase: W = Q (dv/dT)_P / (c_p v); "
+                        + "dt = V dh [v + (dv/dh)_P (h_out - h)] / (v^2 Q)")
+                .source("API Std 521 / ISO 23251: relief of supercritical fluids from the change of specific volume "
+                        + "with heat input; balance derived in DEVELOPERS.md")
+                .in("Heat input Q", String.format(Locale.ROOT, "%.1f kW (constant)", in.heatW() / 1e3))
+                .in("Temperature range", ScenarioSupport.kelvinC(tOpen) + " to "
+                        + ScenarioSupport.kelvinC(in.finalTemperatureK()))
+                .in("Steps", Integer.toString(in.steps()))
+                .out("Largest mass rate", String.format(Locale.ROOT, "%.1f kg/h at %.2f K", mp.massFlowKgPerS() * 3600,
+                        mp.temperatureK()))
+                .out("Largest required area (sizing point)", String.format(Locale.ROOT, "%.1f mm2 at %.2f K, "
+                        + "%.1f kg/h, %.0f s after opening", gp.requiredAreaM2() * 1e6, gp.temperatureK(),
+                        gp.massFlowKgPerS() * 3600, gp.timeS()))
+                .out("Two-phase steps", anyTwoPhase ? "yes (vapour taken to leave)" : "none").build());
+        trace.add(ScenarioSupport.fluidStep("Relieved fluid at the sizing point", gf));
+        trace.add(ScenarioSupport.sizingStep(gs));
+        return new NearCriticalFireResult(in, tOpen, m0, curve, gov, maxW, gf, gs, trace, new ArrayList<>(warnings));
     }
 
     /**

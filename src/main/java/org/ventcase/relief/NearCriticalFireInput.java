@@ -14,11 +14,30 @@ import org.ventcase.common.InvalidInputException;
  * @param finalTemperatureK    end of the heat-up considered, K (above the opening temperature)
  * @param steps                number of equal temperature steps from opening to the end
  * @param device               back pressure and coefficients
+ * @param initialSpecificVolumeM3Kg the contents' specific volume before the fire, m3/kg, when known
+ *                             (a saturated liquid-vapour inventory: V / m); empty to take v(T0, P0)
+ *                             from a flash, which is only defined away from saturation
  */
 public record NearCriticalFireInput(MixtureSpec fluid, double vesselVolumeM3, double heatW, double relievingPressurePa,
                                     double initialTemperatureK, double initialPressurePa, double finalTemperatureK,
-                                    int steps, DeviceSpec device) {
+                                    int steps, DeviceSpec device, java.util.OptionalDouble initialSpecificVolumeM3Kg) {
+
+    /** Without a given initial specific volume: v0 = v(T0, P0) from a flash. */
+    public NearCriticalFireInput(MixtureSpec fluid, double vesselVolumeM3, double heatW, double relievingPressurePa,
+                                 double initialTemperatureK, double initialPressurePa, double finalTemperatureK,
+                                 int steps, DeviceSpec device) {
+        this(fluid, vesselVolumeM3, heatW, relievingPressurePa, initialTemperatureK, initialPressurePa,
+                finalTemperatureK, steps, device, java.util.OptionalDouble.empty());
+    }
+
     public NearCriticalFireInput {
+        if (initialSpecificVolumeM3Kg == null) {
+            initialSpecificVolumeM3Kg = java.util.OptionalDouble.empty();
+        }
+        if (initialSpecificVolumeM3Kg.isPresent()) {
+            InvalidInputException.requirePositive("nearCritical.initialSpecificVolume", initialSpecificVolumeM3Kg.getAsDouble(),
+                    "m3/kg");
+        }
         if (fluid == null) {
             throw InvalidInputException.missing("nearCritical.fluid", "expected the contents");
         }

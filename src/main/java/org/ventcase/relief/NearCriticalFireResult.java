@@ -2,6 +2,7 @@ package org.ventcase.relief;
 
 import java.util.List;
 
+import org.ventcase.common.TraceStep;
 import org.ventcase.device.GasSizingResult;
 
 /**
@@ -16,12 +17,13 @@ import org.ventcase.device.GasSizingResult;
  *                             unless the two coincide)
  * @param governingFluid       relieved fluid at the governing point
  * @param governingSizing      API 520 sizing at the governing point
+ * @param trace                the calculation steps in order
  * @param warnings             what the user must know
  */
 public record NearCriticalFireResult(NearCriticalFireInput input, double openingTemperatureK, double initialMassKg,
                                      List<Point> curve, int governingIndex, int maxFlowIndex,
                                      RelievedFluid governingFluid, GasSizingResult governingSizing,
-                                     List<String> warnings) {
+                                     List<TraceStep> trace, List<String> warnings) {
 
     /**
      * One step of the heat-up at P1.
@@ -47,6 +49,7 @@ public record NearCriticalFireResult(NearCriticalFireInput input, double opening
 
     public NearCriticalFireResult {
         curve = List.copyOf(curve);
+        trace = List.copyOf(trace);
         warnings = List.copyOf(warnings);
     }
 

@@ -35,8 +35,11 @@ final class ScenarioSupport {
                 .equation("cubic EOS at relieving conditions; k = Cp_ig/Cv_ig per API 520")
                 .source(f.provenance());
         for (String line : f.table()) {
-            b.out(line.contains("=") ? line.substring(0, line.indexOf('=')).trim() : "Item",
-                    line.contains("=") ? line.substring(line.indexOf('=') + 1).trim() : line);
+            // "Name = value" or "Name: value"; the first separator splits (each line's name is distinct)
+            int eq = line.indexOf('=');
+            int colon = line.indexOf(':');
+            int cut = eq < 0 ? colon : colon < 0 ? eq : Math.min(eq, colon);
+            b.out(cut < 0 ? "Item" : line.substring(0, cut).trim(), cut < 0 ? line : line.substring(cut + 1).trim());
         }
         return b.build();
     }

@@ -2,10 +2,12 @@ package org.ventcase.relief;
 
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
+import java.util.List;
 import java.util.Locale;
 import java.util.OptionalDouble;
 
 import org.ventcase.common.NoSolutionException;
+import org.ventcase.common.TraceStep;
 import org.ventcase.thermo.Component;
 import org.ventcase.thermo.CubicModel;
 import org.ventcase.thermo.DensityBasis;
@@ -78,7 +80,27 @@ public final class ThermalRelief {
                 + "percent); compare with measured data where the result matters.");
         RelievedFluid liq = RelievedFluid.of(RelievedFluid.Phase.LIQUID, spec, fp, OptionalDouble.empty(), "",
                 OptionalDouble.empty(), "not needed for the thermal case (the device is normally a small liquid valve)");
-        return new ThermalReliefResult(in, alpha, c, rho, q, q * rho, check, pb, vapourGoverns, liq,
+        List<TraceStep> trace = new ArrayList<>();
+        trace.add(TraceStep.of("Blocked-in liquid at relieving conditions")
+                .equation("alpha_v = (1/v)(dv/dT)_P with (dv/dT)_P = (mu_JT Cp + v_cubic)/T; c = Cp / M; liquid root")
+                .source(spec.eos().displayName() + " (" + spec.eos().citation() + ")")
+                .in("T", ScenarioSupport.kelvinC(t)).in("P1", ScenarioSupport.kpa(p) + " abs")
+                .out("alpha_v", String.format(Locale.ROOT, "%.4g 1/K", alpha))
+                .out("c", String.format(Locale.ROOT, "%.1f J/(kg K)", c))
+                .out("rho", String.format(Locale.ROOT, "%.2f kg/m3 (%s)", rho, fp.densityBasis().label())).build());
+        trace.add(TraceStep.of("Thermal relief rate").equation("q = alpha_v phi / (rho c); W = rho q")
+                .source("API Std 521 / ISO 23251 hydraulic expansion, q = alpha_v phi / (1000 d c) with 1000 d = rho")
+                .in("Heat transfer rate phi", String.format(Locale.ROOT, "%.2f kW", in.heatW() / 1e3))
+                .out("q", String.format(Locale.ROOT, "%.4g m3/h", q * 3600))
+                .out("W", String.format(Locale.ROOT, "%.2f kg/h", q * rho * 3600))
+                .out("Check by the standard's form", String.format(Locale.ROOT, "%.4g m3/h", check * 3600)).build());
+        trace.add(TraceStep.of("Does the liquid stay liquid at P1?")
+                .equation("bubble (vapour) pressure at T compared with P1")
+                .source(spec.eos().displayName())
+                .out("Bubble pressure", pb.isPresent() ? ScenarioSupport.kpa(pb.getAsDouble()) + " abs" : "not found")
+                .out("Vapour generation governs", vapourGoverns ? "yes" : "no").build());
+        trace.add(ScenarioSupport.fluidStep("Relieved liquid", liq));
+        return new ThermalReliefResult(in, alpha, c, rho, q, q * rho, check, pb, vapourGoverns, liq, trace,
                 new ArrayList<>(warnings));
     }
 

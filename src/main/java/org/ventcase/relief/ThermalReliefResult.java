@@ -3,6 +3,8 @@ package org.ventcase.relief;
 import java.util.List;
 import java.util.OptionalDouble;
 
+import org.ventcase.common.TraceStep;
+
 /**
  * Result of the thermal expansion case.
  *
@@ -16,14 +18,16 @@ import java.util.OptionalDouble;
  * @param bubblePressurePa        the liquid's bubble (vapour) pressure at T, Pa abs, when it has one
  * @param vapourGenerationGoverns true when the bubble pressure exceeds P1
  * @param relievedLiquid          the relieved liquid's properties
+ * @param trace                   the calculation steps in order
  * @param warnings                what the user must know
  */
 public record ThermalReliefResult(ThermalReliefInput input, double expansionCoefficientPerK,
                                   double specificHeatJPerKgK, double densityKgM3, double volumetricRateM3PerS,
                                   double massRateKgPerS, double formulaCheckM3PerS, OptionalDouble bubblePressurePa,
                                   boolean vapourGenerationGoverns, RelievedFluid relievedLiquid,
-                                  List<String> warnings) {
+                                  List<TraceStep> trace, List<String> warnings) {
     public ThermalReliefResult {
+        trace = List.copyOf(trace);
         warnings = List.copyOf(warnings);
     }
 }

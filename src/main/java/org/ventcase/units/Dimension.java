@@ -20,7 +20,9 @@ public enum Dimension {
     THERMAL_CONDUCTIVITY("W/(m K)"),
     HEAT_TRANSFER_COEFFICIENT("W/(m2 K)"),
     MOLAR_MASS("kg/kmol"),
-    ANGLE("deg");
+    ANGLE("deg"),
+    /** A duration. */
+    TIME("s");
 
     private final String siUnit;
 

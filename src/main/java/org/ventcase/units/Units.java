@@ -121,6 +121,10 @@ public final class Units {
         put(Dimension.MOLAR_MASS, 1, 0, "kg/kmol", "g/mol");
 
         put(Dimension.ANGLE, 1, 0, "deg", "°");
+
+        put(Dimension.TIME, 1, 0, "s", "sec");
+        put(Dimension.TIME, 60, 0, "min");
+        put(Dimension.TIME, 3600, 0, "h", "hr");
     }
 
     private static void put(Dimension d, double factor, double offset, String... names) {
@@ -267,6 +271,7 @@ public final class Units {
             case HEAT_TRANSFER_COEFFICIENT -> "'10 W/m2K'";
             case MOLAR_MASS -> "'44.1 kg/kmol'";
             case ANGLE -> "'30 deg'";
+            case TIME -> "'2 h' or '90 min'";
         };
     }
 

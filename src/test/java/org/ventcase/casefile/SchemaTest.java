@@ -50,7 +50,7 @@ class SchemaTest {
 
     private static List<Path> caseFiles() throws IOException {
         List<Path> out = new ArrayList<>();
-        for (Path d : List.of(Path.of("templates", "cases"), Path.of("demo", "cases"))) {
+        for (Path d : List.of(Path.of("templates", "cases"), Path.of("demo-cases"))) {
             if (Files.isDirectory(d)) {
                 try (Stream<Path> s = Files.list(d)) {
                     s.filter(p -> p.toString().endsWith(".json")).sorted().forEach(out::add);

@@ -119,4 +119,26 @@ class NearCriticalFireTest {
                 V, Q, P1, 290, 8e6, 420, 10, DeviceSpec.gasValve(1e5)));
         assertEquals("nearCritical.initialPressure", e.field());
     }
+
+    @Test
+    void aGivenInitialSpecificVolumeEqualToTheFlashedOneChangesNothing() {
+        NearCriticalFireResult flashed = run(20);
+        double v0 = V / flashed.initialMassKg();
+        NearCriticalFireResult given = NearCriticalFire.run(new NearCriticalFireInput(ethane(), V, Q, P1, 290, 6e6, 420,
+                20, DeviceSpec.gasValve(101_325), java.util.OptionalDouble.of(v0)));
+        // Hand calculation: the same v0 must give the same opening temperature and curve (identity, to round-off)
+        assertEquals(flashed.openingTemperatureK(), given.openingTemperatureK(), 1e-9 * flashed.openingTemperatureK());
+        assertEquals(flashed.governing().massFlowKgPerS(), given.governing().massFlowKgPerS(),
+                1e-9 * flashed.governing().massFlowKgPerS());
+    }
+
+    @Test
+    void aDenserInventoryOpensAtALowerTemperature() {
+        NearCriticalFireResult flashed = run(20);
+        double v0 = V / flashed.initialMassKg();
+        NearCriticalFireResult denser = NearCriticalFire.run(new NearCriticalFireInput(ethane(), V, Q, P1, 290, 6e6, 420,
+                20, DeviceSpec.gasValve(101_325), java.util.OptionalDouble.of(0.8 * v0)));
+        // Hand calculation: v(T, P1) rises with T, so v(T_open) = 0.8 v0 is reached at a lower T_open
+        assertTrue(denser.openingTemperatureK() < flashed.openingTemperatureK());
+    }
 }

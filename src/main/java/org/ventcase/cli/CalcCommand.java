@@ -1,0 +1,154 @@
+package org.ventcase.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+
+import org.ventcase.calc.CaseCalculation;
+import org.ventcase.calc.CaseResult;
+import org.ventcase.casefile.CaseFiles;
+import org.ventcase.casefile.CaseInputs;
+import org.ventcase.casefile.CaseValidationException;
+import org.ventcase.casefile.Problem;
+import org.ventcase.casefile.ResultsJson;
+import org.ventcase.casefile.ValidatedCase;
+import org.ventcase.inventory.Inventory;
+import org.ventcase.relief.RelievedFluid;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code ventcase calc}: runs every scenario of a case file, prints a summary, writes the results JSON. */
+@Command(name = "calc", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+        header = "Run every scenario of a case file: loads, required areas, orifices, governing scenario.",
+        description = {"Prints a summary (governing scenario first, then the others, the inventory and every "
+                + "warning) and, with --json, writes the results JSON (format: README, 'Results JSON'). "
+                + "The same case always gives the same bytes. The case file is only read.",
+                "First-pass estimates only: final relief design must be verified by a qualified engineer under "
+                        + "the applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) "
+                        + "and local regulations."},
+        footer = ExitCode.HELP_LIST)
+final class CalcCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "CASE.json", description = "The case file.")
+    Path file;
+
+    @Option(names = "--json", paramLabel = "OUT.json",
+            description = "Write the results JSON here (atomically: a temporary file in the same folder, then moved).")
+    Path json;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        ValidatedCase vc;
+        try {
+            vc = CaseFiles.load(file);
+        } catch (CaseValidationException e) {
+            err.println(e.origin() + ": " + e.problems().size() + (e.problems().size() == 1 ? " problem" : " problems"));
+            for (Problem p : e.problems()) {
+                err.println("  " + p.message());
+            }
+            return ExitCode.INVALID_INPUT;
+        }
+        if (json != null && json.toAbsolutePath().normalize().equals(file.toAbsolutePath().normalize())) {
+            err.println("ventcase: --json " + json + " names the case file itself; the case file is never "
+                    + "overwritten: choose another output file");
+            return ExitCode.INVALID_INPUT;
+        }
+        CaseResult r = CaseCalculation.run(CaseInputs.from(vc));
+        String text = ResultsJson.write(r, ResultsJson.toolVersion());
+        if (json != null) {
+            CaseFiles.writeText(text, json);
+        }
+        print(out, r);
+        if (json != null) {
+            out.println();
+            out.println("Results JSON written to " + json);
+        }
+        return ExitCode.OK;
+    }
+
+    private static void print(PrintWriter out, CaseResult r) {
+        out.println("VENTCASE CALC: " + r.title() + " (" + r.tag() + ")");
+        out.println("First-pass estimate only. Final relief design must be verified by a qualified engineer under the");
+        out.println("applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) and local regulations.");
+        out.println("Input hash " + r.inputHash());
+        out.println();
+        List<CaseResult.ScenarioResult> order = new ArrayList<>();
+        r.governing().ifPresent(order::add);
+        for (CaseResult.ScenarioResult s : r.scenarios()) {
+            if (!s.governing()) {
+                order.add(s);
+            }
+        }
+        for (CaseResult.ScenarioResult s : order) {
+            out.printf(Locale.ROOT, "%s%d. %s [%s]%n", s.governing() ? "GOVERNING  " : "", s.index() + 1, s.label(),
+                    s.type().key());
+            if (s.failure().isPresent()) {
+                out.println("   not computed: " + s.failure().get());
+                out.println();
+                continue;
+            }
+            row(out, "Relieving pressure P1", String.format(Locale.ROOT, "%.1f kPa abs",
+                    s.relievingPressurePa().getAsDouble() / 1e3));
+            s.relievingTemperatureK().ifPresent(t -> row(out, "Relieving temperature T1", Text.temperature(t)));
+            s.heatInputW().ifPresent(q -> row(out, "Heat input Q", String.format(Locale.ROOT, "%.1f kW", q / 1e3)));
+            s.latentHeatJPerKg().ifPresent(l -> row(out, "Latent heat", String.format(Locale.ROOT, "%.1f kJ/kg",
+                    l / 1e3)));
+            s.reliefLoadKgPerS().ifPresent(w -> row(out, "Relief load W", String.format(Locale.ROOT, "%.1f kg/h",
+                    w * 3600)));
+            s.relievedFluid().ifPresent(f -> row(out, "Relieved " + f.phase().label(), fluid(f)));
+            s.requiredAreaM2().ifPresent(a -> row(out, "Required effective area", String.format(Locale.ROOT,
+                    "%.1f mm2 (%.4f in2), %s", a * 1e6, a * 1e6 / 645.16, s.sizingEquation())));
+            s.orifice().ifPresent(o -> row(out, "API 526 orifice", String.format(Locale.ROOT,
+                    "%s (%.0f mm2), margin %.0f %%", o.designation(), o.selectedAreaMm2(), o.marginPercent())));
+            if (!s.loadCurve().isEmpty()) {
+                row(out, "Load curve", s.loadCurve().size() + " points (in the results JSON)");
+            }
+            out.println();
+        }
+        out.println("Governing rule: " + r.governingRule());
+        out.println();
+        Inventory inv = r.inventory();
+        out.println("INVENTORY (" + inv.mode().name().toLowerCase(Locale.ROOT) + ", " + Text.temperature(inv.temperatureK())
+                + ", " + String.format(Locale.ROOT, "%.1f kPa abs", inv.pressurePa() / 1e3) + ")");
+        row(out, "Vessel", r.vessel().vessel().describe());
+        row(out, "Volume total / liquid", String.format(Locale.ROOT, "%.2f m3 / %.2f m3", r.vessel().totalVolume(),
+                r.vessel().liquidVolume()));
+        row(out, "Wetted / fire-exposed area", String.format(Locale.ROOT, "%.2f m2 / %.2f m2", r.vessel().wettedArea(),
+                r.vessel().fire().area()));
+        row(out, "Mass liquid / vapour / total", String.format(Locale.ROOT, "%.0f kg / %.0f kg / %.0f kg",
+                inv.liquidMassKg(), inv.vapourMassKg(), inv.totalMassKg()));
+        for (Map.Entry<String, Double> e : inv.massPerComponentKg().entrySet()) {
+            row(out, "  " + e.getKey(), String.format(Locale.ROOT, "%.0f kg", e.getValue()));
+        }
+        if (!r.warnings().isEmpty()) {
+            out.println();
+            out.println("WARNINGS");
+            for (CaseResult.CaseWarning w : r.warnings()) {
+                out.println("  ! " + (w.scenarios().isEmpty() ? "" : "[" + String.join("; ", w.scenarios()) + "] ")
+                        + w.message());
+            }
+        }
+    }
+
+    private static String fluid(RelievedFluid f) {
+        return String.format(Locale.ROOT, "M %.2f kg/kmol, Z %.4f, k %.4f, %.4g kg/m3", f.molarMass(), f.z(),
+                f.kIdeal(), f.density());
+    }
+
+    private static void row(PrintWriter out, String label, String value) {
+        out.printf(Locale.ROOT, "   %-30s %s%n", label, value);
+    }
+}
