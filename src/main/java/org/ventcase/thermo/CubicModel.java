@@ -317,27 +317,10 @@ public final class CubicModel {
     public double chooseZ(MixParams m, double p, PhaseRequest request) {
         double aa = bigA(m, p);
         double bb = bigB(m, p);
-        double c2 = (u - 1.0) * bb - 1.0;
-        double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
-        double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
-        double[] all = new double[3];
-        int nAll = CubicSolver.count(CubicSolver.rootsCoded(c2, c1, c0, 1.0 + bb + 1e-12, all));
-        double zl = Double.NaN;
-        double zv = Double.NaN;
-        int nPhys = 0;
-        for (int i = 0; i < nAll; i++) {
-            if (all[i] > bb) {
-                if (nPhys == 0) {
-                    zl = all[i];
-                }
-                zv = all[i];
-                nPhys++;
-            }
-        }
-        if (nPhys == 0) {
-            throw new IllegalStateException("no physical root of the cubic (Z > B) at T = " + m.t() + " K, P = " + p
-                    + " Pa");
-        }
+        double[] ends = new double[2];
+        int nPhys = outerPhysicalRoots(aa, bb, m.t(), p, ends);
+        double zl = ends[0];
+        double zv = ends[1];
         if (nPhys == 1 || request == PhaseRequest.LIQUID) {
             return zl;
         }
@@ -532,27 +515,10 @@ public final class CubicModel {
         double rt = R * t;
         double aa = a * p / (rt * rt);
         double bb = b * p / rt;
-        double c2 = (u - 1.0) * bb - 1.0;
-        double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
-        double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
-        double[] all = new double[3];
-        int nAll = CubicSolver.count(CubicSolver.rootsCoded(c2, c1, c0, 1.0 + bb + 1e-12, all));
-        double zl = Double.NaN;
-        double zv = Double.NaN;
-        int nPhys = 0;
-        for (int i = 0; i < nAll; i++) {
-            if (all[i] > bb) {
-                if (nPhys == 0) {
-                    zl = all[i];
-                }
-                zv = all[i];
-                nPhys++;
-            }
-        }
-        if (nPhys == 0) {
-            throw new IllegalStateException("no physical root of the cubic (Z > B) at T = " + t + " K, P = " + p
-                    + " Pa");
-        }
+        double[] ends = new double[2];
+        int nPhys = outerPhysicalRoots(aa, bb, t, p, ends);
+        double zl = ends[0];
+        double zv = ends[1];
         double q = aa / bb;
         double z;
         double lnPhi;
@@ -570,6 +536,33 @@ public final class CubicModel {
             lnPhi = liq ? gl : gv;
         }
         return new double[] {z, lnPhi};
+    }
+
+    /**
+     * The smallest and largest physical roots (Z > B) of the cubic for A and B, written into
+     * {ends[0], ends[1]}; returns how many physical roots there are (1 to 3).
+     */
+    private int outerPhysicalRoots(double aa, double bb, double t, double p, double[] ends) {
+        double c2 = (u - 1.0) * bb - 1.0;
+        double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
+        double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
+        double[] all = new double[3];
+        int nAll = CubicSolver.count(CubicSolver.rootsCoded(c2, c1, c0, 1.0 + bb + 1e-12, all));
+        int nPhys = 0;
+        for (int i = 0; i < nAll; i++) {
+            if (all[i] > bb) {
+                if (nPhys == 0) {
+                    ends[0] = all[i];
+                }
+                ends[1] = all[i];
+                nPhys++;
+            }
+        }
+        if (nPhys == 0) {
+            throw new IllegalStateException("no physical root of the cubic (Z > B) at T = " + t + " K, P = " + p
+                    + " Pa");
+        }
+        return nPhys;
     }
 
     /** G^R/RT = Z - 1 - ln(Z - B) - (A/B) I, the same expression as {@link #reducedResidualGibbs}. */
