@@ -371,7 +371,7 @@ final class CaseSheet {
         }
         return new Table("Relieving conditions, heat input and latent heat by scenario", List.of("Scenario",
                 "P1", "T1 (sizing point)", "Heat input Q", "Latent heat L", "Relief load W"),
-                List.of(1.3, 0.9, 1.3, 1.0, 1.3, 1.4), rows, NONE + " : the scenario type has no such quantity, "
+                List.of(1.2, 0.9, 1.25, 1.3, 1.3, 1.25), rows, NONE + " : the scenario type has no such quantity, "
                 + "or it could not be computed (see the warnings).");
     }
 
@@ -382,6 +382,10 @@ final class CaseSheet {
         List<PhaseInventory> phases = new ArrayList<>();
         inv.liquid().ifPresent(phases::add);
         phases.add(inv.vapour());
+        if (inv.liquid().isEmpty()) {
+            ph.add(Row.of("liquid", "none (gas-filled vessel)", NONE, NONE, NONE, u.plain(Kind.MASS, inv.liquidMassKg()),
+                    NONE));
+        }
         for (PhaseInventory p : phases) {
             ph.add(Row.of(p.phase(), u.plain(Kind.VOLUME, p.volumeM3()), u.plain(Kind.DENSITY, p.densityKgM3())
                     + " (" + p.densityBasis().label() + ")", f("%.5f", p.z()), f("%.3f kg/kmol", p.molarMassKgKmol()),
@@ -458,7 +462,6 @@ final class CaseSheet {
                 + u.format(Kind.PRESSURE_ABS, env.cricondenbar().pressurePa())));
         rows.add(Row.of("Cricondentherm", u.format(Kind.TEMPERATURE, env.cricondentherm().temperatureK()) + ", "
                 + u.format(Kind.PRESSURE_ABS, env.cricondentherm().pressurePa())));
-        rows.add(Row.of("Points traced", String.valueOf(env.points().size())));
         return Table.keyValue("Phase envelope of the stored liquid", rows, String.join(" ", env.warnings()));
     }
 
@@ -552,16 +555,32 @@ final class CaseSheet {
         markers.add(new Figure.Marker("storage: " + u.plain(Kind.TEMPERATURE, inv.temperatureK()) + ", "
                 + u.plain(Kind.PRESSURE_ABS, inv.pressurePa()), u.value(Kind.TEMPERATURE, inv.temperatureK()),
                 u.value(Kind.PRESSURE_ABS, inv.pressurePa()), false));
+        // one marker per distinct relieving point (scenarios at the same T1 and P1 share it), at most three
+        java.util.Map<String, List<Integer>> at = new java.util.LinkedHashMap<>();
+        java.util.Map<String, double[]> where = new java.util.HashMap<>();
+        java.util.Set<String> governing = new java.util.HashSet<>();
         for (CaseResult.ScenarioResult s : r.scenarios()) {
-            if (s.relievingTemperatureK().isPresent() && s.relievingPressurePa().isPresent()
-                    && (s.governing() || markers.size() < 3)) {
-                double t = s.relievingTemperatureK().getAsDouble();
-                double p = s.relievingPressurePa().getAsDouble();
-                markers.add(new Figure.Marker("relieving, scenario " + (s.index() + 1) + ": "
-                        + u.plain(Kind.TEMPERATURE, t) + ", " + u.plain(Kind.PRESSURE_ABS, p),
-                        u.value(Kind.TEMPERATURE, t), u.value(Kind.PRESSURE_ABS, p), s.governing()));
+            if (s.relievingTemperatureK().isEmpty() || s.relievingPressurePa().isEmpty()) {
+                continue;
+            }
+            double t = s.relievingTemperatureK().getAsDouble();
+            double p = s.relievingPressurePa().getAsDouble();
+            String label = u.plain(Kind.TEMPERATURE, t) + ", " + u.plain(Kind.PRESSURE_ABS, p);
+            if (at.containsKey(label) || at.size() < 3) {
+                at.computeIfAbsent(label, k -> new ArrayList<>()).add(s.index() + 1);
+                where.putIfAbsent(label, new double[] {t, p});
+                if (s.governing()) {
+                    governing.add(label);
+                }
             }
         }
+        at.forEach((label, ns) -> {
+            StringBuilder sb = new StringBuilder();
+            ns.forEach(n -> sb.append(sb.length() == 0 ? "" : ", ").append(n));
+            markers.add(new Figure.Marker("relieving, scenario" + (ns.size() > 1 ? "s " : " ") + sb + ": " + label,
+                    u.value(Kind.TEMPERATURE, where.get(label)[0]), u.value(Kind.PRESSURE_ABS, where.get(label)[1]),
+                    governing.contains(label)));
+        });
         e.criticalPoint().ifPresent(c -> markers.add(new Figure.Marker("critical point",
                 u.value(Kind.TEMPERATURE, c.temperatureK()), u.value(Kind.PRESSURE_ABS, c.pressurePa()), false)));
         return new Figure.LineChart("Phase envelope of the stored liquid's composition (" + in.fluid().variant()
@@ -606,7 +625,7 @@ final class CaseSheet {
         }
         return new Figure.LineChart("Scenario " + (s.index() + 1) + " (" + s.label() + "): relief load over time "
                 + "from the opening of the device. The sizing point is the largest required area on the curve "
-                + "(the relieved fluid changes along it, so the largest load need not need the largest area).",
+                + "(the relieved fluid changes along it, so the largest load need not give the largest area).",
                 "Time since opening, " + (hours ? "h" : "min"), "Relief load, " + u.unit(Kind.MASS_FLOW),
                 List.of(new Figure.Series("Relief load W", x, y, false)), markers);
     }
