@@ -43,6 +43,8 @@ import org.ventcase.vessel.Vessel;
  * One PDF calculation sheet in-process after warm-up. Target (DESIGN.md): <= 1 s.
  * {@code writeSheet}: a prepared SheetModel to a PDF file (layout, fonts, figures, save, atomic move).
  * {@code calculateAndWriteSheet}: the fire case, its 20-level load curve, the model and the PDF.
+ * {@code caseSheet}: the LPG sphere demo case (run from demo-cases/, the project folder): case
+ * calculation with both scenarios, level curve and phase envelope, the model and the PDF.
  * Run: mvn -q -Pbench -DskipTests package && java -jar target/ventcase-bench.jar SheetBench
  */
 @State(Scope.Thread)
@@ -58,6 +60,8 @@ public class SheetBench {
     private SheetModel model;
     private Path dir;
     private Path target;
+    private org.ventcase.calc.CaseInput caseInput;
+    private SheetIdentity caseIdentity;
 
     @Setup
     public void setUp() throws IOException {
@@ -73,6 +77,13 @@ public class SheetBench {
                 LocalDate.of(2026, 1, 1), "bench", "", "Ventcase", "bench",
                 "0000000000000000000000000000000000000000000000000000000000000000");
         model = SheetModels.from(WettedFire.run(input), identity, UnitSystem.SI);
+        // the invented LPG sphere demo case: wetted fire (with its load against level) and a 2 h boil-off
+        org.ventcase.casefile.ValidatedCase vc = org.ventcase.casefile.CaseFiles.load(
+                Path.of("demo-cases", "lpg-sphere-mixture.json"));
+        caseInput = org.ventcase.casefile.CaseInputs.from(vc);
+        caseIdentity = new SheetIdentity(vc.identity().title(), vc.identity().tag(), vc.identity().revision(),
+                vc.identity().date(), vc.identity().preparer(), vc.identity().checker(), "Ventcase", "bench",
+                vc.inputHash());
         dir = Files.createTempDirectory("sheetbench");
         target = dir.resolve("sheet.pdf");
     }
@@ -86,6 +97,15 @@ public class SheetBench {
     @Benchmark
     public long writeSheet() throws IOException {
         CalculationSheet.write(model, target, CalculationSheet.PageSize.A4);
+        return Files.size(target);
+    }
+
+    /** A whole case from its input: the case pipeline (every scenario, curves, envelope), the model, the PDF. */
+    @Benchmark
+    public long caseSheet() throws IOException {
+        org.ventcase.calc.CaseResult r = org.ventcase.calc.CaseCalculation.run(caseInput);
+        CalculationSheet.write(SheetModels.from(r, caseInput, caseIdentity, UnitSystem.SI), target,
+                CalculationSheet.PageSize.A4);
         return Files.size(target);
     }
 

@@ -10,6 +10,7 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.OptionalInt;
 
+import org.ventcase.common.ConvergenceException;
 import org.ventcase.common.InvalidInputException;
 import org.ventcase.common.NoSolutionException;
 import org.ventcase.common.TraceStep;
@@ -33,6 +34,7 @@ import org.ventcase.relief.EnvironmentFactor;
 import org.ventcase.relief.EnvironmentFactors;
 import org.ventcase.relief.FireFighting;
 import org.ventcase.relief.FireHeatInput;
+import org.ventcase.relief.FireLoadCurve;
 import org.ventcase.relief.GasFilledFire;
 import org.ventcase.relief.GasFilledFireInput;
 import org.ventcase.relief.GasFilledFireResult;
@@ -51,6 +53,8 @@ import org.ventcase.relief.ThermalRelief;
 import org.ventcase.relief.ThermalReliefInput;
 import org.ventcase.relief.ThermalReliefResult;
 import org.ventcase.thermo.Composition;
+import org.ventcase.thermo.mix.PhaseEnvelope;
+import org.ventcase.vessel.Level;
 import org.ventcase.vessel.LevelState;
 
 /**
@@ -78,13 +82,65 @@ public final class CaseCalculation {
     /** Heat-up range of the near-critical case above the storage temperature, K. */
     public static final double NEAR_CRITICAL_HEAT_UP_K = 300.0;
 
+    /** Lowest fill level of a wetted fire's load-against-level curve, % of volume. */
+    public static final double LEVEL_CURVE_FROM_PERCENT = 5;
+    /** Highest fill level of the curve, % of volume. */
+    public static final double LEVEL_CURVE_TO_PERCENT = 95;
+    /** Intervals of the curve (5 % steps; the case's own level is added). */
+    public static final int LEVEL_CURVE_STEPS = 18;
+
     private static final double NO_TIME_LIMIT_S = 1e12;
 
     private CaseCalculation() {
     }
 
+    /**
+     * Watches a run: told what is being computed, asked between steps whether to stop. Called on the
+     * calculating thread.
+     */
+    public interface Monitor {
+        /** Fraction done 0..1 and what comes next. */
+        void progress(double fraction, String message);
+
+        /** Polled between steps (inventory, each scenario, the envelope); true stops the run. */
+        boolean cancelled();
+
+        /** A monitor that ignores progress and never cancels. */
+        Monitor NONE = new Monitor() {
+            @Override
+            public void progress(double fraction, String message) {
+            }
+
+            @Override
+            public boolean cancelled() {
+                return false;
+            }
+        };
+    }
+
+    /** Thrown by {@link #run(CaseInput, Monitor)} when the monitor asked to stop. */
+    public static final class Cancelled extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        public Cancelled() {
+            super("case calculation cancelled");
+        }
+    }
+
     /** Runs every scenario of the case. */
     public static CaseResult run(CaseInput in) {
+        return run(in, Monitor.NONE);
+    }
+
+    /**
+     * Runs every scenario of the case, reporting progress and stopping between steps when the
+     * monitor asks ({@link Cancelled}).
+     */
+    public static CaseResult run(CaseInput in, Monitor monitor) {
+        int n = in.scenarios().size();
+        double steps = n + 2.0;
+        monitor.progress(0, "Inventory at storage conditions");
+        check(monitor);
         double maxP1 = 0;
         for (CaseInput.Scenario s : in.scenarios()) {
             maxP1 = Math.max(maxP1, RelievingPressure.compute(s.relieving()).relievingPressurePa());
@@ -97,15 +153,56 @@ public final class CaseCalculation {
         Context ctx = new Context(in, inv);
         List<CaseResult.ScenarioResult> results = new ArrayList<>();
         for (CaseInput.Scenario s : in.scenarios()) {
+            monitor.progress((results.size() + 1) / steps, "Scenario " + (results.size() + 1) + " of " + n + ": "
+                    + s.label());
+            check(monitor);
             results.add(runOne(ctx, s));
         }
+        monitor.progress((n + 1) / steps, "Phase envelope");
+        check(monitor);
+        CaseResult.Envelope envelope = envelope(in);
         OptionalInt gov = governing(results);
         List<CaseResult.ScenarioResult> marked = new ArrayList<>();
         for (int i = 0; i < results.size(); i++) {
             marked.add(results.get(i).withGoverning(gov.isPresent() && gov.getAsInt() == i));
         }
-        return new CaseResult(in.title(), in.tag(), in.inputHash(), inv.vessel(), inv, marked, gov,
-                CaseResult.GOVERNING_RULE, warnings(in, inv, marked, gov));
+        CaseResult r = new CaseResult(in.title(), in.tag(), in.inputHash(), inv.vessel(), inv, marked, gov,
+                CaseResult.GOVERNING_RULE, warnings(in, inv, marked, gov), envelope);
+        monitor.progress(1, "Done");
+        return r;
+    }
+
+    private static void check(Monitor m) {
+        if (m.cancelled()) {
+            throw new Cancelled();
+        }
+    }
+
+    // ------------------------------------------------------------------------------ envelope
+
+    /**
+     * The phase envelope of the stored liquid's composition (the fluid's composition; for a gas-filled
+     * vessel the gas's) with the case's EOS and k_ij; for one component present, none (a pure
+     * fluid has a saturation curve, not an envelope).
+     */
+    static CaseResult.Envelope envelope(CaseInput in) {
+        double[] x = in.fluid().composition().fractions();
+        int present = 0;
+        for (double v : x) {
+            if (v > 0) {
+                present++;
+            }
+        }
+        if (present < 2) {
+            return new CaseResult.Envelope(Optional.empty(), "a pure fluid has no phase envelope, only its "
+                    + "saturation curve");
+        }
+        try {
+            return new CaseResult.Envelope(Optional.of(new PhaseEnvelope(in.fluid().model()).trace(x)), "");
+        } catch (NoSolutionException | ConvergenceException | InvalidInputException e) {
+            return new CaseResult.Envelope(Optional.empty(), "the phase envelope could not be traced: "
+                    + e.getMessage());
+        }
     }
 
     // ------------------------------------------------------------------------------ governing
@@ -200,6 +297,8 @@ public final class CaseCalculation {
         Optional<RelievedFluid> fluid = Optional.empty();
         Optional<OrificeSelection> orifice = Optional.empty();
         String sizing = "";
+        Optional<FireLoadCurve> levelCurve = Optional.empty();
+        String levelCurveNote = "";
         final List<CaseResult.LoadPoint> curve = new ArrayList<>();
         final List<TraceStep> trace = new ArrayList<>();
         final LinkedHashSet<String> warnings = new LinkedHashSet<>();
@@ -236,7 +335,8 @@ public final class CaseCalculation {
             o = failed(o, why);
         }
         return new CaseResult.ScenarioResult(s.index(), s.label(), s.key(), false, o.p1, o.t1, o.q, o.latent, o.w,
-                o.area, o.fluid, o.orifice, o.sizing, o.curve, o.trace, new ArrayList<>(o.warnings), failure);
+                o.area, o.fluid, o.orifice, o.sizing, o.curve, o.trace, new ArrayList<>(o.warnings), failure,
+                o.levelCurve, o.levelCurveNote);
     }
 
     private static Out failed(Out partial, String why) {
@@ -258,8 +358,28 @@ public final class CaseCalculation {
 
     private static MixtureFireInput fireInput(Context c, FireFighting ff, EnvironmentFactor env,
                                               org.ventcase.relief.RelievingPressureInput rel) {
-        return new MixtureFireInput(c.liquid(), c.in().vessel(), c.in().level(), c.in().exposure(), rel, ff, env,
+        return fireInput(c, ff, env, rel, c.in().level());
+    }
+
+    private static MixtureFireInput fireInput(Context c, FireFighting ff, EnvironmentFactor env,
+                                              org.ventcase.relief.RelievingPressureInput rel, Level level) {
+        return new MixtureFireInput(c.liquid(), c.in().vessel(), level, c.in().exposure(), rel, ff, env,
                 c.in().device().gas(), false);
+    }
+
+    /**
+     * The wetted fire re-run over fill levels with the same environment factor (T1 and so an
+     * insulation factor do not depend on the level): the load-against-level curve.
+     */
+    private static FireLoadCurve levelCurve(Context c, CaseInput.WettedFire f, EnvironmentFactor env) {
+        return FireLoadCurve.overLevels(c.in().level().percentOfVolumeIn(c.in().vessel()), LEVEL_CURVE_FROM_PERCENT,
+                LEVEL_CURVE_TO_PERCENT, LEVEL_CURVE_STEPS, pct -> {
+                    MixtureFireResult r = MixtureFire.run(fireInput(c, f.fireFighting(), env, f.relieving(),
+                            Level.ofPercentOfVolume(pct)));
+                    return new FireLoadCurve.Point(r.vessel().levelPercentVolume(), r.vessel().levelPercentHeight(),
+                            r.vessel().levelM(), r.vessel().fire().area(), r.heat().heatW(), r.reliefLoadKgPerS(),
+                            r.sizing().areaM2());
+                });
     }
 
     private static void wetted(Context c, CaseInput.WettedFire f, Out o) {
@@ -286,6 +406,11 @@ public final class CaseCalculation {
             o.trace.add(factorStep(env, "the relieving temperature T1"));
         }
         o.warnings.addAll(r.warnings());
+        try {
+            o.levelCurve = Optional.of(levelCurve(c, f, env));
+        } catch (NoSolutionException | InvalidInputException | ConvergenceException e) {
+            o.levelCurveNote = "the load against fill level could not be computed: " + e.getMessage();
+        }
     }
 
     private static HeatInputResult heat(Context c, FireFighting ff, EnvironmentFactor env, Out o) {

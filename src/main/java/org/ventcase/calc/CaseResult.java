@@ -8,7 +8,9 @@ import java.util.OptionalInt;
 import org.ventcase.common.TraceStep;
 import org.ventcase.device.OrificeSelection;
 import org.ventcase.inventory.Inventory;
+import org.ventcase.relief.FireLoadCurve;
 import org.ventcase.relief.RelievedFluid;
+import org.ventcase.thermo.mix.PhaseEnvelope;
 import org.ventcase.vessel.LevelState;
 
 /**
@@ -25,10 +27,12 @@ import org.ventcase.vessel.LevelState;
  *                       scenario could be sized
  * @param governingRule  the rule that picked it, in words
  * @param warnings       every warning once, with the scenarios it came from
+ * @param envelope       the phase envelope of the stored liquid's composition (mixtures), or why
+ *                       there is none
  */
 public record CaseResult(String title, String tag, String inputHash, LevelState vessel, Inventory inventory,
                          List<ScenarioResult> scenarios, OptionalInt governingIndex, String governingRule,
-                         List<CaseWarning> warnings) {
+                         List<CaseWarning> warnings, Envelope envelope) {
 
     /** The governing rule as stated in every result. */
     public static final String GOVERNING_RULE = "The governing scenario is the one needing the largest required "
@@ -39,6 +43,23 @@ public record CaseResult(String title, String tag, String inputHash, LevelState 
     public CaseResult {
         scenarios = List.copyOf(scenarios);
         warnings = List.copyOf(warnings);
+        java.util.Objects.requireNonNull(envelope, "envelope");
+    }
+
+    /**
+     * The phase envelope (bubble and dew curves) of the stored liquid's composition, traced by
+     * {@link PhaseEnvelope} with the case's EOS and k_ij: present for a mixture when tracing
+     * succeeded; otherwise empty, and {@code note} says why (a pure fluid has no envelope, only its
+     * saturation curve; a trace that failed gives its reason).
+     *
+     * @param result the traced envelope
+     * @param note   why there is none ("" when there is one)
+     */
+    public record Envelope(Optional<PhaseEnvelope.Result> result, String note) {
+        public Envelope {
+            java.util.Objects.requireNonNull(result, "result");
+            note = note == null ? "" : note;
+        }
     }
 
     /** The governing scenario, if any. */
@@ -68,6 +89,12 @@ public record CaseResult(String title, String tag, String inputHash, LevelState 
      * @param trace                every calculation step, in order
      * @param warnings             this scenario's warnings
      * @param failure              why the scenario could not be computed, when it could not
+     * @param levelCurve           wetted fire: the same scenario re-run over fill levels
+     *                             ({@link CaseCalculation#LEVEL_CURVE_FROM_PERCENT} to
+     *                             {@link CaseCalculation#LEVEL_CURVE_TO_PERCENT} % of volume, plus the
+     *                             case's level), everything else as in the case; empty for other types
+     *                             or when it could not be computed ({@code levelCurveNote} says why)
+     * @param levelCurveNote       why a wetted fire has no level curve ("" otherwise)
      */
     public record ScenarioResult(int index, String label, ScenarioKey type, boolean governing,
                                  OptionalDouble relievingPressurePa, OptionalDouble relievingTemperatureK,
@@ -75,11 +102,14 @@ public record CaseResult(String title, String tag, String inputHash, LevelState 
                                  OptionalDouble reliefLoadKgPerS, OptionalDouble requiredAreaM2,
                                  Optional<RelievedFluid> relievedFluid, Optional<OrificeSelection> orifice,
                                  String sizingEquation, List<LoadPoint> loadCurve, List<TraceStep> trace,
-                                 List<String> warnings, Optional<String> failure) {
+                                 List<String> warnings, Optional<String> failure, Optional<FireLoadCurve> levelCurve,
+                                 String levelCurveNote) {
         public ScenarioResult {
             loadCurve = List.copyOf(loadCurve);
             trace = List.copyOf(trace);
             warnings = List.copyOf(warnings);
+            levelCurve = levelCurve == null ? Optional.empty() : levelCurve;
+            levelCurveNote = levelCurveNote == null ? "" : levelCurveNote;
         }
 
         /** Whether the relieved fluid is a liquid (sized by the liquid equation). */
@@ -90,7 +120,7 @@ public record CaseResult(String title, String tag, String inputHash, LevelState 
         ScenarioResult withGoverning(boolean g) {
             return new ScenarioResult(index, label, type, g, relievingPressurePa, relievingTemperatureK, heatInputW,
                     latentHeatJPerKg, reliefLoadKgPerS, requiredAreaM2, relievedFluid, orifice, sizingEquation,
-                    loadCurve, trace, warnings, failure);
+                    loadCurve, trace, warnings, failure, levelCurve, levelCurveNote);
         }
     }
 

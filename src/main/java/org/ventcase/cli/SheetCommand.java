@@ -7,7 +7,13 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
+import org.ventcase.calc.CaseCalculation;
+import org.ventcase.calc.CaseInput;
+import org.ventcase.calc.CaseResult;
 import org.ventcase.casefile.CaseFiles;
+import org.ventcase.casefile.CaseInputs;
+import org.ventcase.casefile.CaseValidationException;
+import org.ventcase.casefile.Problem;
 import org.ventcase.casefile.ValidatedCase;
 import org.ventcase.common.InvalidInputException;
 import org.ventcase.relief.WettedFire;
@@ -25,15 +31,15 @@ import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /**
- * {@code ventcase sheet}: writes the PDF calculation sheet. For now the built-in demo case
- * ({@code --demo}); a case file will be one more branch in {@link #model()} once the case
- * calculation pipeline produces a result for it.
+ * {@code ventcase sheet}: writes the PDF calculation sheet of a case file (every scenario, through
+ * the case pipeline) or of the built-in demo case ({@code --demo}).
  */
 @Command(name = "sheet", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         header = "Write the PDF calculation sheet of a relief basis.",
         description = {"Writes a PDF sheet with the title block, inputs, results, figures, every calculation step "
                 + "with its equation and source, warnings, cautions and the note deferring to the applicable codes "
-                + "and to a qualified engineer. For now only the built-in invented demo case (--demo) is available."},
+                + "and to a qualified engineer, for a case file (every scenario) or the built-in invented demo case "
+                + "(--demo). Exit codes: 0 written, 2 invalid case or option, 3 no convergence, 4 file error."},
         footer = ExitCode.HELP_LIST)
 final class SheetCommand implements Callable<Integer> {
 
@@ -43,7 +49,7 @@ final class SheetCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(arity = "0..1", paramLabel = "CASE.json", description = "Case file (coming with the case pipeline).")
+    @Parameters(arity = "0..1", paramLabel = "CASE.json", description = "The case file (format: docs/case-files.md); it is only read.")
     Path caseFile;
 
     @Option(names = "--demo", description = "Use the built-in invented demo case (the one 'ventcase demo' prints).")
@@ -66,7 +72,17 @@ final class SheetCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         UnitSystem system = UnitSystem.parse("--units", units);
         CalculationSheet.PageSize size = CalculationSheet.PageSize.parse("--page", page);
-        SheetModel model = model(system);
+        SheetModel model;
+        try {
+            model = model(system);
+        } catch (CaseValidationException e) {
+            var err = spec.commandLine().getErr();
+            err.println(e.origin() + ": " + e.problems().size() + (e.problems().size() == 1 ? " problem" : " problems"));
+            for (Problem p : e.problems()) {
+                err.println("  " + p.message());
+            }
+            return ExitCode.INVALID_INPUT;
+        }
         CalculationSheet.write(model, output, size);
         spec.commandLine().getOut().println("ventcase: wrote " + output + " (" + model.identity().tag() + ", "
                 + system.name() + " units, " + size.name() + ")");
@@ -83,16 +99,31 @@ final class SheetCommand implements Callable<Integer> {
         if (caseFile == null) {
             throw InvalidInputException.missing("CASE.json", "give a case file or --demo");
         }
-        throw InvalidInputException.invalid("CASE.json", caseFile,
-                "sheets from case files come with the case calculation pipeline; for now use --demo");
+        if (output.toAbsolutePath().normalize().equals(caseFile.toAbsolutePath().normalize())) {
+            throw InvalidInputException.invalid("--output", output, "a file other than the case file (the case file "
+                    + "is never overwritten)");
+        }
+        return caseModel(CaseFiles.load(caseFile), system, Main.version());
+    }
+
+    /** The sheet of a validated case: the case pipeline, then the case mapper. */
+    static SheetModel caseModel(ValidatedCase kase, UnitSystem system, String version) {
+        CaseInput in = CaseInputs.from(kase);
+        CaseResult r = CaseCalculation.run(in);
+        return SheetModels.from(r, in, identity(kase, version), system);
+    }
+
+    /** The title block of a case: its identity, the tool and version, the input hash. */
+    static SheetIdentity identity(ValidatedCase kase, String version) {
+        ValidatedCase.Identity id = kase.identity();
+        return new SheetIdentity(id.title(), id.tag(), id.revision(), id.date(), id.preparer(), id.checker(),
+                "Ventcase", version, kase.inputHash());
     }
 
     /** The demo's sheet: the demo calculation with the title block and input hash of its case file. */
     static SheetModel demoModel(UnitSystem system) {
         ValidatedCase kase = CaseFiles.load(demoCaseJson(), "demo-case.json");
-        ValidatedCase.Identity id = kase.identity();
-        SheetIdentity identity = new SheetIdentity(id.title(), id.tag(), id.revision(), id.date(), id.preparer(),
-                id.checker(), "Ventcase", Main.version(), kase.inputHash());
+        SheetIdentity identity = identity(kase, Main.version());
         WettedFireResult r = WettedFire.run(DemoCommand.demoInput());
         return SheetModels.from(r, identity, system);
     }

@@ -71,6 +71,24 @@ public record FireLoadCurve(List<Point> points, int governingIndex, int caseLeve
      * @param steps       number of intervals, 1..200
      */
     public static FireLoadCurve overLevels(WettedFireInput base, double fromPercent, double toPercent, int steps) {
+        return overLevels(base.level().percentOfVolumeIn(base.vessel()), fromPercent, toPercent, steps, pct -> {
+            WettedFireInput in = new WettedFireInput(base.component(), base.eos(), base.densityBasis(), base.vessel(),
+                    Level.ofPercentOfVolume(pct), base.exposure(), base.storageTemperatureK(), base.relieving(),
+                    base.fireFighting(), base.environment(), base.backPressurePa(), base.kd(), base.kb(), base.kc(),
+                    base.subtractDisplacedVapour());
+            WettedFireResult r = WettedFire.run(in);
+            return new Point(r.vessel().levelPercentVolume(), r.vessel().levelPercentHeight(), r.vessel().levelM(),
+                    r.vessel().fire().area(), r.heat().heatW(), r.reliefLoadKgPerS(), r.sizing().areaM2());
+        });
+    }
+
+    /**
+     * The same curve for any fire method: {@code evaluate} runs the fire case at a level given in %
+     * of volume and returns its point. Levels as in {@link #overLevels(WettedFireInput, double, double,
+     * int)}, with the case's own level {@code casePercent} added where it is not one of them.
+     */
+    public static FireLoadCurve overLevels(double casePercent, double fromPercent, double toPercent, int steps,
+                                           java.util.function.DoubleFunction<Point> evaluate) {
         if (!(fromPercent > 0) || fromPercent > 100) {
             throw InvalidInputException.invalid("curve.fromPercent", fromPercent,
                     "expected a level above 0 and at most 100 % of volume");
@@ -81,7 +99,6 @@ public record FireLoadCurve(List<Point> points, int governingIndex, int caseLeve
                     "expected a level above curve.fromPercent (" + fromPercent + " %)");
         }
         InvalidInputException.requireInRange("curve.steps", steps, 1, 200, "");
-        double casePercent = base.level().percentOfVolumeIn(base.vessel());
         List<Double> levels = new ArrayList<>();
         for (int i = 0; i <= steps; i++) {
             levels.add(fromPercent + (toPercent - fromPercent) * i / steps);
@@ -102,13 +119,7 @@ public record FireLoadCurve(List<Point> points, int governingIndex, int caseLeve
         }
         List<Point> pts = new ArrayList<>();
         for (double pct : levels) {
-            WettedFireInput in = new WettedFireInput(base.component(), base.eos(), base.densityBasis(), base.vessel(),
-                    Level.ofPercentOfVolume(pct), base.exposure(), base.storageTemperatureK(), base.relieving(),
-                    base.fireFighting(), base.environment(), base.backPressurePa(), base.kd(), base.kb(), base.kc(),
-                    base.subtractDisplacedVapour());
-            WettedFireResult r = WettedFire.run(in);
-            pts.add(new Point(r.vessel().levelPercentVolume(), r.vessel().levelPercentHeight(), r.vessel().levelM(),
-                    r.vessel().fire().area(), r.heat().heatW(), r.reliefLoadKgPerS(), r.sizing().areaM2()));
+            pts.add(evaluate.apply(pct));
         }
         int gov = 0;
         for (int i = 1; i < pts.size(); i++) {

@@ -33,13 +33,15 @@ import org.ventcase.thermo.FluidProperties;
  * @param eos                   equation of state
  * @param provenance            root chosen and why; ideal-gas Cp source
  * @param warnings              what the user must know about these numbers
+ * @param realRoots             every physical real root of the cubic in Z at (T, P1), ascending
+ *                              (the selected one is {@code z})
  */
 public record RelievedFluid(Phase phase, double temperatureK, double pressurePa, List<String> componentNames,
                             double[] composition, double molarMass, double z, double density,
                             DensityBasis densityBasis, double kIdeal, double isentropicExponent,
                             OptionalDouble latentHeatJPerKg, String latentHeatDefinition,
                             OptionalDouble viscosityPaS, String viscositySource, EosVariant eos, String provenance,
-                            List<String> warnings) {
+                            List<String> warnings, double[] realRoots) {
 
     /** What leaves through the device. */
     public enum Phase {
@@ -69,11 +71,26 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
         latentHeatDefinition = latentHeatDefinition == null ? "" : latentHeatDefinition;
         viscositySource = viscositySource == null ? "" : viscositySource;
         warnings = List.copyOf(warnings);
+        realRoots = realRoots == null || realRoots.length == 0 ? new double[] {z} : realRoots.clone();
     }
 
     @Override
     public double[] composition() {
         return composition.clone();
+    }
+
+    @Override
+    public double[] realRoots() {
+        return realRoots.clone();
+    }
+
+    /** The real roots as text, e.g. "0.07123, 0.13801, 0.70465", five decimals. */
+    public String realRootsText() {
+        StringBuilder sb = new StringBuilder();
+        for (double r : realRoots) {
+            sb.append(sb.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.5f", r));
+        }
+        return sb.toString();
     }
 
     /** From single-phase EOS properties. */
@@ -85,7 +102,7 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
                 cpSources(spec, fp.composition()));
         return new RelievedFluid(phase, fp.temperatureK(), fp.pressurePa(), spec.names(), fp.composition(),
                 fp.molarMass(), fp.z(), fp.density(), fp.densityBasis(), fp.kIdeal(), fp.isentropicExponent(), latent,
-                latentDefinition, viscosity, viscositySource, spec.eos(), prov, w);
+                latentDefinition, viscosity, viscositySource, spec.eos(), prov, w, fp.roots().physical());
     }
 
     private static String cpSources(MixtureSpec spec, double[] x) {
@@ -112,7 +129,8 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
         }
         out.add(c.toString());
         out.add(String.format(Locale.ROOT, "M = %.3f kg/kmol", molarMass));
-        out.add(String.format(Locale.ROOT, "Z = %.5f (cubic root)", z));
+        out.add(String.format(Locale.ROOT, "Z = %.5f (cubic root; real roots of the cubic: %s)", z,
+                realRootsText()));
         out.add(String.format(Locale.ROOT, "Density = %.4g kg/m3 (%s basis)", density, densityBasis.label()));
         out.add(String.format(Locale.ROOT, "k = Cp/Cv ideal gas = %.4f", kIdeal));
         out.add(String.format(Locale.ROOT, "Real-fluid isentropic exponent = %.4f", isentropicExponent));

@@ -17,7 +17,7 @@ import org.ventcase.common.TraceStep;
  * @param revisions revision history, oldest first (at least the current issue)
  * @param signOff   signature block
  * @param inputs    input tables (fluid, EOS, vessel, storage, site, scenarios, device), in print order
- * @param loads     relief load per scenario, one of them governing
+ * @param loads     relief load per scenario, one of them governing (none when no scenario could be sized)
  * @param results   result tables (relieving conditions, inventory, relieved fluid, device), in order
  * @param warnings  everything the reader must see, already worded
  * @param figures   drawings and charts
@@ -52,8 +52,8 @@ public record SheetModel(SheetIdentity identity, UnitSystem units, List<Revision
             throw new IllegalArgumentException("a sheet must carry the cautions and the code-deferral note");
         }
         long governing = loads.stream().filter(ScenarioLoad::governing).count();
-        if (!loads.isEmpty() && governing != 1) {
-            throw new IllegalArgumentException("exactly one scenario must be marked governing, found " + governing);
+        if (governing > 1) {
+            throw new IllegalArgumentException("at most one scenario may be marked governing, found " + governing);
         }
     }
 

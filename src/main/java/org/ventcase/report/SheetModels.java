@@ -36,6 +36,21 @@ public final class SheetModels {
     private SheetModels() {
     }
 
+    /**
+     * The sheet of a whole case: every scenario of {@code result} (computed from {@code input} by
+     * {@code calc.CaseCalculation.run}), with the title block, revision row and sign-off of
+     * {@code id} (the case file's identity, the tool's name and version, the input hash). Inputs,
+     * inventory by phase and component, relieving conditions, relieved-fluid properties, loads with
+     * the governing scenario marked, areas and orifices, warnings, the vessel sketch, the
+     * load-against-level curve of each wetted fire, the phase envelope of a mixture and the load over
+     * time of boil-off and near-critical scenarios; the method of each scenario with its statement
+     * and trace.
+     */
+    public static SheetModel from(org.ventcase.calc.CaseResult result, org.ventcase.calc.CaseInput input,
+                                  SheetIdentity id, UnitSystem units) {
+        return new CaseSheet(result, input, id, units).model();
+    }
+
     /** The sheet of a pure-fluid wetted-vessel fire case, in SI. */
     public static SheetModel from(WettedFireResult r, SheetIdentity id) {
         return from(r, id, UnitSystem.SI);
@@ -147,7 +162,7 @@ public final class SheetModels {
         return t;
     }
 
-    private static String levelText(Level level, DisplayUnits u) {
+    static String levelText(Level level, DisplayUnits u) {
         switch (level.basis()) {
             case HEIGHT_M:
                 return u.plain(Kind.LENGTH, level.value()) + " above the lowest inside point";
@@ -257,7 +272,7 @@ public final class SheetModels {
 
     // ------------------------------------------------------------------------------ text blocks
 
-    private static String block(String name) {
+    static String block(String name) {
         return Templates.text(name).orElseThrow(() -> new IllegalStateException("missing text block " + name));
     }
 
@@ -273,7 +288,7 @@ public final class SheetModels {
         return out;
     }
 
-    private static String fill(String text, SheetIdentity id) {
+    static String fill(String text, SheetIdentity id) {
         return text.replace("{tag}", id.tag()).replace("{title}", id.title()).replace("{revision}", id.revision())
                 .replace("{ventcaseVersion}", id.toolVersion()).replace("{inputHash}", id.inputHash());
     }

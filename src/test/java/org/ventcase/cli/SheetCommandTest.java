@@ -41,10 +41,42 @@ class SheetCommandTest {
         assertEquals(ExitCode.INVALID_INPUT, page.code());
         CliTest.Run none = CliTest.run("sheet", "-o", pdf.toString());
         assertEquals(ExitCode.INVALID_INPUT, none.code());
-        CliTest.Run kase = CliTest.run("sheet", "case.json", "-o", pdf.toString());
-        assertEquals(ExitCode.INVALID_INPUT, kase.code());
-        assertTrue(kase.err().contains("--demo"), kase.err());
+        CliTest.Run both = CliTest.run("sheet", "demo-cases/hexane-drum.json", "--demo", "-o", pdf.toString());
+        assertEquals(ExitCode.INVALID_INPUT, both.code());
+        assertTrue(both.err().contains("--demo"), both.err());
         assertFalse(Files.exists(pdf));
+    }
+
+    @Test
+    void caseFileSheetIsWrittenAndFileErrorsAreExitFour() throws Exception {
+        Path pdf = dir.resolve("lpg.pdf");
+        CliTest.Run ok = CliTest.run("sheet", "demo-cases/lpg-sphere-mixture.json", "-o", pdf.toString(), "--units",
+                "us", "--page", "letter");
+        assertEquals(ExitCode.OK, ok.code(), ok.err());
+        assertTrue(ok.out().contains("TK-4201"), ok.out());
+        try (var in = Files.newInputStream(pdf)) {
+            assertEquals("%PDF-", new String(in.readNBytes(5), java.nio.charset.StandardCharsets.US_ASCII));
+        }
+        // no temporary file left beside the sheet (written to a temporary file, then moved)
+        try (var files = Files.list(dir)) {
+            assertEquals(1, files.count());
+        }
+        CliTest.Run missing = CliTest.run("sheet", dir.resolve("no-such-case.json").toString(), "-o",
+                dir.resolve("m.pdf").toString());
+        assertEquals(ExitCode.IO, missing.code(), missing.err());
+        // the output names a folder that holds a file: it cannot be replaced by the sheet
+        Path folder = Files.createDirectories(dir.resolve("out").resolve("taken.pdf"));
+        Files.writeString(folder.resolve("keep.txt"), "x");
+        CliTest.Run taken = CliTest.run("sheet", "demo-cases/hexane-drum.json", "-o", folder.toString());
+        assertEquals(ExitCode.IO, taken.code(), taken.err());
+        assertTrue(Files.exists(folder.resolve("keep.txt")));
+        Path bad = dir.resolve("bad.json");
+        Files.writeString(bad, "{\"schemaVersion\": 1}");
+        CliTest.Run invalid = CliTest.run("sheet", bad.toString(), "-o", dir.resolve("b.pdf").toString());
+        assertEquals(ExitCode.INVALID_INPUT, invalid.code(), invalid.err());
+        CliTest.Run self = CliTest.run("sheet", bad.toString(), "-o", bad.toString());
+        assertEquals(ExitCode.INVALID_INPUT, self.code(), self.err());
+        assertFalse(Files.exists(dir.resolve("m.pdf")) || Files.exists(dir.resolve("b.pdf")));
     }
 
     @Test

@@ -9,7 +9,7 @@ import org.ventcase.report.UnitSystem;
  * What the wizard's results and export steps ask of the calculation: one call for the whole
  * case, returning a summary the results step shows row by row, and the calculation sheet where one
  * can be made. The wizard knows only this interface; the implementation is chosen in one place
- * ({@link #standard()}), so the full case pipeline replaces {@link InterimCaseRunner} there.
+ * ({@link #standard()}): {@link PipelineCaseRunner}, the full case pipeline.
  * Implementations are stateless, thread-safe and free of JavaFX: the wizard calls them off the
  * application thread, and a unit test or the command line can call them directly.
  */
@@ -51,8 +51,8 @@ public interface CaseRunner {
      */
     SheetOutcome sheet(ValidatedCase kase, UnitSystem units, String toolVersion);
 
-    /** The runner the wizard uses: the one place to swap in the full case pipeline. */
+    /** The runner the wizard uses: the full case pipeline. */
     static CaseRunner standard() {
-        return new InterimCaseRunner();
+        return new PipelineCaseRunner();
     }
 }
