@@ -625,7 +625,12 @@ final class CaseSheet {
         }
         return new Figure.LineChart("Scenario " + (s.index() + 1) + " (" + s.label() + "): relief load over time "
                 + "from the opening of the device. The sizing point is the largest required area on the curve "
-                + "(the relieved fluid changes along it, so the largest load need not give the largest area).",
+                + "(the relieved fluid changes along it, so the largest load need not give the largest area)."
+                + (s.type() == org.ventcase.calc.ScenarioKey.FIRE_BOIL_OFF
+                        ? " The point at time zero is the first-pass load at the initial bubble point, Q/L (1 - rho_V/rho_L),"
+                                + " which leaves out the heat taken up as the liquid warms while its light ends boil"
+                                + " off; the simulated points after it include that heat, hence the step down."
+                        : ""),
                 "Time since opening, " + (hours ? "h" : "min"), "Relief load, " + u.unit(Kind.MASS_FLOW),
                 List.of(new Figure.Series("Relief load W", x, y, false)), markers);
     }
