@@ -257,7 +257,7 @@ public final class SheetModels {
 
     // ------------------------------------------------------------------------------ text blocks
 
-    private static String block(String name) {
+    static String block(String name) {
         return Templates.text(name).orElseThrow(() -> new IllegalStateException("missing text block " + name));
     }
 
@@ -273,7 +273,7 @@ public final class SheetModels {
         return out;
     }
 
-    private static String fill(String text, SheetIdentity id) {
+    static String fill(String text, SheetIdentity id) {
         return text.replace("{tag}", id.tag()).replace("{title}", id.title()).replace("{revision}", id.revision())
                 .replace("{ventcaseVersion}", id.toolVersion()).replace("{inputHash}", id.inputHash());
     }
