@@ -325,7 +325,9 @@ public final class Review {
         OptionalDouble max = lo <= hi ? OptionalDouble.of(hi) : OptionalDouble.empty();
         boolean within = v != Verdict.AGREES && lo <= hi && hi > lo && c >= lo && c <= hi;
         List<ReviewResult.Hint> hs = new ArrayList<>();
-        if (v == Verdict.CHECK || v == Verdict.DISAGREES) {
+        if (v == Verdict.AGREES) {
+            hs.addAll(hints.informational(q, c));
+        } else {
             hs.addAll(hints.of(q, c));
             if (within) {
                 hs.add(new ReviewResult.Hint("within-model-uncertainty", String.format(Locale.ROOT,
@@ -382,14 +384,46 @@ public final class Review {
             return mine.get(ReviewQuantity.RELIEVING_PRESSURE).getAsDouble();
         }
 
-        /** The claimed value matches the alternative, and Ventcase's own value does not. */
+        /** True while hints are sought for an agreeing row (see {@link #informational}). */
+        private boolean agreeing;
+
+        /**
+         * The claimed value matches the alternative, and Ventcase's own value does not. On an
+         * agreeing row (informational hints): the claimed value is within a quarter of the tolerance
+         * of the alternative and at least four times closer to it than to Ventcase's value.
+         */
         private boolean explains(ReviewQuantity q, double c, double alt) {
             if (!Double.isFinite(alt) || !(alt > 0)) {
                 return false;
             }
             double t = tol.of(q);
             OptionalDouble x = mine.get(q);
+            if (agreeing) {
+                return x.isPresent() && measure(q, c, alt) <= t / 4
+                        && 4 * measure(q, c, alt) < measure(q, c, x.getAsDouble());
+            }
             return measure(q, c, alt) <= t && (x.isEmpty() || measure(q, x.getAsDouble(), alt) > t);
+        }
+
+        /**
+         * Hints on an agreeing row: a known mistake that reproduces the claimed value much more
+         * closely than Ventcase's value does, although the difference is within the tolerance
+         * (e.g. a liquid density without volume translation, 5 to 6 % off, under an 8 % tolerance).
+         * Only the hints that name a mistake are kept, each prefixed to say the verdict stands.
+         */
+        List<ReviewResult.Hint> informational(ReviewQuantity q, double c) {
+            agreeing = true;
+            try {
+                List<ReviewResult.Hint> out = new ArrayList<>();
+                for (ReviewResult.Hint h : of(q, c)) {
+                    if (!h.code().startsWith("follows-") && !h.code().endsWith("-follows")) {
+                        out.add(new ReviewResult.Hint(h.code(), "Within the tolerance, but: " + h.text()));
+                    }
+                }
+                return out;
+            } finally {
+                agreeing = false;
+            }
         }
 
         private Optional<BoilingState> state(String key, Supplier<Double> pressure) {

@@ -67,7 +67,9 @@ public record ReviewResult(String title, String tag, String inputHash, String so
      * @param withinModelUncertainty the verdict is check or disagrees, yet the claimed value lies
      *                               inside the range of the model runs
      * @param hints                  possible causes, each saying what to look at (every check and
-     *                               disagreement has at least one)
+     *                               disagreement has at least one; on an agreeing row a hint is
+     *                               informational: a known mistake reproduces the claimed value
+     *                               much more closely than Ventcase's value, within the tolerance)
      * @param note                   why the row was not compared, or empty
      */
     public record Row(ReviewQuantity quantity, String claimedText, OptionalDouble claimed, OptionalDouble computed,
