@@ -60,7 +60,9 @@ public final class ClaimedFiles {
     public record Claimed(String origin, Optional<Path> casePath, Optional<String> scenario, String source,
                           Map<ReviewQuantity, String> raw) {
         public Claimed {
-            raw = java.util.Collections.unmodifiableMap(new EnumMap<>(raw));
+            Map<ReviewQuantity, String> m = new EnumMap<>(ReviewQuantity.class);
+            m.putAll(raw);
+            raw = java.util.Collections.unmodifiableMap(m);
         }
 
         /** The values in SI; gauge pressures are made absolute with the site's atmospheric pressure. */
@@ -101,8 +103,9 @@ public final class ClaimedFiles {
         if (!(x > 0) || Double.isInfinite(x)) {
             throw InvalidInputException.invalid(field, text, "expected a finite value above 0");
         }
-        if ((q == ReviewQuantity.K) && !(x > 1.0 && x <= 3.0)) {
-            throw InvalidInputException.invalid(field, text, "expected k = Cp/Cv above 1 and at most 3");
+        if (q == ReviewQuantity.K && x > 3.0) {
+            throw InvalidInputException.invalid(field, text, "expected k above 0 and at most 3 (Cp/Cv, or an "
+                    + "isentropic exponent, which may be below 1)");
         }
         if (q == ReviewQuantity.Z && x > 5) {
             throw InvalidInputException.invalid(field, text, "expected a compressibility factor Z between 0 and 5");
@@ -198,6 +201,10 @@ public final class ClaimedFiles {
         if (!root.has("claimed")) {
             throw InvalidInputException.missing("claimed", "expected an object of quantity: value, with quantity one "
                     + "of " + ReviewQuantity.keys());
+        }
+        if (raw.isEmpty()) {
+            throw InvalidInputException.missing("claimed", "expected at least one claimed value, of "
+                    + ReviewQuantity.keys());
         }
         return new Claimed(origin, casePath, scenario, source, raw);
     }

@@ -70,6 +70,11 @@ public final class Review {
     /** Ideal-gas reference temperature of tabulated k values, 15 C. */
     static final double STANDARD_T_K = 288.15;
 
+    /** Rounding allowance on the model range for a claimed value (4 significant digits). */
+    static final double ROUNDING_RELATIVE = 0.001;
+    /** Rounding allowance on the model range of a temperature, K. */
+    static final double ROUNDING_K = 0.05;
+
     private static final String CRITICAL_EQUATION_START = "A = W / (C Kd P1";
 
     private Review() {
@@ -323,7 +328,9 @@ public final class Review {
         }
         OptionalDouble min = lo <= hi ? OptionalDouble.of(lo) : OptionalDouble.empty();
         OptionalDouble max = lo <= hi ? OptionalDouble.of(hi) : OptionalDouble.empty();
-        boolean within = v != Verdict.AGREES && lo <= hi && hi > lo && c >= lo && c <= hi;
+        // a claimed value is written with 3 or 4 digits: the range is widened by that rounding
+        double margin = q.kind() == ReviewQuantity.Kind.ABSOLUTE_KELVIN ? ROUNDING_K : ROUNDING_RELATIVE * Math.abs(hi);
+        boolean within = v != Verdict.AGREES && lo <= hi && hi > lo && c >= lo - margin && c <= hi + margin;
         List<ReviewResult.Hint> hs = new ArrayList<>();
         if (v == Verdict.AGREES) {
             hs.addAll(hints.informational(q, c));
