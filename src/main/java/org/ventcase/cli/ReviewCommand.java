@@ -191,17 +191,10 @@ final class ReviewCommand implements Callable<Integer> {
         }
         String claimed = row.claimed().isPresent() ? q.format(row.claimed().getAsDouble()) : row.claimedText();
         String computed = row.computed().isPresent() ? q.format(row.computed().getAsDouble()) : "-";
-        String diff = row.difference().isPresent() ? signed(q, row.difference().getAsDouble()) : "";
+        String diff = row.difference().isPresent() ? q.formatDifference(row.difference().getAsDouble()) : "";
         String rel = row.relativeDifference().isPresent() ? String.format(Locale.ROOT, "%+.1f %%",
                 row.relativeDifference().getAsDouble() * 100) : "";
         return new Cells(claimed, computed, diff, rel);
     }
 
-    static String signed(ReviewQuantity q, double siDifference) {
-        double d = q.differenceToDisplay(siDifference);
-        String u = q.differenceUnit();
-        String num = q == ReviewQuantity.Z || q == ReviewQuantity.K ? String.format(Locale.ROOT, "%+.3f", d)
-                : String.format(Locale.ROOT, "%+.4g", d);
-        return u.isEmpty() ? num : num + " " + u;
-    }
 }

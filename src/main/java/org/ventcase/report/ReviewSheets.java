@@ -96,11 +96,7 @@ public final class ReviewSheets {
                 claimed = nb(q.format(row.claimed().getAsDouble()));
                 computed = row.computed().isPresent() ? nb(q.format(row.computed().getAsDouble())) : "not computed";
                 if (row.difference().isPresent()) {
-                    double d = q.differenceToDisplay(row.difference().getAsDouble());
-                    String u = q.differenceUnit();
-                    String num = q == ReviewQuantity.Z || q == ReviewQuantity.K
-                            ? String.format(Locale.ROOT, "%+.3f", d) : String.format(Locale.ROOT, "%+.4g", d);
-                    diff = u.isEmpty() ? num : num + NBSP + u;
+                    diff = nb(q.formatDifference(row.difference().getAsDouble()));
                     rel = String.format(Locale.ROOT, "%+.1f" + NBSP + "%%", row.relativeDifference().getAsDouble() * 100);
                 }
             }
@@ -112,8 +108,8 @@ public final class ReviewSheets {
                 + "claimed - computed; relative to the computed value.", r.count(Verdict.AGREES),
                 r.count(Verdict.CHECK), r.count(Verdict.DISAGREES), r.count(Verdict.NOT_COMPARED));
         return new SheetModel.Table("Claimed against computed: " + r.scenarioLabel(), List.of("Quantity", "Claimed",
-                "Computed", "Difference", "Relative", "Tolerance", "Verdict"),
-                List.of(0.24, 0.13, 0.13, 0.12, 0.09, 0.09, 0.20), rows, note);
+                "Computed", "Difference", "Relative", "Tol.", "Verdict"),
+                List.of(0.23, 0.13, 0.13, 0.13, 0.09, 0.08, 0.21), rows, note);
     }
 
     static SheetModel.Table causes(ReviewResult r) {

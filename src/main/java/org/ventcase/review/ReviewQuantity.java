@@ -152,6 +152,22 @@ public enum ReviewQuantity {
         return u.isEmpty() ? num : num + " " + u;
     }
 
+    /**
+     * A difference of SI values in the display unit with its sign, 3 significant digits in plain
+     * notation (Z and k: 3 decimals; temperatures: 0.1 K), e.g. "+1250 kW", "-1.02 bar abs".
+     */
+    public String formatDifference(double si) {
+        double d = differenceToDisplay(si);
+        String sign = d < 0 ? "-" : "+";
+        String num = switch (this) {
+            case Z, K -> String.format(Locale.ROOT, "%.3f", Math.abs(d));
+            case RELIEVING_TEMPERATURE -> String.format(Locale.ROOT, "%.1f", Math.abs(d));
+            default -> significant(Math.abs(d), 3);
+        };
+        String u = differenceUnit();
+        return sign + num + (u.isEmpty() ? "" : " " + u);
+    }
+
     /** A tolerance in words: "3 %", "1 K", "exact". */
     public String formatTolerance(double tolerance) {
         return switch (kind) {
