@@ -83,6 +83,16 @@ public record BoilingState(double temperatureK, double pressurePa, double[] liqu
     }
 
     /**
+     * The bubble point of the spec's liquid at pressure p, with its incipient vapour, on the spec's
+     * density basis: the state {@link MixtureFire} boils at when p is the relieving pressure.
+     * Public for the reviewer's cross-checks (e.g. the state at P1 - P_atm, or at the storage
+     * bubble pressure).
+     */
+    public static BoilingState bubblePoint(MixtureSpec spec, double pressurePa) {
+        return at(spec.model(), spec.densityBasis(), pressurePa, spec.composition(), Double.NaN, null);
+    }
+
+    /**
      * The bubble point of liquid x at pressure p, with its incipient vapour.
      *
      * @param t0   temperature guess, K, or NaN for the Wilson estimate

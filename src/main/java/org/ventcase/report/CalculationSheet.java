@@ -130,7 +130,7 @@ public final class CalculationSheet {
         List<String> all = new ArrayList<>();
         SheetIdentity id = m.identity();
         all.addAll(List.of(id.title(), id.tag(), id.revision(), id.preparer(), id.checker(), id.toolName(),
-                id.toolVersion(), id.inputHash(), m.deferral(), m.unitNote()));
+                id.toolVersion(), id.inputHash(), m.deferral(), m.unitNote(), m.banner()));
         for (SheetModel.RevisionRow r : m.revisions()) {
             all.addAll(List.of(r.revision(), r.date(), r.description(), r.preparedBy(), r.checkedBy()));
         }
@@ -384,7 +384,7 @@ public final class CalculationSheet {
             float h = titleBlockHeight;
             float yb = topY - h;
             t.strokeRect(left, yb, width, h, 0.8f, PdfCanvas.INK);
-            t.text("RELIEF BASIS  ·  CALCULATION SHEET", left + 6, topY - 10, bold, 6.5f, PdfCanvas.MUTED);
+            t.text(m.banner(), left + 6, topY - 10, bold, 6.5f, PdfCanvas.MUTED);
             SheetIdentity id = m.identity();
             t.textRight(id.toolName() + " " + id.toolVersion(), right - 6, topY - 10, regular, 6.5f, PdfCanvas.MUTED);
             float ty = topY - 23;

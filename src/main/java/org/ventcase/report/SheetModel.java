@@ -25,13 +25,27 @@ import org.ventcase.common.TraceStep;
  * @param cautions  caution paragraphs (from {@code templates/text/cautions.txt})
  * @param deferral  the note deferring to codes and to a qualified engineer, placeholders filled
  * @param unitNote  one sentence on the units used (e.g. that the method steps are in SI as computed)
+ * @param banner    the line at the top left of every title block, e.g. "RELIEF BASIS · CALCULATION SHEET"
  */
 public record SheetModel(SheetIdentity identity, UnitSystem units, List<RevisionRow> revisions, SignOff signOff,
                          List<Table> inputs, List<ScenarioLoad> loads, List<Table> results, List<String> warnings,
                          List<Figure> figures, List<MethodSection> method, List<String> cautions, String deferral,
-                         String unitNote) {
+                         String unitNote, String banner) {
+
+    /** The banner of a calculation sheet. */
+    public static final String CALCULATION_BANNER = "RELIEF BASIS  \u00b7  CALCULATION SHEET";
+
+    /** A calculation sheet (the banner {@link #CALCULATION_BANNER}). */
+    public SheetModel(SheetIdentity identity, UnitSystem units, List<RevisionRow> revisions, SignOff signOff,
+                      List<Table> inputs, List<ScenarioLoad> loads, List<Table> results, List<String> warnings,
+                      List<Figure> figures, List<MethodSection> method, List<String> cautions, String deferral,
+                      String unitNote) {
+        this(identity, units, revisions, signOff, inputs, loads, results, warnings, figures, method, cautions,
+                deferral, unitNote, CALCULATION_BANNER);
+    }
 
     public SheetModel {
+        banner = banner == null || banner.isBlank() ? CALCULATION_BANNER : banner;
         Objects.requireNonNull(identity, "identity");
         Objects.requireNonNull(units, "units");
         Objects.requireNonNull(signOff, "signOff");

@@ -1,0 +1,200 @@
+package org.ventcase.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.Callable;
+
+import org.ventcase.casefile.CaseFiles;
+import org.ventcase.casefile.CaseInputs;
+import org.ventcase.casefile.CaseValidationException;
+import org.ventcase.casefile.ClaimedFiles;
+import org.ventcase.casefile.Problem;
+import org.ventcase.casefile.ReviewJson;
+import org.ventcase.casefile.ValidatedCase;
+import org.ventcase.common.InvalidInputException;
+import org.ventcase.report.CalculationSheet;
+import org.ventcase.report.ReviewSheets;
+import org.ventcase.report.SheetIdentity;
+import org.ventcase.review.ClaimedValues;
+import org.ventcase.review.Review;
+import org.ventcase.review.ReviewQuantity;
+import org.ventcase.review.ReviewResult;
+import org.ventcase.review.Tolerances;
+import org.ventcase.review.Verdict;
+
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code ventcase review}: compares claimed relieving-fluid properties and results with Ventcase's own. */
+@Command(name = "review", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+        header = "Cross-check claimed relief-basis values against Ventcase's calculation of the same case.",
+        description = {"Runs the case (every scenario), picks the scenario the claimed values name (else the "
+                + "governing one) and prints a deviation table: quantity, claimed, computed, difference, relative "
+                + "difference, tolerance and verdict (agrees / check / disagrees), with possible causes for every "
+                + "difference and the range each quantity takes with PR78 and SRK on the translated and cubic "
+                + "density bases. Formats and tolerances: docs/review.md.",
+                "First-pass estimates only: final relief design must be verified by a qualified engineer under "
+                        + "the applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) "
+                        + "and local regulations."},
+        footer = ExitCode.HELP_LIST)
+final class ReviewCommand implements Callable<Integer> {
+
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", arity = "0..1", paramLabel = "CASE.json",
+            description = "The case file; may be left out when the claimed file names its case.")
+    Path caseFile;
+
+    @Option(names = "--claimed", required = true, paramLabel = "CLAIMED.json",
+            description = "Claimed values: JSON (with \"claimed\") or CSV rows quantity,value (docs/review.md).")
+    Path claimedFile;
+
+    @Option(names = "--json", paramLabel = "OUT.json",
+            description = "Write the review JSON here (atomically).")
+    Path json;
+
+    @Option(names = {"-o", "--output"}, paramLabel = "REVIEW.pdf",
+            description = "Write the review PDF here (atomically).")
+    Path pdf;
+
+    @Option(names = "--tolerance", paramLabel = "NAME=VALUE",
+            description = "Change a tolerance, e.g. k=0.05, latentHeat=8%, relievingTemperature=2K (repeatable).")
+    List<String> tolerances = new ArrayList<>();
+
+    @Option(names = "--page", paramLabel = "SIZE", defaultValue = "a4",
+            description = "Paper size of the PDF: a4 or letter. Default: ${DEFAULT-VALUE}.")
+    String page;
+
+    @Override
+    public Integer call() throws IOException {
+        PrintWriter out = spec.commandLine().getOut();
+        PrintWriter err = spec.commandLine().getErr();
+        CalculationSheet.PageSize size = CalculationSheet.PageSize.parse("--page", page);
+        Tolerances tol = Tolerances.defaults();
+        for (String t : tolerances) {
+            tol = tol.with(t);
+        }
+        ClaimedFiles.Claimed claimed = ClaimedFiles.read(claimedFile);
+        Path kase = caseFile != null ? caseFile : claimed.casePath().orElseThrow(() -> InvalidInputException.missing(
+                "CASE.json", "give the case file as the first argument, or name it as \"case\" in " + claimedFile));
+        for (Path o : new Path[] {json, pdf}) {
+            if (o != null && (same(o, kase) || same(o, claimedFile))) {
+                throw InvalidInputException.invalid(o == json ? "--json" : "--output", o,
+                        "an output file must not be the case file or the claimed file: choose another name");
+            }
+        }
+        ValidatedCase vc;
+        try {
+            vc = CaseFiles.load(kase);
+        } catch (CaseValidationException e) {
+            err.println(e.origin() + ": " + e.problems().size() + (e.problems().size() == 1 ? " problem" : " problems"));
+            for (Problem p : e.problems()) {
+                err.println("  " + p.message());
+            }
+            return ExitCode.INVALID_INPUT;
+        }
+        ClaimedValues values = claimed.values(vc.site().atmosphericPa());
+        ReviewResult r = Review.run(CaseInputs.from(vc), values, tol);
+        print(out, r, kase, claimedFile);
+        if (json != null) {
+            CaseFiles.writeText(ReviewJson.write(r, Main.version()), json);
+            out.println("Review JSON written to " + json);
+        }
+        if (pdf != null) {
+            ValidatedCase.Identity id = vc.identity();
+            SheetIdentity identity = new SheetIdentity(id.title(), id.tag(), id.revision(), id.date(), id.preparer(),
+                    id.checker(), "Ventcase", Main.version(), vc.inputHash());
+            CalculationSheet.write(ReviewSheets.from(r, identity, kase.getFileName().toString(),
+                    claimedFile.getFileName().toString()), pdf, size);
+            out.println("Review PDF written to " + pdf);
+        }
+        return ExitCode.OK;
+    }
+
+    private static boolean same(Path a, Path b) {
+        return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize());
+    }
+
+    static void print(PrintWriter out, ReviewResult r, Path kase, Path claimed) {
+        out.println("VENTCASE REVIEW: " + r.title() + " (" + r.tag() + ")");
+        out.println("First-pass estimate only. Final relief design must be verified by a qualified engineer under the");
+        out.println("applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) and local regulations.");
+        out.println("Case " + kase + ", input hash " + r.inputHash());
+        out.println("Claimed values " + claimed + (r.source().isEmpty() ? "" : " (" + r.source() + ")"));
+        out.printf(Locale.ROOT, "Scenario %d. %s [%s], %s%n", r.scenarioIndex() + 1, r.scenarioLabel(),
+                r.scenarioType(), r.scenarioChoice());
+        out.println();
+        String fmt = "%-32s %-16s %-16s %-17s %-8s %-9s %s%n";
+        out.printf(Locale.ROOT, fmt, "Quantity", "Claimed", "Computed", "Difference", "Relative", "Tolerance",
+                "Verdict");
+        List<String> notes = new ArrayList<>();
+        for (ReviewResult.Row row : r.rows()) {
+            Cells c = cells(row);
+            String verdict = row.verdict().label() + (row.withinModelUncertainty() ? " (within model uncertainty)" : "");
+            out.printf(Locale.ROOT, fmt, row.quantity().label(), c.claimed, c.computed, c.difference, c.relative,
+                    row.quantity().formatTolerance(row.tolerance()), verdict);
+            for (ReviewResult.Hint h : row.hints()) {
+                notes.add(row.quantity().label() + " [" + h.code() + "] " + h.text());
+            }
+            if (!row.note().isEmpty()) {
+                notes.add(row.quantity().label() + ": not compared: " + row.note());
+            }
+        }
+        out.println();
+        out.printf(Locale.ROOT, "%d agree, %d to check, %d disagree, %d not compared%n", r.count(Verdict.AGREES),
+                r.count(Verdict.CHECK), r.count(Verdict.DISAGREES), r.count(Verdict.NOT_COMPARED));
+        if (!notes.isEmpty()) {
+            out.println();
+            out.println("POSSIBLE CAUSES");
+            for (String s : notes) {
+                out.println("  - " + s);
+            }
+        }
+        out.println();
+        out.println("MODEL RANGE (the case again with PR78 and SRK, translated and cubic density basis)");
+        for (ReviewResult.Row row : r.rows()) {
+            if (row.quantity() == ReviewQuantity.ORIFICE) {
+                out.printf(Locale.ROOT, "   %-34s %s%n", row.quantity().label(), String.join(", ", row.modelOrifices()));
+            } else if (row.modelMin().isPresent()) {
+                out.printf(Locale.ROOT, "   %-34s %s to %s%n", row.quantity().label(),
+                        row.quantity().format(row.modelMin().getAsDouble()),
+                        row.quantity().format(row.modelMax().getAsDouble()));
+            }
+        }
+        for (ReviewResult.ModelRun m : r.runs()) {
+            m.failure().ifPresent(f -> out.println("   " + m.label() + ": not computed: " + f));
+        }
+        if (!r.warnings().isEmpty()) {
+            out.println();
+            out.println("WARNINGS");
+            for (String w : r.warnings()) {
+                out.println("  ! " + w);
+            }
+        }
+    }
+
+    private record Cells(String claimed, String computed, String difference, String relative) {
+    }
+
+    private static Cells cells(ReviewResult.Row row) {
+        ReviewQuantity q = row.quantity();
+        if (q == ReviewQuantity.ORIFICE) {
+            return new Cells(row.claimedOrifice().orElse(""), row.computedOrifice().orElse("-"), "", "");
+        }
+        String claimed = row.claimed().isPresent() ? q.format(row.claimed().getAsDouble()) : row.claimedText();
+        String computed = row.computed().isPresent() ? q.format(row.computed().getAsDouble()) : "-";
+        String diff = row.difference().isPresent() ? q.formatDifference(row.difference().getAsDouble()) : "";
+        String rel = row.relativeDifference().isPresent() ? String.format(Locale.ROOT, "%+.1f %%",
+                row.relativeDifference().getAsDouble() * 100) : "";
+        return new Cells(claimed, computed, diff, rel);
+    }
+
+}

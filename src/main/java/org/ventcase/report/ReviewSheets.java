@@ -1,0 +1,165 @@
+package org.ventcase.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.ventcase.calc.CaseResult;
+import org.ventcase.review.ReviewQuantity;
+import org.ventcase.review.ReviewResult;
+import org.ventcase.review.Verdict;
+
+/**
+ * The review PDF's model: the case's title block, cautions and code-deferral note as on the
+ * calculation sheet, with the deviation table in the summary, the possible causes, the model range
+ * and the reviewed scenario's calculation steps. Only formatting: every number and verdict comes
+ * from the {@link ReviewResult}.
+ */
+public final class ReviewSheets {
+
+    /** The banner of a review sheet. */
+    public static final String BANNER = "RELIEF BASIS  \u00b7  REVIEW OF CLAIMED VALUES";
+
+    private static final char NBSP = '\u00a0';
+
+    private ReviewSheets() {
+    }
+
+    /**
+     * The review sheet model.
+     *
+     * @param r           the review
+     * @param id          the case's title block
+     * @param caseName    the case file's name, as printed
+     * @param claimedName the claimed-value file's name, as printed
+     */
+    public static SheetModel from(ReviewResult r, SheetIdentity id, String caseName, String claimedName) {
+        List<SheetModel.RevisionRow> revisions = List.of(new SheetModel.RevisionRow(id.revision(), id.date().toString(),
+                "Review of the claimed values in " + claimedName, id.preparer(), id.checker()));
+        SheetModel.SignOff signOff = new SheetModel.SignOff(List.of(new SheetModel.Signatory("Reviewed", ""),
+                new SheetModel.Signatory("Checked", "")));
+        List<SheetModel.Table> inputs = new ArrayList<>();
+        inputs.add(SheetModel.Table.keyValue("Review basis", List.of(
+                SheetModel.Row.of("Case file", caseName),
+                SheetModel.Row.of("Claimed values", claimedName),
+                SheetModel.Row.of("Source of the claim", r.source().isEmpty() ? "not stated" : r.source()),
+                SheetModel.Row.of("Scenario reviewed", (r.scenarioIndex() + 1) + ". " + r.scenarioLabel() + " ("
+                        + r.scenarioType() + "); " + r.scenarioChoice())),
+                "Ventcase ran the whole case with its own model; the claimed values were not used in its calculation."));
+        List<SheetModel.Row> tol = new ArrayList<>();
+        for (ReviewQuantity q : ReviewQuantity.values()) {
+            tol.add(SheetModel.Row.of(q.label(), q.formatTolerance(r.tolerances().of(q))
+                    + (r.tolerances().changed(q) ? " (changed for this review)" : ""), q.reason()));
+        }
+        inputs.add(new SheetModel.Table("Tolerances", List.of("Quantity", "Tolerance", "Why"),
+                List.of(0.28, 0.14, 0.58), tol, "Verdict: within the tolerance agrees; up to twice the tolerance "
+                + "check; beyond that disagrees. The orifice must be the same designation."));
+        List<SheetModel.Table> results = new ArrayList<>();
+        results.add(deviationTable(r));
+        results.add(causes(r));
+        results.add(modelRange(r));
+        List<String> warnings = new ArrayList<>(r.warnings());
+        for (CaseResult.CaseWarning w : r.computed().warnings()) {
+            if (w.scenarios().isEmpty() || w.scenarios().contains(r.scenarioLabel())) {
+                warnings.add(w.message());
+            }
+        }
+        CaseResult.ScenarioResult s = r.computed().scenarios().get(r.scenarioIndex());
+        String statement = org.ventcase.casefile.Templates.text("method-" + r.scenarioType())
+                .map(t -> String.join(" ", SheetModels.paragraphs(t))).orElse("");
+        List<SheetModel.MethodSection> method = List.of(new SheetModel.MethodSection(s.label(), statement, s.trace()));
+        return new SheetModel(id, UnitSystem.SI, revisions, signOff, inputs, List.of(), results, warnings, List.of(),
+                method, SheetModels.paragraphs(SheetModels.block("cautions")),
+                SheetModels.fill(SheetModels.block("code-deferral"), id),
+                "Claimed and computed values in bar abs, C, kg/kmol, kJ/kg, kg/m3, kW, m2, kg/h and mm2; temperature "
+                        + "differences in K. The method steps are Ventcase's calculation of the scenario, in SI as "
+                        + "computed.", BANNER);
+    }
+
+    private static String nb(String s) {
+        int i = s.indexOf(' ');
+        return i < 0 ? s : s.substring(0, i) + NBSP + s.substring(i + 1);
+    }
+
+    static SheetModel.Table deviationTable(ReviewResult r) {
+        List<SheetModel.Row> rows = new ArrayList<>();
+        for (ReviewResult.Row row : r.rows()) {
+            ReviewQuantity q = row.quantity();
+            String claimed;
+            String computed;
+            String diff = "";
+            String rel = "";
+            if (q == ReviewQuantity.ORIFICE) {
+                claimed = row.claimedOrifice().orElse("");
+                computed = row.computedOrifice().orElse("not computed");
+            } else {
+                claimed = nb(q.format(row.claimed().getAsDouble()));
+                computed = row.computed().isPresent() ? nb(q.format(row.computed().getAsDouble())) : "not computed";
+                if (row.difference().isPresent()) {
+                    diff = nb(q.formatDifference(row.difference().getAsDouble()));
+                    rel = String.format(Locale.ROOT, "%+.1f" + NBSP + "%%", row.relativeDifference().getAsDouble() * 100);
+                }
+            }
+            String verdict = row.verdict().label() + (row.withinModelUncertainty() ? ", within model uncertainty" : "");
+            rows.add(new SheetModel.Row(List.of(q.label(), claimed, computed, diff, rel,
+                    nb(q.formatTolerance(row.tolerance())), verdict), row.verdict() == Verdict.DISAGREES));
+        }
+        String note = String.format(Locale.ROOT, "%d agree, %d to check, %d disagree, %d not compared. Difference = "
+                + "claimed - computed; relative to the computed value.", r.count(Verdict.AGREES),
+                r.count(Verdict.CHECK), r.count(Verdict.DISAGREES), r.count(Verdict.NOT_COMPARED));
+        return new SheetModel.Table("Claimed against computed: " + r.scenarioLabel(), List.of("Quantity", "Claimed",
+                "Computed", "Difference", "Relative", "Tol.", "Verdict"),
+                List.of(0.23, 0.13, 0.13, 0.13, 0.09, 0.08, 0.21), rows, note);
+    }
+
+    static SheetModel.Table causes(ReviewResult r) {
+        List<SheetModel.Row> rows = new ArrayList<>();
+        for (ReviewResult.Row row : r.rows()) {
+            for (ReviewResult.Hint h : row.hints()) {
+                rows.add(SheetModel.Row.of(row.quantity().label(), h.code(), h.text()));
+            }
+            if (!row.note().isEmpty()) {
+                rows.add(SheetModel.Row.of(row.quantity().label(), "not compared", row.note()));
+            }
+        }
+        if (rows.isEmpty()) {
+            rows.add(SheetModel.Row.of("All claimed values", "agree", "Every claimed value is within its tolerance."));
+        }
+        return new SheetModel.Table("Possible causes of the differences", List.of("Quantity", "Cause", "What to look at"),
+                List.of(0.22, 0.18, 0.60), rows, "Each cause names an alternative calculation that the claimed value "
+                + "matches within its tolerance while Ventcase's value does not; it is a lead, not a finding.");
+    }
+
+    static SheetModel.Table modelRange(ReviewResult r) {
+        List<String> cols = new ArrayList<>();
+        List<Double> weights = new ArrayList<>();
+        cols.add("Quantity");
+        weights.add(0.24);
+        for (ReviewResult.ModelRun m : r.runs()) {
+            cols.add(m.label());
+            weights.add(0.76 / r.runs().size());
+        }
+        List<SheetModel.Row> rows = new ArrayList<>();
+        for (ReviewResult.Row row : r.rows()) {
+            ReviewQuantity q = row.quantity();
+            List<String> cells = new ArrayList<>();
+            cells.add(q.label());
+            for (ReviewResult.ModelRun m : r.runs()) {
+                if (q == ReviewQuantity.ORIFICE) {
+                    cells.add(m.orifice().orElse("not computed"));
+                } else {
+                    Double v = m.values().get(q);
+                    cells.add(v == null ? "not computed" : nb(q.format(v)));
+                }
+            }
+            rows.add(new SheetModel.Row(cells, row.withinModelUncertainty()));
+        }
+        StringBuilder failures = new StringBuilder();
+        for (ReviewResult.ModelRun m : r.runs()) {
+            m.failure().ifPresent(f -> failures.append(' ').append(m.label()).append(": ").append(f));
+        }
+        return new SheetModel.Table("Model range: the case again with PR78 and SRK, translated and cubic density",
+                cols, weights, rows, "Highlighted rows: the claimed value lies inside this range, so its difference "
+                + "is within model uncertainty." + failures);
+    }
+}
