@@ -117,9 +117,34 @@ public final class RegisterCases {
         return v;
     }
 
+    private static final Pattern BARE_NUMBER = Pattern.compile("^[-+]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][-+]?\\d+)?$");
+
+    /**
+     * The cell of a quantity column; a number that has no unit in the cell nor in the header is refused
+     * (the header unit was already added to bare numbers by {@link Register}).
+     */
+    static String quantity(RegisterRow row, RegisterColumn c) {
+        String v = row.get(c);
+        if (BARE_NUMBER.matcher(v.strip()).matches()) {
+            throw InvalidInputException.invalid(c.header(), v, "a bare number is refused: give the unit in the cell "
+                    + "('" + v.strip() + " " + example(c) + "') or in the header ('" + c.header() + " [" + example(c)
+                    + "]')");
+        }
+        return v;
+    }
+
+    private static String example(RegisterColumn c) {
+        return switch (c) {
+            case PRESSURE, SET_PRESSURE, MAWP -> "barg";
+            case TEMPERATURE -> "C";
+            case LEVEL -> "%v";
+            default -> "m";
+        };
+    }
+
     private static double length(RegisterRow row, RegisterColumn c) {
-        return Units.parse(c.header(), required(row, c, "expected a length with its unit, e.g. '3.2 m'"),
-                Dimension.LENGTH);
+        required(row, c, "expected a length with its unit, e.g. '3.2 m'");
+        return Units.parse(c.header(), quantity(row, c), Dimension.LENGTH);
     }
 
     private AuditItem build(RegisterRow row, String tag, String area, String fluidText) {
@@ -147,9 +172,9 @@ public final class RegisterCases {
         } catch (InvalidInputException e) {
             throw e.withField(RegisterColumn.ELEVATION.header());
         }
-        double t = Units.temperatureK(RegisterColumn.TEMPERATURE.header(), required(row, RegisterColumn.TEMPERATURE,
-                "expected the storage temperature with its unit, e.g. '38 C'"));
-        String pText = row.get(RegisterColumn.PRESSURE);
+        required(row, RegisterColumn.TEMPERATURE, "expected the storage temperature with its unit, e.g. '38 C'");
+        double t = Units.temperatureK(RegisterColumn.TEMPERATURE.header(), quantity(row, RegisterColumn.TEMPERATURE));
+        String pText = quantity(row, RegisterColumn.PRESSURE);
         OptionalDouble p = pText.isBlank() ? OptionalDouble.empty()
                 : OptionalDouble.of(Units.parsePressure(RegisterColumn.PRESSURE.header(), pText,
                 ScreeningCase.ATMOSPHERIC_PA));
@@ -180,7 +205,7 @@ public final class RegisterCases {
                     throw InvalidInputException.missing(RegisterColumn.PRESSURE.header(),
                             "a gas-filled vessel needs the storage pressure, gauge or absolute, e.g. '8 barg'");
                 }
-                String lv = row.get(RegisterColumn.LEVEL);
+                String lv = row.get(RegisterColumn.LEVEL).isBlank() ? "" : quantity(row, RegisterColumn.LEVEL);
                 if (!lv.isBlank()) {
                     Level l = Specs.level(RegisterColumn.LEVEL.header(), lv);
                     if (l.value() != 0) {
@@ -194,9 +219,9 @@ public final class RegisterCases {
             default -> throw InvalidInputException.invalid(RegisterColumn.MODE.header(), row.get(RegisterColumn.MODE),
                     "expected saturated, specified or gas-filled");
         }
-        double set = Units.parsePressure(RegisterColumn.SET_PRESSURE.header(), row.get(RegisterColumn.SET_PRESSURE),
-                ScreeningCase.ATMOSPHERIC_PA) - ScreeningCase.ATMOSPHERIC_PA;
-        String mawpText = row.get(RegisterColumn.MAWP);
+        double set = Units.parsePressure(RegisterColumn.SET_PRESSURE.header(),
+                quantity(row, RegisterColumn.SET_PRESSURE), ScreeningCase.ATMOSPHERIC_PA) - ScreeningCase.ATMOSPHERIC_PA;
+        String mawpText = quantity(row, RegisterColumn.MAWP);
         double mawp = mawpText.isBlank() ? set : Units.parsePressure(RegisterColumn.MAWP.header(), mawpText,
                 ScreeningCase.ATMOSPHERIC_PA) - ScreeningCase.ATMOSPHERIC_PA;
         if (!(set > 0)) {
@@ -280,8 +305,9 @@ public final class RegisterCases {
     }
 
     private static Level level(RegisterRow row, Vessel vessel) {
-        String text = required(row, RegisterColumn.LEVEL,
+        required(row, RegisterColumn.LEVEL,
                 "expected a height ('2.1 m'), a percentage of height ('65 %') or of volume ('70 %v')");
+        String text = quantity(row, RegisterColumn.LEVEL);
         Level l = Specs.level(RegisterColumn.LEVEL.header(), text);
         if (l.basis() == Level.Basis.HEIGHT_M && l.value() > vessel.totalHeight()) {
             throw InvalidInputException.invalid(RegisterColumn.LEVEL.header(), text, String.format(Locale.ROOT,

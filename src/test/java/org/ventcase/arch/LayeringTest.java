@@ -43,6 +43,9 @@ class LayeringTest {
             Map.entry("ui", List.of("picocli", "org.ventcase.cli")),
             // the wizard's bridge to the calculation is JavaFX-free, so tests and the CLI can use it
             Map.entry("ui/calc", List.of("picocli", "javafx", "org.ventcase.cli")),
+            // the inventory audit is domain-level: no case files (JSON), sheet, command line or JavaFX
+            Map.entry("audit", List.of("org.ventcase.casefile", "org.ventcase.cli", "org.ventcase.report", "org.ventcase.ui",
+                    "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx")),
             Map.entry("calc", List.of("org.ventcase.casefile", "org.ventcase.cli", "org.ventcase.report", "com.fasterxml",
                     "picocli", "org.apache.pdfbox", "javafx")));
 
