@@ -113,11 +113,17 @@ public final class AuditCsv {
             sb.append(i == 0 ? "" : ",").append(Csv.text(cols.get(i).header()));
         }
         sb.append('\n');
-        for (VesselAudit v : r.rows()) {
+        // lines are formatted in parallel and joined in row order: the text does not depend on scheduling
+        List<VesselAudit> rows = r.rows();
+        String[] lines = java.util.stream.IntStream.range(0, rows.size()).parallel().mapToObj(k -> {
+            StringBuilder line = new StringBuilder(512);
             for (int i = 0; i < cols.size(); i++) {
-                sb.append(i == 0 ? "" : ",").append(cols.get(i).cell().apply(v));
+                line.append(i == 0 ? "" : ",").append(cols.get(i).cell().apply(rows.get(k)));
             }
-            sb.append('\n');
+            return line.append('\n').toString();
+        }).toArray(String[]::new);
+        for (String l : lines) {
+            sb.append(l);
         }
         return sb.toString();
     }

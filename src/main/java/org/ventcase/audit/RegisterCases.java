@@ -56,14 +56,16 @@ public final class RegisterCases {
         this.origin = origin == null ? "" : origin;
     }
 
-    /** Every row of a register, in order. */
+    /**
+     * Every row of a register, in order. Rows are read in parallel (common fork-join pool); the list
+     * is in row order and each item depends only on its row, so the result does not depend on the
+     * scheduling.
+     */
     public static List<AuditItem> items(Register register) {
         RegisterCases rc = new RegisterCases(register.origin());
-        List<AuditItem> out = new ArrayList<>(register.rows().size());
-        for (RegisterRow r : register.rows()) {
-            out.add(rc.item(r));
-        }
-        return out;
+        List<RegisterRow> rows = register.rows();
+        return java.util.stream.IntStream.range(0, rows.size()).parallel().mapToObj(i -> rc.item(rows.get(i)))
+                .toList();
     }
 
     /** Checks a header unit by parsing "1 UNIT" for the column's dimension. */
