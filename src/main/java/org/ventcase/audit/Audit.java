@@ -105,7 +105,8 @@ public final class Audit {
         try {
             r = CaseCalculation.run(it.input().get());
         } catch (InvalidInputException e) {
-            return error(it, new AuditError(e.field(), e.value(), e.accepted()));
+            String field = it.source().endsWith(".json") ? e.field() : RegisterCases.column(e.field());
+            return error(it, new AuditError(field, e.value(), e.accepted()));
         } catch (VentcaseException e) {
             return error(it, new AuditError("calculation", "", e.getMessage()));
         } catch (RuntimeException e) {

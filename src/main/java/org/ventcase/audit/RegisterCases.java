@@ -16,7 +16,6 @@ import org.ventcase.common.VentcaseException;
 import org.ventcase.device.OrificeTable;
 import org.ventcase.inventory.Fluid;
 import org.ventcase.inventory.Storage;
-import org.ventcase.relief.RelievingPressure;
 import org.ventcase.relief.RelievingPressureInput;
 import org.ventcase.thermo.Composition;
 import org.ventcase.thermo.Compositions;
@@ -234,13 +233,13 @@ public final class RegisterCases {
             throw InvalidInputException.invalid(RegisterColumn.MAWP.header(), mawpText,
                     "expected an MAWP above atmospheric");
         }
+        // a set pressure above the MAWP is found by the calculation (RelievingPressure) and reported
+        // against the set pressure column by Audit.audit, so it is not computed twice here
         RelievingPressureInput rel;
         try {
             rel = ScreeningCase.relieving(set, mawp, ScreeningCase.ATMOSPHERIC_PA);
-            RelievingPressure.compute(rel);
         } catch (InvalidInputException e) {
-            String f = e.field().contains("mawp") ? RegisterColumn.MAWP.header() : RegisterColumn.SET_PRESSURE.header();
-            throw e.withField(f);
+            throw e.withField(column(e.field()));
         }
         Optional<InstalledOrifice> installed = installed(row);
         CaseInput in = ScreeningCase.of("Register line " + row.line() + ": " + tag, tag, fluid, storage, vessel, level,
@@ -293,7 +292,23 @@ public final class RegisterCases {
         }
     }
 
-    private static String column(String domainField) {
+    /** The register column of a domain field path (the path itself when it has none). */
+    static String column(String domainField) {
+        if (domainField.startsWith("relief.setPressure")) {
+            return RegisterColumn.SET_PRESSURE.header();
+        }
+        if (domainField.startsWith("relief.mawp")) {
+            return RegisterColumn.MAWP.header();
+        }
+        if (domainField.startsWith("level.")) {
+            return RegisterColumn.LEVEL.header();
+        }
+        if (domainField.startsWith("storage.temperature")) {
+            return RegisterColumn.TEMPERATURE.header();
+        }
+        if (domainField.startsWith("storage.pressure")) {
+            return RegisterColumn.PRESSURE.header();
+        }
         if (domainField.startsWith("vessel.diameter")) {
             return RegisterColumn.DIAMETER.header();
         }

@@ -125,9 +125,14 @@ class RegisterErrorsTest {
                 // a vapour composition with saturated storage
                 "V-2,Area 1,propane,,horizontal,2:1,3.0,12,1.0,70,25,,saturated,nitrogen,17.2,,,",
                 // unknown orifice letter
-                "V-3,Area 1,propane,,horizontal,2:1,3.0,12,1.0,70,25,,saturated,,17.2,,Z,");
+                "V-3,Area 1,propane,,horizontal,2:1,3.0,12,1.0,70,25,,saturated,,17.2,,Z,",
+                // set pressure above the MAWP (one device: at most 100 % of MAWP, API Std 520 Part I)
+                "V-4,Area 1,propane,,horizontal,2:1,3.0,12,1.0,70,25,,saturated,,17.2,16,,");
         assertEquals("pressure", errorOf(r.rows().get(0)).field());
         assertEquals("vapour", errorOf(r.rows().get(1)).field());
         assertEquals("orifice", errorOf(r.rows().get(2)).field());
+        AuditError set = errorOf(r.rows().get(3));
+        assertEquals("set pressure", set.field());
+        assertTrue(set.reason().contains("of MAWP"), set.reason());
     }
 }
