@@ -249,7 +249,7 @@ public final class CaseCalculation {
             for (CaseResult.ScenarioResult r : rs) {
                 if (r.relievesLiquid() && r.requiredAreaM2().isPresent()
                         && r.requiredAreaM2().getAsDouble() > g.requiredAreaM2().getAsDouble()) {
-                    by.computeIfAbsent(String.format(Locale.ROOT, "The liquid-relief scenario '%s' needs %.0f mm2, more "
+                    by.computeIfAbsent(String.format(Locale.US, "The liquid-relief scenario '%s' needs %.0f mm2, more "
                             + "than the governing vapour scenario '%s' (%.0f mm2): check that the selected valve also "
                             + "passes the liquid case.", r.label(), r.requiredAreaM2().getAsDouble() * 1e6, g.label(),
                             g.requiredAreaM2().getAsDouble() * 1e6), k -> new ArrayList<>()).add(r.label());
@@ -418,11 +418,11 @@ public final class CaseCalculation {
         o.warnings.addAll(h.warnings());
         env.warning().ifPresent(o.warnings::add);
         o.trace.add(TraceStep.of("Fire heat input").equation(h.equation()).source(h.source())
-                .in("Fire-exposed wetted area A", String.format(Locale.ROOT, "%.3f m2 at the storage level",
+                .in("Fire-exposed wetted area A", String.format(Locale.US, "%.3f m2 at the storage level",
                         c.level().fire().area()))
-                .in("Environment factor F", String.format(Locale.ROOT, "%.4g (%s)", env.f(), env.description()))
+                .in("Environment factor F", String.format(Locale.US, "%.4g (%s)", env.f(), env.description()))
                 .in("Drainage and fire-fighting", ff == FireFighting.INADEQUATE ? "inadequate" : "adequate")
-                .out("Q", String.format(Locale.ROOT, "%.1f kW", h.heatW() / 1e3))
+                .out("Q", String.format(Locale.US, "%.1f kW", h.heatW() / 1e3))
                 .note(c.level().fire().ruleApplied()).build());
         o.q = OptionalDouble.of(h.heatW());
         return h;
@@ -551,14 +551,14 @@ public final class CaseCalculation {
         TraceStep.Builder b = TraceStep.of("Required effective area (liquid)")
                 .equation("A = 11.78 Q / (Kd Kw Kc Kv) sqrt(G / (P1 - P2)); A mm2, Q L/min, P kPa")
                 .source(ls.source())
-                .in("Q", String.format(Locale.ROOT, "%.4g m3/h", r.volumetricRateM3PerS() * 3600))
-                .in("G = rho / 999.0 kg/m3", String.format(Locale.ROOT, "%.4f", g))
-                .in("Blocked-in volume", String.format(Locale.ROOT, "%.3f m3 (does not enter q, which depends on "
+                .in("Q", String.format(Locale.US, "%.4g m3/h", r.volumetricRateM3PerS() * 3600))
+                .in("G = rho / 999.0 kg/m3", String.format(Locale.US, "%.4f", g))
+                .in("Blocked-in volume", String.format(Locale.US, "%.3f m3 (does not enter q, which depends on "
                         + "the heat input only)", f.blockedInVolumeM3()));
         for (String line : ls.trace()) {
             b.note(line);
         }
-        o.trace.add(b.out("Required area", String.format(Locale.ROOT, "%.2f mm2", ls.areaMm2())).build());
+        o.trace.add(b.out("Required area", String.format(Locale.US, "%.2f mm2", ls.areaMm2())).build());
         o.area = OptionalDouble.of(ls.areaM2());
         o.sizing = "API 520 Part I liquid equation";
         o.orifice = Optional.of(ls.selection());
@@ -574,19 +574,19 @@ public final class CaseCalculation {
     private static TraceStep orificeStep(OrificeSelection os) {
         return TraceStep.of("Standard orifice").equation("smallest API 526 effective area >= required area")
                 .source("API Std 526 effective orifice areas (used with the API 520 Part I equations)")
-                .in("Required area", String.format(Locale.ROOT, "%.1f mm2", os.requiredAreaM2() * 1e6))
+                .in("Required area", String.format(Locale.US, "%.1f mm2", os.requiredAreaM2() * 1e6))
                 .out("Orifice", os.designation())
-                .out("Selected effective area", String.format(Locale.ROOT, "%.1f mm2", os.selectedAreaMm2()))
-                .out("Margin", String.format(Locale.ROOT, "%.1f %%", os.marginPercent()))
+                .out("Selected effective area", String.format(Locale.US, "%.1f mm2", os.selectedAreaMm2()))
+                .out("Margin", String.format(Locale.US, "%.1f %%", os.marginPercent()))
                 .note(os.ruleApplied()).build();
     }
 
     private static TraceStep relievingStep(RelievingPressureResult rp) {
         return TraceStep.of("Relieving pressure").equation("P1 = set pressure + allowable overpressure + P_atm")
                 .source(rp.source())
-                .out("Overpressure above set", String.format(Locale.ROOT, "%.1f kPa (%.1f %% of set)",
+                .out("Overpressure above set", String.format(Locale.US, "%.1f kPa (%.1f %% of set)",
                         rp.overpressurePa() / 1e3, rp.overpressurePercentOfSet()))
-                .out("P1", String.format(Locale.ROOT, "%.1f kPa abs", rp.relievingPressurePa() / 1e3))
+                .out("P1", String.format(Locale.US, "%.1f kPa abs", rp.relievingPressurePa() / 1e3))
                 .note(rp.ruleApplied()).build();
     }
 
@@ -595,7 +595,7 @@ public final class CaseCalculation {
                 .equation("F = (k/t)(904 - T)/66,570 (SI; k W/(m K), t m, T C)")
                 .source(env.source())
                 .in("Temperature used", at)
-                .out("F", String.format(Locale.ROOT, "%.4g", env.f()))
+                .out("F", String.format(Locale.US, "%.4g", env.f()))
                 .note(env.description()).build();
     }
 }

@@ -19,7 +19,7 @@ public final class Templates {
     /** Text block names; each is {@code templates/text/NAME.txt}. */
     public static final List<String> TEXTS = List.of("code-deferral", "cautions", "method-fire-wetted",
             "method-fire-near-critical", "method-fire-boil-off", "method-fire-gas-filled", "method-blocked-outlet",
-            "method-thermal-expansion");
+            "method-thermal-expansion", "method-audit");
 
     private static final String ROOT = "/org/ventcase/templates/";
 

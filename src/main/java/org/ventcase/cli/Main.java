@@ -29,7 +29,7 @@ import picocli.CommandLine.Spec;
                         + "and local regulations."},
         subcommands = {DemoCommand.class, SheetCommand.class, PropsCommand.class, SatCommand.class,
                 VesselCommand.class, InventoryCommand.class, FlashCommand.class, EnvelopeCommand.class,
-                NewCommand.class, CheckCommand.class, CalcCommand.class, ReviewCommand.class,
+                NewCommand.class, CheckCommand.class, CalcCommand.class, ReviewCommand.class, AuditCommand.class,
                 CommandLine.HelpCommand.class},
         footer = ExitCode.HELP_LIST)
 public final class Main implements Callable<Integer> {

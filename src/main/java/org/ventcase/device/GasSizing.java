@@ -199,6 +199,6 @@ public final class GasSizing {
     }
 
     private static String fmt(String f, Object... args) {
-        return String.format(Locale.ROOT, f, args);
+        return String.format(Locale.US, f, args);
     }
 }

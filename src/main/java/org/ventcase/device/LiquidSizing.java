@@ -157,6 +157,6 @@ public final class LiquidSizing {
     }
 
     private static String fmt(String f, Object... args) {
-        return String.format(Locale.ROOT, f, args);
+        return String.format(Locale.US, f, args);
     }
 }

@@ -72,7 +72,7 @@ public final class OrificeTable {
         double reqMm2 = requiredAreaM2 * 1e6;
         for (Orifice o : ORIFICES) {
             if (o.areaMm2() >= reqMm2 * (1 - 1e-12)) {
-                return selection(requiredAreaM2, requiredFlowKgPerS, o, 1, String.format(Locale.ROOT,
+                return selection(requiredAreaM2, requiredFlowKgPerS, o, 1, String.format(Locale.US,
                         "smallest standard orifice with effective area >= %.6g mm2: %s (%.6g mm2)", reqMm2,
                         o.letter(), o.areaMm2()));
             }
@@ -81,7 +81,7 @@ public final class OrificeTable {
         int n = (int) Math.ceil(reqMm2 / t.areaMm2() * (1 - 1e-12));
         for (Orifice o : ORIFICES) {
             if (n * o.areaMm2() >= reqMm2 * (1 - 1e-12)) {
-                return selection(requiredAreaM2, requiredFlowKgPerS, o, n, String.format(Locale.ROOT,
+                return selection(requiredAreaM2, requiredFlowKgPerS, o, n, String.format(Locale.US,
                         "required %.6g mm2 exceeds the largest standard orifice %s (%.6g mm2); n = ceil(A/A_%s) = %d "
                                 + "equal valves of the smallest orifice with n x A >= required: %d x %s "
                                 + "(program's rule, common practice, no source)",

@@ -149,7 +149,7 @@ public final class Inventories {
                 b.note(cs.get(i).name() + ": " + cs.get(i).criticalSource());
                 for (int j = i + 1; j < cs.size(); j++) {
                     b.in("k_ij " + cs.get(i).name() + " / " + cs.get(j).name(),
-                            String.format(Locale.ROOT, "%.4f (%s)", k[i][j], src[i][j]));
+                            String.format(Locale.US, "%.4f (%s)", k[i][j], src[i][j]));
                 }
             }
             trace.add(b.build());
@@ -160,19 +160,19 @@ public final class Inventories {
             trace.add(TraceStep.of("Vessel at level").equation("V_L = V(h), V_V = V_total - V_L (exact head and shell "
                     + "geometry)").source("vessel geometry (see the vessel command)")
                     .in("Vessel", vs.vessel().describe())
-                    .in("Liquid level", String.format(Locale.ROOT, "%.4f m (%.2f %% of height, %.2f %% of volume)",
+                    .in("Liquid level", String.format(Locale.US, "%.4f m (%.2f %% of height, %.2f %% of volume)",
                             vs.levelM(), vs.levelPercentHeight(), vs.levelPercentVolume()))
                     .out("Total volume", m3(vs.totalVolume()))
                     .out("Liquid volume", m3(vs.liquidVolume()))
                     .out("Vapour volume", m3(vs.vapourVolume()))
-                    .out("Fire-exposed wetted area", String.format(Locale.ROOT, "%.4f m2", vs.fire().area()))
+                    .out("Fire-exposed wetted area", String.format(Locale.US, "%.4f m2", vs.fire().area()))
                     .note(vs.fire().ruleApplied()).build());
         }
 
         void outage() {
             double vapourPercent = 100.0 - vs.levelPercentVolume();
             if (vapourPercent < MIN_OUTAGE_PERCENT) {
-                warnings.add(String.format(Locale.ROOT, "The liquid fills %.2f %% of the vessel: less than %.0f %% "
+                warnings.add(String.format(Locale.US, "The liquid fills %.2f %% of the vessel: less than %.0f %% "
                         + "vapour space (outage) is left; a small temperature rise can fill the vessel with liquid.",
                         vs.levelPercentVolume(), MIN_OUTAGE_PERCENT));
             }
@@ -215,7 +215,7 @@ public final class Inventories {
                         .out("Saturation pressure", kpa(p))
                         .out("Liquid density", dens(rhoL, bL))
                         .out("Vapour density", dens(rhoV, bV))
-                        .out("Rackett liquid density (cross-check)", String.format(Locale.ROOT, "%.2f kg/m3 (%+.1f %%)",
+                        .out("Rackett liquid density (cross-check)", String.format(Locale.US, "%.2f kg/m3 (%+.1f %%)",
                                 sr.rackettLiquidDensity(), 100 * (rhoL / sr.rackettLiquidDensity() - 1)));
             } else {
                 double tpc = x.pseudoCriticalTemperatureK();
@@ -224,7 +224,7 @@ public final class Inventories {
                 try {
                     bp = new SaturationPoints(model).bubblePressure(t, xa);
                 } catch (NoSolutionException e) {
-                    throw new NoSolutionException("storage.temperature", String.format(Locale.ROOT,
+                    throw new NoSolutionException("storage.temperature", String.format(Locale.US,
                             "no bubble point of the stored liquid was found at %s: the liquid may be above its "
                                     + "critical region (Kay's pseudo-critical temperature %s; the true mixture critical "
                                     + "temperature can differ), or too near it for the bubble-point iteration; no "
@@ -232,7 +232,7 @@ public final class Inventories {
                                     + "instead (%s)", kelvinC(t), kelvinC(tpc), message(e)));
                 }
                 if (t >= tpc) {
-                    warnings.add(String.format(Locale.ROOT, "The storage temperature %s is at or above the liquid's "
+                    warnings.add(String.format(Locale.US, "The storage temperature %s is at or above the liquid's "
                             + "pseudo-critical temperature (Kay's rule, %s): the mixture is near or above its critical "
                             + "region, and the bubble point, phase split and densities are uncertain.", kelvinC(t),
                             kelvinC(tpc)));
@@ -256,10 +256,10 @@ public final class Inventories {
                         .in("Kay's pseudo-critical temperature", kelvinC(tpc))
                         .out("Bubble pressure", kpa(p))
                         .out("Vapour composition", y.toString())
-                        .out("Liquid density", dens(rhoL, bL) + String.format(Locale.ROOT, ", Z = %.5f", zL))
-                        .out("Vapour density", dens(rhoV, bV) + String.format(Locale.ROOT, ", Z = %.5f", zV))
+                        .out("Liquid density", dens(rhoL, bL) + String.format(Locale.US, ", Z = %.5f", zL))
+                        .out("Vapour density", dens(rhoV, bV) + String.format(Locale.US, ", Z = %.5f", zV))
                         .note("Rackett cross-check not made: the liquid is a mixture.")
-                        .note(String.format(Locale.ROOT, "%d bubble-point iterations", bp.iterations()));
+                        .note(String.format(Locale.US, "%d bubble-point iterations", bp.iterations()));
             }
             trace.add(st.build());
             PhaseInventory liq = PhaseInventory.of("liquid", vs.liquidVolume(), rhoL, bL, zL, x);
@@ -273,8 +273,8 @@ public final class Inventories {
 
         Optional<LiquidFullCheck> liquidFull(double t, double p, double p1, PhaseInventory liq) {
             if (!(p1 > p)) {
-                throw new InvalidInputException("storage.relievingPressure", String.format(Locale.ROOT, "%.6g Pa", p1),
-                        String.format(Locale.ROOT, "expected a relieving pressure above the storage pressure "
+                throw new InvalidInputException("storage.relievingPressure", String.format(Locale.US, "%.6g Pa", p1),
+                        String.format(Locale.US, "expected a relieving pressure above the storage pressure "
                                 + "(%.6g Pa absolute at %s)", p, kelvinC(t)));
             }
             Composition x = fluid.composition();
@@ -312,11 +312,11 @@ public final class Inventories {
                                 + "density from " + fluid.variant().displayName() + " on the " + used.label()
                                 + " basis")
                         .in("Relieving pressure P1", kpa(p1))
-                        .in("Liquid mass m_L", String.format(Locale.ROOT, "%.2f kg", m))
+                        .in("Liquid mass m_L", String.format(Locale.US, "%.2f kg", m))
                         .in("Vessel volume V", m3(v))
                         .out("Bubble temperature at P1, T1", kelvinC(t1))
                         .out("rho_L,sat(T1)", dens(rho1, used))
-                        .out("V_L(T1)", String.format(Locale.ROOT, "%.4f m3 (%.2f %% of V)", vol1, 100 * vol1 / v))
+                        .out("V_L(T1)", String.format(Locale.US, "%.4f m3 (%.2f %% of V)", vol1, 100 * vol1 / v))
                         .note("Method: " + CHECK_METHOD + ".");
                 if (fills) {
                     double lo = t;
@@ -332,7 +332,7 @@ public final class Inventories {
                     double tf = m / rhoSat.applyAsDouble(t) >= v ? t : 0.5 * (lo + hi);
                     tFull = OptionalDouble.of(tf);
                     b.out("Liquid-full temperature T_full", kelvinC(tf));
-                    warnings.add(String.format(Locale.ROOT, "The liquid would expand to fill the vessel before the "
+                    warnings.add(String.format(Locale.US, "The liquid would expand to fill the vessel before the "
                             + "relieving pressure is reached: at %s (relieving pressure %s) the %.0f kg of liquid "
                             + "would need %.3f m3 against a vessel volume of %.3f m3; liquid-full at about %s. Heated "
                             + "further the vessel is hydraulically full and the pressure rises steeply: consider "
@@ -366,9 +366,9 @@ public final class Inventories {
                     .in("Temperature", kelvinC(t)).in("Pressure", kpa(p))
                     .in("Liquid composition", x.toString()).in("Vapour-space composition (stated)", y.toString())
                     .out("Liquid density", dens(pl.density(), pl.densityBasis())
-                            + String.format(Locale.ROOT, ", Z = %.5f", pl.z()))
+                            + String.format(Locale.US, ", Z = %.5f", pl.z()))
                     .out("Vapour-space density", dens(pv.density(), pv.densityBasis())
-                            + String.format(Locale.ROOT, ", Z = %.5f", pv.z()))
+                            + String.format(Locale.US, ", Z = %.5f", pv.z()))
                     .note("The vapour-space composition is the user's statement; no equilibrium with the liquid is "
                             + "computed.");
             liquidFlashCheck(t, p, x, st);
@@ -386,7 +386,7 @@ public final class Inventories {
 
         Inventory gas(Storage.GasFilled s) {
             if (vs.liquidVolume() > 0) {
-                throw new InvalidInputException("vessel.level", String.format(Locale.ROOT, "%.6g m", vs.levelM()),
+                throw new InvalidInputException("vessel.level", String.format(Locale.US, "%.6g m", vs.levelM()),
                         "a gas-filled vessel holds no liquid: give a level of 0 or none");
             }
             double t = s.temperatureK();
@@ -399,7 +399,7 @@ public final class Inventories {
                     .source(fluid.variant().displayName() + " (" + fluid.variant().citation() + ")")
                     .in("Temperature", kelvinC(t)).in("Pressure", kpa(p)).in("Composition", z.toString())
                     .out("Gas density", dens(pv.density(), pv.densityBasis())
-                            + String.format(Locale.ROOT, ", Z = %.5f", pv.z()))
+                            + String.format(Locale.US, ", Z = %.5f", pv.z()))
                     .out("Phase", pv.phase().label()).note(pv.rootReason());
             vapourCondensationCheck(t, p, z, st, "gas");
             trace.add(st.build());
@@ -415,7 +415,7 @@ public final class Inventories {
             if (present.length == 1) {
                 Component c = x.components().get(present[0]);
                 if (t >= c.tcK()) {
-                    warnings.add(String.format(Locale.ROOT, "The liquid (%s) is stated at %s, at or above its critical "
+                    warnings.add(String.format(Locale.US, "The liquid (%s) is stated at %s, at or above its critical "
                             + "temperature (%s): no liquid phase exists; the density is that of the single dense "
                             + "fluid.", c.name(), kelvinC(t), kelvinC(c.tcK())));
                     return;
@@ -424,7 +424,7 @@ public final class Inventories {
                     double psat = new PureSaturation(pureModel(present[0])).pressure(t);
                     st.out("Vapour pressure of the liquid at T", kpa(psat));
                     if (p < psat) {
-                        warnings.add(String.format(Locale.ROOT, "The liquid would flash: the pressure %s is below its "
+                        warnings.add(String.format(Locale.US, "The liquid would flash: the pressure %s is below its "
                                 + "vapour pressure %s at %s.", kpa(p), kpa(psat), kelvinC(t)));
                     }
                 } catch (NoSolutionException | ConvergenceException e) {
@@ -435,17 +435,17 @@ public final class Inventories {
             }
             double tpc = x.pseudoCriticalTemperatureK();
             if (t >= tpc) {
-                warnings.add(String.format(Locale.ROOT, "The liquid is stated at %s, at or above its pseudo-critical "
+                warnings.add(String.format(Locale.US, "The liquid is stated at %s, at or above its pseudo-critical "
                         + "temperature (Kay's rule, %s): it may not exist as a liquid; its density is uncertain.",
                         kelvinC(t), kelvinC(tpc)));
             }
             try {
                 StabilityResult sr = new StabilityAnalysis(model).test(t, p, x.fractions());
                 st.out("Liquid stability at (T, P)", sr.stable() ? "stable (single phase)"
-                        : String.format(Locale.ROOT, "unstable (tm = %.3g, %s incipient phase)", sr.minimumTpd(),
+                        : String.format(Locale.US, "unstable (tm = %.3g, %s incipient phase)", sr.minimumTpd(),
                                 sr.incipientVapourLike() ? "vapour-like" : "liquid-like"));
                 if (!sr.stable()) {
-                    warnings.add(String.format(Locale.ROOT, "The liquid would flash at %s and %s: the tangent-plane "
+                    warnings.add(String.format(Locale.US, "The liquid would flash at %s and %s: the tangent-plane "
                             + "stability test finds it unstable (tm = %.3g, %s incipient phase); its single-phase "
                             + "density is then not what the vessel holds.", kelvinC(t), kpa(p), sr.minimumTpd(),
                             sr.incipientVapourLike() ? "vapour-like" : "liquid-like"));
@@ -457,7 +457,7 @@ public final class Inventories {
                 double pb = new SaturationPoints(model).bubblePressure(t, x.fractions()).pressurePa();
                 st.out("Bubble pressure of the liquid at T", kpa(pb));
                 if (p < pb) {
-                    warnings.add(String.format(Locale.ROOT, "The liquid would flash: the pressure %s is below its "
+                    warnings.add(String.format(Locale.US, "The liquid would flash: the pressure %s is below its "
                             + "bubble pressure %s at %s.", kpa(p), kpa(pb), kelvinC(t)));
                 }
             } catch (NoSolutionException | ConvergenceException e) {
@@ -472,7 +472,7 @@ public final class Inventories {
             if (present.length == 1) {
                 Component c = y.components().get(present[0]);
                 if (t >= c.tcK()) {
-                    st.note(String.format(Locale.ROOT, "The %s (%s) is above its critical temperature: it cannot "
+                    st.note(String.format(Locale.US, "The %s (%s) is above its critical temperature: it cannot "
                             + "condense.", what, c.name()));
                     return;
                 }
@@ -480,7 +480,7 @@ public final class Inventories {
                     double psat = new PureSaturation(pureModel(present[0])).pressure(t);
                     st.out("Vapour pressure of the " + what + " at T", kpa(psat));
                     if (p >= psat) {
-                        warnings.add(String.format(Locale.ROOT, "The %s would condense: the pressure %s is at or above "
+                        warnings.add(String.format(Locale.US, "The %s would condense: the pressure %s is at or above "
                                 + "the vapour pressure of %s, %s at %s.", what, kpa(p), c.name(), kpa(psat),
                                 kelvinC(t)));
                     }
@@ -494,11 +494,11 @@ public final class Inventories {
             try {
                 StabilityResult sr = new StabilityAnalysis(model).test(t, p, y.fractions());
                 st.out("Stability of the " + what + " at (T, P)", sr.stable() ? "stable (single phase)"
-                        : String.format(Locale.ROOT, "unstable (tm = %.3g, %s incipient phase)", sr.minimumTpd(),
+                        : String.format(Locale.US, "unstable (tm = %.3g, %s incipient phase)", sr.minimumTpd(),
                                 sr.incipientVapourLike() ? "vapour-like" : "liquid-like"));
                 if (!sr.stable()) {
                     warned = true;
-                    warnings.add(String.format(Locale.ROOT, "The %s would condense at %s and %s: the tangent-plane "
+                    warnings.add(String.format(Locale.US, "The %s would condense at %s and %s: the tangent-plane "
                             + "stability test finds it unstable (tm = %.3g); a liquid phase would form.", what,
                             kelvinC(t), kpa(p), sr.minimumTpd()));
                 }
@@ -509,7 +509,7 @@ public final class Inventories {
                 double pd = new SaturationPoints(model).dewPressure(t, y.fractions()).pressurePa();
                 st.out("Dew pressure of the " + what + " at T", kpa(pd));
                 if (p >= pd && !warned) {
-                    warnings.add(String.format(Locale.ROOT, "The %s would condense: the pressure %s is at or above its "
+                    warnings.add(String.format(Locale.US, "The %s would condense: the pressure %s is at or above its "
                             + "dew pressure %s at %s.", what, kpa(p), kpa(pd), kelvinC(t)));
                 }
             } catch (NoSolutionException | ConvergenceException e) {
@@ -532,9 +532,9 @@ public final class Inventories {
             rackett = OptionalDouble.of(r);
             double dev = rho / r - 1;
             st.out("Rackett saturated-liquid density at T (cross-check)",
-                    String.format(Locale.ROOT, "%.2f kg/m3 (%+.1f %%)", r, 100 * dev));
+                    String.format(Locale.US, "%.2f kg/m3 (%+.1f %%)", r, 100 * dev));
             if (Math.abs(dev) > PureSaturation.RACKETT_WARNING) {
-                warnings.add(String.format(Locale.ROOT, "The %s liquid density (%.4g kg/m3) differs from the Rackett "
+                warnings.add(String.format(Locale.US, "The %s liquid density (%.4g kg/m3) differs from the Rackett "
                         + "correlation (%.4g kg/m3, saturated liquid, Z_RA from %s) by %+.1f %%: the liquid inventory "
                         + "on this basis may be %s.", used.label(), rho, r, c.rackettSource(), 100 * dev,
                         dev < 0 ? "understated" : "overstated"));
@@ -554,9 +554,9 @@ public final class Inventories {
             trace.add(phaseStep(vap));
             TraceStep.Builder tot = TraceStep.of("Total inventory").equation("m = m_L + m_V; m_i = m_L,i + m_V,i")
                     .source(MASS_SOURCE)
-                    .out("Total mass", String.format(Locale.ROOT, "%.3f kg", mass))
-                    .out("Total amount", String.format(Locale.ROOT, "%.4g mol", moles));
-            per.forEach((k, v) -> tot.out("Mass of " + k, String.format(Locale.ROOT, "%.3f kg", v)));
+                    .out("Total mass", String.format(Locale.US, "%.3f kg", mass))
+                    .out("Total amount", String.format(Locale.US, "%.4g mol", moles));
+            per.forEach((k, v) -> tot.out("Mass of " + k, String.format(Locale.US, "%.3f kg", v)));
             trace.add(tot.build());
             return new Inventory(storage.mode(), fluid, vs, exposure, t, p, liq, vap, mass, moles, per, rackett, full,
                     trace, new ArrayList<>(warnings));
@@ -568,10 +568,10 @@ public final class Inventories {
                     .source(MASS_SOURCE)
                     .in("Volume V", m3(ph.volumeM3()))
                     .in("Density rho", dens(ph.densityKgM3(), ph.densityBasis()))
-                    .out("Mass m", String.format(Locale.ROOT, "%.3f kg", ph.massKg()))
-                    .out("Molar mass M", String.format(Locale.ROOT, "%.4f kg/kmol", ph.molarMassKgKmol()))
-                    .out("Amount n", String.format(Locale.ROOT, "%.4g mol", ph.moles()));
-            ph.massPerComponentKg().forEach((k, v) -> b.out("Mass of " + k, String.format(Locale.ROOT, "%.3f kg", v)));
+                    .out("Mass m", String.format(Locale.US, "%.3f kg", ph.massKg()))
+                    .out("Molar mass M", String.format(Locale.US, "%.4f kg/kmol", ph.molarMassKgKmol()))
+                    .out("Amount n", String.format(Locale.US, "%.4g mol", ph.moles()));
+            ph.massPerComponentKg().forEach((k, v) -> b.out("Mass of " + k, String.format(Locale.US, "%.3f kg", v)));
             return b.build();
         }
 
@@ -599,18 +599,18 @@ public final class Inventories {
     }
 
     static String kpa(double pa) {
-        return String.format(Locale.ROOT, "%.2f kPa abs", pa / 1e3);
+        return String.format(Locale.US, "%.2f kPa abs", pa / 1e3);
     }
 
     static String kelvinC(double k) {
-        return String.format(Locale.ROOT, "%.2f K (%.2f C)", k, k - 273.15);
+        return String.format(Locale.US, "%.2f K (%.2f C)", k, k - 273.15);
     }
 
     static String m3(double v) {
-        return String.format(Locale.ROOT, "%.4f m3", v);
+        return String.format(Locale.US, "%.4f m3", v);
     }
 
     static String dens(double rho, DensityBasis b) {
-        return String.format(Locale.ROOT, "%.3f kg/m3 (%s)", rho, b.label());
+        return String.format(Locale.US, "%.3f kg/m3 (%s)", rho, b.label());
     }
 }

@@ -54,7 +54,7 @@ public final class BlockedOutlet {
         double mw = model.molarMass(z);
         double w = in.inflow().massFlowKgPerS(mw);
         String basis = in.inflow().kind() == InflowRate.Kind.MASS ? "mass flow as given"
-                : String.format(Locale.ROOT, "standard volume at %s (ideal-gas molar volume %.5f m3/kmol), M = %.4f "
+                : String.format(Locale.US, "standard volume at %s (ideal-gas molar volume %.5f m3/kmol), M = %.4f "
                         + "kg/kmol", in.inflow().standard().label(), in.inflow().standard().molarVolume() * 1e3, mw);
         if (in.device().backPressurePa() >= p1) {
             throw new NoSolutionException("device.backPressure", "the back pressure is not below the relieving "
@@ -71,7 +71,7 @@ public final class BlockedOutlet {
             try {
                 double pb = ThermalRelief.bubblePressure(model, DensityBasis.CUBIC, t, z);
                 if (pb > in.device().backPressurePa()) {
-                    warnings.add(String.format(Locale.ROOT, "The liquid's bubble pressure at %.2f K (%.1f kPa abs) is "
+                    warnings.add(String.format(Locale.US, "The liquid's bubble pressure at %.2f K (%.1f kPa abs) is "
                             + "above the back pressure: it flashes through the valve; two-phase sizing may be needed.",
                             t, pb / 1e3));
                 }
@@ -100,13 +100,13 @@ public final class BlockedOutlet {
             TraceStep.Builder lsz = TraceStep.of("Required effective area (liquid)")
                     .equation("A = 11.78 Q / (Kd Kw Kc Kv) sqrt(G / (P1 - P2)); A mm2, Q L/min, P kPa")
                     .source(ls.source())
-                    .in("Q at relieving conditions", String.format(Locale.ROOT, "%.4g m3/h", q * 3600))
-                    .in("G = rho / 999.0 kg/m3", String.format(Locale.ROOT, "%.4f", g));
+                    .in("Q at relieving conditions", String.format(Locale.US, "%.4g m3/h", q * 3600))
+                    .in("G = rho / 999.0 kg/m3", String.format(Locale.US, "%.4f", g));
             for (String line : ls.trace()) {
                 lsz.note(line);
             }
-            trace.add(lsz.out("Kv", String.format(Locale.ROOT, "%.4f", ls.kv()))
-                    .out("Required area", String.format(Locale.ROOT, "%.1f mm2 (%.4f in2)", ls.areaMm2(),
+            trace.add(lsz.out("Kv", String.format(Locale.US, "%.4f", ls.kv()))
+                    .out("Required area", String.format(Locale.US, "%.1f mm2 (%.4f in2)", ls.areaMm2(),
                             ls.areaMm2() / 645.16)).build());
             trace.add(ScenarioSupport.expansionStep(ex));
             return new BlockedOutletResult(in, w, basis, rf, Optional.empty(), Optional.of(ls), OptionalDouble.of(q),
@@ -151,10 +151,10 @@ public final class BlockedOutlet {
                         : "W = V_std / (R T_std / P_std) x M")
                 .source("API Std 521 / ISO 23251: blocked outlet, relief at the maximum inflow (common practice)")
                 .in("Inflow", in.inflow().kind() == InflowRate.Kind.MASS
-                        ? String.format(Locale.ROOT, "%.1f kg/h", in.inflow().value() * 3600)
-                        : String.format(Locale.ROOT, "%.1f m3/h at reference conditions", in.inflow().value() * 3600))
+                        ? String.format(Locale.US, "%.1f kg/h", in.inflow().value() * 3600)
+                        : String.format(Locale.US, "%.1f m3/h at reference conditions", in.inflow().value() * 3600))
                 .in("Relieved phase", in.phase().label())
-                .out("W", String.format(Locale.ROOT, "%.1f kg/h", w * 3600)).note(basis).build();
+                .out("W", String.format(Locale.US, "%.1f kg/h", w * 3600)).note(basis).build();
     }
 
     static double dewTemperature(CubicModel model, double p, double[] z) {

@@ -197,23 +197,23 @@ public final class BoilOff {
                     double residual = total[i] - 0.5 * (y[i] + ynn[i]) * dn - nGNew * ynn[i] - lNew[i];
                     if (!(Math.abs(residual) <= 1e-8 * sumTotal)) {
                         throw new ConvergenceException("boil-off step (component balance)", it, residual,
-                                String.format(Locale.ROOT, "component %s in step %d of %d",
+                                String.format(Locale.US, "component %s in step %d of %d",
                                         spec.components().get(i).name(), k, in.steps()));
                     }
                 }
             }
             if (liquidFull) {
-                warnings.add(String.format(Locale.ROOT, "At %.0f s the expanding liquid would fill the vessel: the "
+                warnings.add(String.format(Locale.US, "At %.0f s the expanding liquid would fill the vessel: the "
                         + "vapour-only boil-off model ends here; liquid or two-phase relief must be considered.", t));
                 reason = BoilOffResult.StopReason.VESSEL_LIQUID_FULL;
                 break;
             }
             if (!converged) {
                 throw new ConvergenceException("boil-off step (substitution on the end state)", INNER_MAX, Double.NaN,
-                        String.format(Locale.ROOT, "step %d of %d at T = %.3f K", k, in.steps(), bn.temperatureK()));
+                        String.format(Locale.US, "step %d of %d at T = %.3f K", k, in.steps(), bn.temperatureK()));
             }
             if (!(dn > 0)) {
-                warnings.add(String.format(Locale.ROOT, "At %.0f s no vapour leaves (the liquid's expansion takes the "
+                warnings.add(String.format(Locale.US, "At %.0f s no vapour leaves (the liquid's expansion takes the "
                         + "volume): the device would close; the run ends here.", t));
                 reason = BoilOffResult.StopReason.VESSEL_LIQUID_FULL;
                 break;
@@ -227,7 +227,7 @@ public final class BoilOff {
             double uNew = nLNew * bn.hLiquidJmol() + nGNew * bn.hVapourJmol() - p1 * vTot;
             double dt = (uNew - u + ventEnthalpy) / q;
             if (!(dt > 0)) {
-                throw new ConvergenceException("boil-off step (energy balance)", k, dt, String.format(Locale.ROOT,
+                throw new ConvergenceException("boil-off step (energy balance)", k, dt, String.format(Locale.US,
                         "the step needs no heat (dt = %.3g s) at T = %.3f K: the state is not boiling normally", dt,
                         bn.temperatureK()));
             }
@@ -300,12 +300,12 @@ public final class BoilOff {
                 .source(spec.eos().displayName() + " (" + spec.eos().citation() + "); " + b.method())
                 .in("P1", ScenarioSupport.kpa(in.relievingPressurePa()) + " abs")
                 .in("Liquid composition x", ScenarioSupport.fractions(b.liquid()))
-                .in("Liquid volume at opening", String.format(Locale.ROOT, "%.3f m3 of %.3f m3", vl0, vTot))
+                .in("Liquid volume at opening", String.format(Locale.US, "%.3f m3 of %.3f m3", vl0, vTot))
                 .out("Bubble temperature", ScenarioSupport.kelvinC(b.temperatureK()))
                 .out("Incipient vapour y", ScenarioSupport.fractions(b.vapour()))
-                .out("Liquid moles", String.format(Locale.ROOT, "%.1f kmol", nL0 / 1e3))
-                .out("Latent heat (EOS)", String.format(Locale.ROOT, "%.2f kJ/kg", initial.latent().computedJPerKg() / 1e3))
-                .out("Opening load Q/L (1 - rho_V/rho_L)", String.format(Locale.ROOT, "%.1f kg/h", initial.w() * 3600))
+                .out("Liquid moles", String.format(Locale.US, "%.1f kmol", nL0 / 1e3))
+                .out("Latent heat (EOS)", String.format(Locale.US, "%.2f kJ/kg", initial.latent().computedJPerKg() / 1e3))
+                .out("Opening load Q/L (1 - rho_V/rho_L)", String.format(Locale.US, "%.1f kg/h", initial.w() * 3600))
                 .build());
         BoilOffPoint last = curve.get(curve.size() - 1);
         trace.add(TraceStep.of("Boil-off at constant P1 in the fixed vessel volume")
@@ -313,28 +313,28 @@ public final class BoilOff {
                         + "moles, trapezoid-mean vented composition and enthalpy")
                 .source("open-system mass and energy balances (Smith, Van Ness, Abbott, 7th ed., 2005, section "
                         + "2.12); boil-off curves for wide-boiling mixtures: common practice")
-                .in("Heat input Q", String.format(Locale.ROOT, "%.1f kW (constant)", in.heatW() / 1e3))
+                .in("Heat input Q", String.format(Locale.US, "%.1f kW (constant)", in.heatW() / 1e3))
                 .in("Steps", Integer.toString(in.steps()))
                 .in("Stop at liquid fraction", in.stopLiquidFraction() == 0
-                        ? String.format(Locale.ROOT, "exhausted (%.1f %% left)", 100 * EXHAUSTED_FRACTION)
-                        : String.format(Locale.ROOT, "%.3f of the liquid moles at opening", in.stopLiquidFraction()))
+                        ? String.format(Locale.US, "exhausted (%.1f %% left)", 100 * EXHAUSTED_FRACTION)
+                        : String.format(Locale.US, "%.3f of the liquid moles at opening", in.stopLiquidFraction()))
                 .in("Time limit", in.timeLimitS() >= NO_TIME_LIMIT_S ? "none"
-                        : String.format(Locale.ROOT, "%.0f s (%.2f h)", in.timeLimitS(), in.timeLimitS() / 3600))
+                        : String.format(Locale.US, "%.0f s (%.2f h)", in.timeLimitS(), in.timeLimitS() / 3600))
                 .out("Points on the load curve", Integer.toString(curve.size()))
                 .out("Run ended", reason.name().toLowerCase(Locale.ROOT).replace('_', ' ')
-                        + String.format(Locale.ROOT, " at %.0f s (%.2f h)", last.timeS(), last.timeS() / 3600))
+                        + String.format(Locale.US, " at %.0f s (%.2f h)", last.timeS(), last.timeS() / 3600))
                 .out("Liquid temperature at the end", ScenarioSupport.kelvinC(last.temperatureK()))
-                .out("Liquid left", String.format(Locale.ROOT, "%.0f kg", last.liquidMassKg()))
-                .out("Vented mass", String.format(Locale.ROOT, "%.0f kg", bal.ventedMassKg())).build());
+                .out("Liquid left", String.format(Locale.US, "%.0f kg", last.liquidMassKg()))
+                .out("Vented mass", String.format(Locale.US, "%.0f kg", bal.ventedMassKg())).build());
         BoilOffPoint p = curve.get(peak);
         trace.add(TraceStep.of("Sizing point: largest required area on the load curve")
                 .equation("A(t) = API 520 gas area at W(t) and the vapour's T, Z, M, k at t; size for max A(t)")
                 .source("API Std 520 Part I gas sizing at each point; governing point by largest area")
-                .out("Opening: W, A", String.format(Locale.ROOT, "%.1f kg/h, %.1f mm2", curve.get(0).massFlowKgPerS()
+                .out("Opening: W, A", String.format(Locale.US, "%.1f kg/h, %.1f mm2", curve.get(0).massFlowKgPerS()
                         * 3600, curve.get(0).requiredAreaM2() * 1e6))
-                .out("Peak: time", String.format(Locale.ROOT, "%.0f s (point %d of %d)", p.timeS(), peak, curve.size() - 1))
+                .out("Peak: time", String.format(Locale.US, "%.0f s (point %d of %d)", p.timeS(), peak, curve.size() - 1))
                 .out("Peak: liquid temperature", ScenarioSupport.kelvinC(p.temperatureK()))
-                .out("Peak: W, A", String.format(Locale.ROOT, "%.1f kg/h, %.1f mm2", p.massFlowKgPerS() * 3600,
+                .out("Peak: W, A", String.format(Locale.US, "%.1f kg/h, %.1f mm2", p.massFlowKgPerS() * 3600,
                         p.requiredAreaM2() * 1e6)).build());
         trace.add(TraceStep.of("Balances over the run")
                 .equation("mass: m_0 - m_end - m_vented = 0; energy: Q t - (U_end - U_0) - H_vented = 0")
@@ -418,10 +418,10 @@ public final class BoilOff {
     static String closure(double residual, double reference, String unit, String what) {
         double rel = Math.abs(residual) / Math.abs(reference);
         if (rel < 1e-9) {
-            return String.format(Locale.ROOT, "below 1e-9 of the %s (%.4g %s): closes to round-off", what, reference,
+            return String.format(Locale.US, "below 1e-9 of the %s (%.4g %s): closes to round-off", what, reference,
                     unit);
         }
-        return String.format(Locale.ROOT, "%.3g %s (%.2g of the %s, %.4g %s)", residual, unit, rel, what, reference,
+        return String.format(Locale.US, "%.3g %s (%.2g of the %s, %.4g %s)", residual, unit, rel, what, reference,
                 unit);
     }
 }

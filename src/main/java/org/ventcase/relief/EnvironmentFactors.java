@@ -76,10 +76,10 @@ public final class EnvironmentFactors {
         double conductance = conductivityWPerMK / thicknessM;
         double f = conductance * (FIRE_TEMPERATURE_C - contentsTempC) / HEAT_FLUX_W_PER_M2;
         if (!(f <= 1.0)) {
-            throw InvalidInputException.invalid("fire.insulation", String.format(Locale.ROOT,
+            throw InvalidInputException.invalid("fire.insulation", String.format(Locale.US,
                     "k/t = %.4g W/(m2 K)", conductance), "gives F > 1: no insulation credit; use the bare factor 1.0");
         }
-        return new EnvironmentFactor("insulation_formula", String.format(Locale.ROOT,
+        return new EnvironmentFactor("insulation_formula", String.format(Locale.US,
                 "Insulated; F = (k/t)(904 - Tf)/66,570 with k/t = %.4g W/(m2 K), Tf = %.4g C", conductance,
                 contentsTempC), OptionalDouble.of(conductance), f, "M",
                 "API Std 521 5th ed. 2007 / ISO 23251:2006 environment factor clause [M, from memory]",

@@ -57,7 +57,7 @@ public final class FireHeatInput {
         check(wettedAreaM2, environmentFactor, fireFighting);
         double c = fireFighting == FireFighting.ADEQUATE_DRAINAGE_AND_FIREFIGHTING ? C_SI_ADEQUATE : C_SI_INADEQUATE;
         double q = c * environmentFactor * Math.pow(wettedAreaM2, AREA_EXPONENT);
-        String eq = String.format(Locale.ROOT, "Q = %.0f F A^0.82 = %.0f x %.4g x %.6g^0.82 = %.6g W",
+        String eq = String.format(Locale.US, "Q = %.0f F A^0.82 = %.0f x %.4g x %.6g^0.82 = %.6g W",
                 c, c, environmentFactor, wettedAreaM2, q);
         return new HeatInputResult(q, eq, SOURCE_521, List.of());
     }
@@ -121,7 +121,7 @@ public final class FireHeatInput {
             row = "14,090,000 (A >= 2800 ft2, design pressure <= 1 psig)";
         }
         double q = qBtu * environmentFactor * CustomaryUnits.W_PER_BTU_PER_H;
-        String eq = String.format(Locale.ROOT, "A = %.6g ft2; Q = F x %s = %.4g x %.6g Btu/h = %.6g W",
+        String eq = String.format(Locale.US, "A = %.6g ft2; Q = F x %s = %.4g x %.6g Btu/h = %.6g W",
                 a, row, environmentFactor, qBtu, q);
         return new HeatInputResult(q, eq, SOURCE_2000, List.of());
     }

@@ -74,17 +74,17 @@ public final class IsenthalpicExpansion {
         }
         if (mdmtK.isPresent() && t2 < mdmtK.getAsDouble()) {
             below = true;
-            w.add(String.format(Locale.ROOT, "Brittle-fracture caution: after expansion to %.1f kPa abs the relieved "
+            w.add(String.format(Locale.US, "Brittle-fracture caution: after expansion to %.1f kPa abs the relieved "
                     + "fluid is at %.1f C (vapour fraction %.3f), below the outlet's minimum design metal temperature of "
                     + "%.1f C. Check the outlet piping material (impact testing) or the design; locally, at the valve "
                     + "exit, the fast-flowing fluid is colder still.", p2Pa / 1e3, t2 - 273.15, r.vaporFraction(),
                     mdmtK.getAsDouble() - 273.15));
         }
         if (r.twoPhase() && fluid.phase() != RelievedFluid.Phase.LIQUID) {
-            w.add(String.format(Locale.ROOT, "The relieved vapour partly condenses on expansion to the back pressure "
+            w.add(String.format(Locale.US, "The relieved vapour partly condenses on expansion to the back pressure "
                     + "(vapour fraction %.3f): liquid in the outlet.", r.vaporFraction()));
         }
-        String eq = String.format(Locale.ROOT, "H(T2, P2) = H(T1, P1) = %.1f J/mol; PH flash at P2 = %.1f kPa abs -> "
+        String eq = String.format(Locale.US, "H(T2, P2) = H(T1, P1) = %.1f J/mol; PH flash at P2 = %.1f kPa abs -> "
                 + "T2 = %.2f K (%.2f C)", h, p2Pa / 1e3, t2, t2 - 273.15);
         return new Result(t2, p2Pa, r.vaporFraction(), h, mdmtK, below, eq, w);
     }

@@ -38,7 +38,7 @@ public final class LatentHeatGuard {
     public static Result apply(double computedJPerKg) {
         InvalidInputException.requirePositive("fire.latentHeat", computedJPerKg, "J/kg");
         if (computedJPerKg < MINIMUM_J_PER_KG) {
-            return new Result(computedJPerKg, MINIMUM_J_PER_KG, true, String.format(java.util.Locale.ROOT,
+            return new Result(computedJPerKg, MINIMUM_J_PER_KG, true, String.format(java.util.Locale.US,
                     "Latent heat %.4g kJ/kg is below the near-critical minimum of 116.3 kJ/kg (50 Btu/lb) used for "
                             + "hydrocarbons; the minimum was used. The contents are near their critical point: "
                             + "consider the stepwise (dv/dh) method.", computedJPerKg / 1000));

@@ -47,7 +47,7 @@ public final class MixtureFire {
         BoilingState b = BoilingState.at(model, spec.densityBasis(), p1, spec.composition(), Double.NaN, null);
         double l = b.latentHeatJPerKg();
         if (!(l > 0)) {
-            throw new org.ventcase.common.NoSolutionException("fluid.composition", String.format(Locale.ROOT,
+            throw new org.ventcase.common.NoSolutionException("fluid.composition", String.format(Locale.US,
                     "the latent heat at the bubble point (%.4g J/kg) is not positive: the liquid is at or near its "
                             + "critical point at P1; use the near-critical fire scenario", l));
         }
@@ -76,15 +76,15 @@ public final class MixtureFire {
                 .equation("A_wetted = wetted inside area below min(liquid level, fire height - elevation)")
                 .source("API Std 521 / ISO 23251: wetted surface within 7.6 m (25 ft) of the base of the fire")
                 .in("Vessel", in.vessel().describe())
-                .out("Liquid volume", String.format(Locale.ROOT, "%.3f m3", vs.liquidVolume()))
-                .out("Fire-exposed wetted area", String.format(Locale.ROOT, "%.3f m2", vs.fire().area()))
+                .out("Liquid volume", String.format(Locale.US, "%.3f m3", vs.liquidVolume()))
+                .out("Fire-exposed wetted area", String.format(Locale.US, "%.3f m2", vs.fire().area()))
                 .note(vs.fire().ruleApplied()).build());
 
         HeatInputResult heat = FireHeatInput.wettedVessel(vs.fire().area(), in.environment().f(), in.fireFighting());
         warnings.addAll(heat.warnings());
         in.environment().warning().ifPresent(warnings::add);
         trace.add(TraceStep.of("Fire heat input").equation(heat.equation()).source(heat.source())
-                .out("Q", String.format(Locale.ROOT, "%.1f kW", heat.heatW() / 1e3)).build());
+                .out("Q", String.format(Locale.US, "%.1f kW", heat.heatW() / 1e3)).build());
 
         Load ld = load(model, spec, p1, heat.heatW(), in.subtractDisplacedVapour());
         BoilingState b = ld.state();
@@ -98,7 +98,7 @@ public final class MixtureFire {
             tcMix += x[i] * spec.components().get(i).tcK();
         }
         if (b.temperatureK() / tcMix > 0.9) {
-            warnings.add(String.format(Locale.ROOT, "Relieving temperature is at %.3f of the liquid's pseudo-critical "
+            warnings.add(String.format(Locale.US, "Relieving temperature is at %.3f of the liquid's pseudo-critical "
                     + "temperature (Kay's rule): near the critical point the latent heat falls quickly and the fire "
                     + "load rises; a transient method (the near-critical scenario or boil-off simulation) may be needed.",
                     b.temperatureK() / tcMix));
@@ -110,20 +110,20 @@ public final class MixtureFire {
                 .in("Liquid composition x", ScenarioSupport.fractions(x))
                 .out("Relieving temperature T1", ScenarioSupport.kelvinC(b.temperatureK()))
                 .out("Incipient vapour y", ScenarioSupport.fractions(b.vapour()))
-                .out("H_L, H_V", String.format(Locale.ROOT, "%.1f, %.1f J/mol", b.hLiquidJmol(), b.hVapourJmol()))
-                .out("Liquid density", String.format(Locale.ROOT, "%.2f kg/m3 (%s)", b.liquidProps().density(),
+                .out("H_L, H_V", String.format(Locale.US, "%.1f, %.1f J/mol", b.hLiquidJmol(), b.hVapourJmol()))
+                .out("Liquid density", String.format(Locale.US, "%.2f kg/m3 (%s)", b.liquidProps().density(),
                         b.liquidProps().densityBasis().label()))
-                .out("Vapour density", String.format(Locale.ROOT, "%.3f kg/m3", b.vapourProps().density()))
-                .out("Latent heat (EOS)", String.format(Locale.ROOT, "%.2f kJ/kg", ld.latent().computedJPerKg() / 1e3))
-                .out("Latent heat used", String.format(Locale.ROOT, "%.2f kJ/kg", ld.latent().usedJPerKg() / 1e3))
-                .out("Liquid inventory at P1", String.format(Locale.ROOT, "%.0f kg", liquidMass)).build());
+                .out("Vapour density", String.format(Locale.US, "%.3f kg/m3", b.vapourProps().density()))
+                .out("Latent heat (EOS)", String.format(Locale.US, "%.2f kJ/kg", ld.latent().computedJPerKg() / 1e3))
+                .out("Latent heat used", String.format(Locale.US, "%.2f kJ/kg", ld.latent().usedJPerKg() / 1e3))
+                .out("Liquid inventory at P1", String.format(Locale.US, "%.0f kg", liquidMass)).build());
         trace.add(TraceStep.of("Relief load")
                 .equation(in.subtractDisplacedVapour() ? "W = Q / L x (1 - rho_V / rho_L)" : "W = Q / L")
                 .source("API Std 521 / ISO 23251 relief rate from heat input"
                         + (in.subtractDisplacedVapour() ? ", with the vapour-displacement refinement" : ""))
-                .in("1 - rho_V/rho_L", String.format(Locale.ROOT, "%.4f%s", ld.displacement(),
+                .in("1 - rho_V/rho_L", String.format(Locale.US, "%.4f%s", ld.displacement(),
                         in.subtractDisplacedVapour() ? "" : " (not applied)"))
-                .out("W", String.format(Locale.ROOT, "%.1f kg/h", ld.w() * 3600)).build());
+                .out("W", String.format(Locale.US, "%.1f kg/h", ld.w() * 3600)).build());
 
         RelievedFluid vap = RelievedFluid.of(RelievedFluid.Phase.VAPOUR, spec, b.vapourProps(),
                 OptionalDouble.of(ld.latent().usedJPerKg()), LATENT_HEAT_DEFINITION, OptionalDouble.empty(), "");

@@ -48,7 +48,7 @@ public record MixtureSpec(EosVariant eos, List<Component> components, double[][]
             sum += composition[i];
         }
         if (!(Math.abs(sum - 1) <= 1e-6)) {
-            throw InvalidInputException.invalid("fluid.composition", String.format(Locale.ROOT, "sum %.9g", sum),
+            throw InvalidInputException.invalid("fluid.composition", String.format(Locale.US, "sum %.9g", sum),
                     "mole fractions must sum to 1 within 1e-6");
         }
         double[] z = new double[n];

@@ -71,7 +71,7 @@ public final class NearCriticalFire {
             tOpen = tLo;
         } else {
             if (state(model, flash, z, tHi, p1, basis).v < v0) {
-                throw new NoSolutionException("nearCritical.finalTemperature", String.format(Locale.ROOT,
+                throw new NoSolutionException("nearCritical.finalTemperature", String.format(Locale.US,
                         "heated at constant volume, the contents do not reach P1 = %.1f kPa abs below %.2f K; "
                                 + "raise the final temperature", p1 / 1e3, tHi));
             }
@@ -121,7 +121,7 @@ public final class NearCriticalFire {
             }
             prevRate = rate;
             if (!(w > 0)) {
-                throw new NoSolutionException("nearCritical.initialTemperature", String.format(Locale.ROOT,
+                throw new NoSolutionException("nearCritical.initialTemperature", String.format(Locale.US,
                         "at %.2f K the contents do not expand on heating at P1 ((dv/dh)_P = %.3g): no relief load "
                                 + "by this method", temp, dvdh));
             }
@@ -160,7 +160,7 @@ public final class NearCriticalFire {
             warnings.add("The largest required area is at the final temperature: extend the heat-up range.");
         }
         if (gov != maxW) {
-            warnings.add(String.format(Locale.ROOT, "The largest mass rate (%.1f kg/h at %.2f K) is not the sizing "
+            warnings.add(String.format(Locale.US, "The largest mass rate (%.1f kg/h at %.2f K) is not the sizing "
                     + "point: the largest required area is at %.2f K (%.1f kg/h).",
                     curve.get(maxW).massFlowKgPerS() * 3600, curve.get(maxW).temperatureK(),
                     curve.get(gov).temperatureK(), curve.get(gov).massFlowKgPerS() * 3600));
@@ -174,10 +174,10 @@ public final class NearCriticalFire {
                 .in("Initial state T0, P0", ScenarioSupport.kelvinC(in.initialTemperatureK()) + ", "
                         + ScenarioSupport.kpa(in.initialPressurePa()) + " abs")
                 .in("Composition", ScenarioSupport.fractions(z))
-                .in("Vessel volume V", String.format(Locale.ROOT, "%.3f m3", in.vesselVolumeM3()))
+                .in("Vessel volume V", String.format(Locale.US, "%.3f m3", in.vesselVolumeM3()))
                 .in("P1", ScenarioSupport.kpa(p1) + " abs")
-                .out("Specific volume v0", String.format(Locale.ROOT, "%.5g m3/kg", v0))
-                .out("Contents' mass", String.format(Locale.ROOT, "%.0f kg", m0))
+                .out("Specific volume v0", String.format(Locale.US, "%.5g m3/kg", v0))
+                .out("Contents' mass", String.format(Locale.US, "%.0f kg", m0))
                 .out("Opening temperature", ScenarioSupport.kelvinC(tOpen)).build());
         NearCriticalFireResult.Point gp = curve.get(gov);
         NearCriticalFireResult.Point mp = curve.get(maxW);
@@ -186,13 +186,13 @@ public final class NearCriticalFire {
                         + "dt = V dh [v + (dv/dh)_P (h_out - h)] / (v^2 Q)")
                 .source("API Std 521 / ISO 23251: relief of supercritical fluids from the change of specific volume "
                         + "with heat input; balance derived in DEVELOPERS.md")
-                .in("Heat input Q", String.format(Locale.ROOT, "%.1f kW (constant)", in.heatW() / 1e3))
+                .in("Heat input Q", String.format(Locale.US, "%.1f kW (constant)", in.heatW() / 1e3))
                 .in("Temperature range", ScenarioSupport.kelvinC(tOpen) + " to "
                         + ScenarioSupport.kelvinC(in.finalTemperatureK()))
                 .in("Steps", Integer.toString(in.steps()))
-                .out("Largest mass rate", String.format(Locale.ROOT, "%.1f kg/h at %.2f K", mp.massFlowKgPerS() * 3600,
+                .out("Largest mass rate", String.format(Locale.US, "%.1f kg/h at %.2f K", mp.massFlowKgPerS() * 3600,
                         mp.temperatureK()))
-                .out("Largest required area (sizing point)", String.format(Locale.ROOT, "%.1f mm2 at %.2f K, "
+                .out("Largest required area (sizing point)", String.format(Locale.US, "%.1f mm2 at %.2f K, "
                         + "%.1f kg/h, %.0f s after opening", gp.requiredAreaM2() * 1e6, gp.temperatureK(),
                         gp.massFlowKgPerS() * 3600, gp.timeS()))
                 .out("Two-phase steps", anyTwoPhase ? "yes (vapour taken to leave)" : "none").build());

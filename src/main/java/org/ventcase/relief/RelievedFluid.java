@@ -97,7 +97,7 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
     static RelievedFluid of(Phase phase, MixtureSpec spec, FluidProperties fp, OptionalDouble latent,
                             String latentDefinition, OptionalDouble viscosity, String viscositySource) {
         List<String> w = new ArrayList<>(fp.warnings());
-        String prov = String.format(Locale.ROOT, "%s (%s); %s; density basis %s; ideal-gas Cp: %s",
+        String prov = String.format(Locale.US, "%s (%s); %s; density basis %s; ideal-gas Cp: %s",
                 spec.eos().displayName(), spec.eos().citation(), fp.rootReason(), fp.densityBasis().label(),
                 cpSources(spec, fp.composition()));
         return new RelievedFluid(phase, fp.temperatureK(), fp.pressurePa(), spec.names(), fp.composition(),
@@ -120,23 +120,23 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
     public List<String> table() {
         List<String> out = new ArrayList<>();
         out.add("Relieved phase: " + phase.label());
-        out.add(String.format(Locale.ROOT, "T = %.2f K (%.2f C)", temperatureK, temperatureK - 273.15));
-        out.add(String.format(Locale.ROOT, "P = %.1f kPa abs", pressurePa / 1e3));
+        out.add(String.format(Locale.US, "T = %.2f K (%.2f C)", temperatureK, temperatureK - 273.15));
+        out.add(String.format(Locale.US, "P = %.1f kPa abs", pressurePa / 1e3));
         StringBuilder c = new StringBuilder("Composition (mole fractions): ");
         for (int i = 0; i < composition.length; i++) {
             c.append(i == 0 ? "" : ", ").append(componentNames.get(i)).append(' ')
-                    .append(String.format(Locale.ROOT, "%.5f", composition[i]));
+                    .append(String.format(Locale.US, "%.5f", composition[i]));
         }
         out.add(c.toString());
-        out.add(String.format(Locale.ROOT, "M = %.3f kg/kmol", molarMass));
-        out.add(String.format(Locale.ROOT, "Z = %.5f (cubic root; real roots of the cubic: %s)", z,
+        out.add(String.format(Locale.US, "M = %.3f kg/kmol", molarMass));
+        out.add(String.format(Locale.US, "Z = %.5f (cubic root; real roots of the cubic: %s)", z,
                 realRootsText()));
-        out.add(String.format(Locale.ROOT, "Density = %.4g kg/m3 (%s basis)", density, densityBasis.label()));
-        out.add(String.format(Locale.ROOT, "k = Cp/Cv ideal gas = %.4f", kIdeal));
-        out.add(String.format(Locale.ROOT, "Real-fluid isentropic exponent = %.4f", isentropicExponent));
-        latentHeatJPerKg.ifPresent(l -> out.add(String.format(Locale.ROOT, "Latent heat = %.2f kJ/kg (%s)", l / 1e3,
+        out.add(String.format(Locale.US, "Density = %.4g kg/m3 (%s basis)", density, densityBasis.label()));
+        out.add(String.format(Locale.US, "k = Cp/Cv ideal gas = %.4f", kIdeal));
+        out.add(String.format(Locale.US, "Real-fluid isentropic exponent = %.4f", isentropicExponent));
+        latentHeatJPerKg.ifPresent(l -> out.add(String.format(Locale.US, "Latent heat = %.2f kJ/kg (%s)", l / 1e3,
                 latentHeatDefinition)));
-        viscosityPaS.ifPresent(v -> out.add(String.format(Locale.ROOT, "Viscosity = %.4g mPa s (%s)", v * 1e3,
+        viscosityPaS.ifPresent(v -> out.add(String.format(Locale.US, "Viscosity = %.4g mPa s (%s)", v * 1e3,
                 viscositySource)));
         out.add("Model: " + provenance);
         return out;

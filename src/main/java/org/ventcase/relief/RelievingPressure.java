@@ -129,7 +129,7 @@ public final class RelievingPressure {
                             + "open before the vessel exceeds its allowable accumulated pressure");
         }
         double p1 = maxAccumulated + in.atmosphericPa();
-        String rule = String.format(Locale.ROOT,
+        String rule = String.format(Locale.US,
                 "Accumulation on MAWP (%s) = %s Pa; P1 = MAWP + accumulation + Patm = %s + %s + %s = %s Pa abs; "
                         + "overpressure above set = %s Pa (%.2f %% of set); %s",
                 accText, fmt(accumulation), fmt(mawp), fmt(accumulation), fmt(in.atmosphericPa()), fmt(p1),
@@ -139,10 +139,10 @@ public final class RelievingPressure {
     }
 
     private static String fmt(double v) {
-        return String.format(Locale.ROOT, "%.6g", v);
+        return String.format(Locale.US, "%.6g", v);
     }
 
     private static String pct(double f) {
-        return String.format(Locale.ROOT, "%.1f %%", 100 * f);
+        return String.format(Locale.US, "%.1f %%", 100 * f);
     }
 }

@@ -26,7 +26,7 @@ final class ScenarioSupport {
             sz.note(line);
         }
         return sz.out("Flow regime", gs.regime().name().toLowerCase(Locale.ROOT))
-                .out("Required area", String.format(Locale.ROOT, "%.1f mm2 (%.4f in2)", gs.areaMm2(),
+                .out("Required area", String.format(Locale.US, "%.1f mm2 (%.4f in2)", gs.areaMm2(),
                         gs.areaMm2() / 645.16)).build();
     }
 
@@ -48,24 +48,24 @@ final class ScenarioSupport {
         return TraceStep.of("Temperature after expansion to the back pressure").equation(e.equation())
                 .source("first law, steady adiabatic flow without work: isenthalpic (common practice)")
                 .out("T2", kelvinC(e.downstreamTemperatureK()))
-                .out("Vapour fraction after expansion", String.format(Locale.ROOT, "%.4f", e.vapourFraction()))
+                .out("Vapour fraction after expansion", String.format(Locale.US, "%.4f", e.vapourFraction()))
                 .out("Minimum design metal temperature", e.minimumDesignMetalTemperatureK().isPresent()
                         ? kelvinC(e.minimumDesignMetalTemperatureK().getAsDouble()) : "not given (no check)")
                 .build();
     }
 
     static String kpa(double pa) {
-        return String.format(Locale.ROOT, "%.1f kPa", pa / 1e3);
+        return String.format(Locale.US, "%.1f kPa", pa / 1e3);
     }
 
     static String kelvinC(double k) {
-        return String.format(Locale.ROOT, "%.2f K (%.2f C)", k, k - 273.15);
+        return String.format(Locale.US, "%.2f K (%.2f C)", k, k - 273.15);
     }
 
     static String fractions(double[] x) {
         StringBuilder sb = new StringBuilder();
         for (double v : x) {
-            sb.append(sb.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.4f", v));
+            sb.append(sb.length() == 0 ? "" : ", ").append(String.format(Locale.US, "%.4f", v));
         }
         return "[" + sb + "]";
     }

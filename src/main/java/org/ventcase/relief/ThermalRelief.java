@@ -52,7 +52,7 @@ public final class ThermalRelief {
         double c = fp.cp() / mkg;
         double rho = fp.density();
         if (!(alpha > 0) || !(c > 0)) {
-            throw new NoSolutionException("thermal.temperature", String.format(Locale.ROOT,
+            throw new NoSolutionException("thermal.temperature", String.format(Locale.US,
                     "the EOS liquid at %.2f K, %.1f kPa has alpha_v = %.3g 1/K and Cp = %.3g J/(kg K): no expansion "
                             + "relief by this method", t, p / 1e3, alpha, c));
         }
@@ -68,7 +68,7 @@ public final class ThermalRelief {
         }
         if (pb.isPresent() && pb.getAsDouble() > p) {
             vapourGoverns = true;
-            warnings.add(String.format(Locale.ROOT, "The liquid's bubble pressure at %.2f K is %.1f kPa abs, above the "
+            warnings.add(String.format(Locale.US, "The liquid's bubble pressure at %.2f K is %.1f kPa abs, above the "
                     + "relieving pressure %.1f kPa abs: the liquid boils, so vapour generation governs; size for "
                     + "vapour generation (API Std 521), not for thermal expansion.", t, pb.getAsDouble() / 1e3, p / 1e3));
         }
@@ -85,15 +85,15 @@ public final class ThermalRelief {
                 .equation("alpha_v = (1/v)(dv/dT)_P with (dv/dT)_P = (mu_JT Cp + v_cubic)/T; c = Cp / M; liquid root")
                 .source(spec.eos().displayName() + " (" + spec.eos().citation() + ")")
                 .in("T", ScenarioSupport.kelvinC(t)).in("P1", ScenarioSupport.kpa(p) + " abs")
-                .out("alpha_v", String.format(Locale.ROOT, "%.4g 1/K", alpha))
-                .out("c", String.format(Locale.ROOT, "%.1f J/(kg K)", c))
-                .out("rho", String.format(Locale.ROOT, "%.2f kg/m3 (%s)", rho, fp.densityBasis().label())).build());
+                .out("alpha_v", String.format(Locale.US, "%.4g 1/K", alpha))
+                .out("c", String.format(Locale.US, "%.1f J/(kg K)", c))
+                .out("rho", String.format(Locale.US, "%.2f kg/m3 (%s)", rho, fp.densityBasis().label())).build());
         trace.add(TraceStep.of("Thermal relief rate").equation("q = alpha_v phi / (rho c); W = rho q")
                 .source("API Std 521 / ISO 23251 hydraulic expansion, q = alpha_v phi / (1000 d c) with 1000 d = rho")
-                .in("Heat transfer rate phi", String.format(Locale.ROOT, "%.2f kW", in.heatW() / 1e3))
-                .out("q", String.format(Locale.ROOT, "%.4g m3/h", q * 3600))
-                .out("W", String.format(Locale.ROOT, "%.2f kg/h", q * rho * 3600))
-                .out("Check by the standard's form", String.format(Locale.ROOT, "%.4g m3/h", check * 3600)).build());
+                .in("Heat transfer rate phi", String.format(Locale.US, "%.2f kW", in.heatW() / 1e3))
+                .out("q", String.format(Locale.US, "%.4g m3/h", q * 3600))
+                .out("W", String.format(Locale.US, "%.2f kg/h", q * rho * 3600))
+                .out("Check by the standard's form", String.format(Locale.US, "%.4g m3/h", check * 3600)).build());
         trace.add(TraceStep.of("Does the liquid stay liquid at P1?")
                 .equation("bubble (vapour) pressure at T compared with P1")
                 .source(spec.eos().displayName())

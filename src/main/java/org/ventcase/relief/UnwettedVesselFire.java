@@ -67,7 +67,7 @@ public final class UnwettedVesselFire {
         double p1kPa = in.relievingPressurePa() / 1000.0;
         double wKgH = C_SI * Math.sqrt(in.molarMass() * p1kPa) * in.exposedAreaM2()
                 * Math.pow(in.wallTemperatureK() - t1, 1.25) / Math.pow(t1, 1.1506);
-        String eq = String.format(Locale.ROOT,
+        String eq = String.format(Locale.US,
                 "T1 = (P1/Pn) Tn = (%.6g/%.6g) x %.6g = %.6g K; W = 0.2772 sqrt(M P1) A' (Tw - T1)^1.25 / T1^1.1506 "
                         + "= 0.2772 sqrt(%.6g x %.6g) x %.6g x (%.6g - %.6g)^1.25 / %.6g^1.1506 = %.6g kg/h",
                 in.relievingPressurePa(), in.normalPressurePa(), in.normalTemperatureK(), t1, in.molarMass(), p1kPa,
@@ -115,8 +115,8 @@ public final class UnwettedVesselFire {
     private static void requireWallHotter(double wall, double t1) {
         InvalidInputException.requirePositive("fire.wallTemperature", wall, "");
         if (!(wall > t1)) {
-            throw InvalidInputException.invalid("fire.wallTemperature", String.format(Locale.ROOT, "%.6g", wall),
-                    "expected above the relieving temperature T1 = " + String.format(Locale.ROOT, "%.6g", t1)
+            throw InvalidInputException.invalid("fire.wallTemperature", String.format(Locale.US, "%.6g", wall),
+                    "expected above the relieving temperature T1 = " + String.format(Locale.US, "%.6g", t1)
                             + " (same unit); the method needs Tw > T1");
         }
     }

@@ -169,6 +169,13 @@ public final class CalculationSheet {
             if (f instanceof Figure.VesselSketch s) {
                 Figure.SketchLabels l = s.labels();
                 all.addAll(List.of(l.diameter(), l.length(), l.elevation(), l.level(), l.fireHeight(), l.fireArea()));
+            } else if (f instanceof Figure.BarChart b) {
+                all.add(b.valueLabel());
+                all.addAll(b.segmentLabels());
+                b.bars().forEach(x -> {
+                    all.add(x.label());
+                    all.add(x.note());
+                });
             } else if (f instanceof Figure.LineChart c) {
                 all.add(c.xLabel());
                 all.add(c.yLabel());
@@ -624,6 +631,9 @@ public final class CalculationSheet {
         // -------------------------------------------------------------- figures and method
 
         private float figureHeight(Figure f) {
+            if (f instanceof Figure.BarChart b) {
+                return Math.min(ChartDrawing.barChartHeight(b), top() - bottom() - 40);
+            }
             return f instanceof Figure.VesselSketch s ? VesselDrawing.preferredHeight(s, width) : 215f;
         }
 
@@ -636,6 +646,8 @@ public final class CalculationSheet {
                 VesselDrawing.draw(c, s, left, by, width, h);
             } else if (f instanceof Figure.LineChart ch) {
                 ChartDrawing.draw(c, ch, left, by, width, h);
+            } else if (f instanceof Figure.BarChart bc) {
+                ChartDrawing.drawBars(c, bc, left, by, width, h);
             }
             y = by - 6;
             paragraph("Figure " + n + ". " + f.caption(), regular, SMALL, PdfCanvas.MUTED, 0);

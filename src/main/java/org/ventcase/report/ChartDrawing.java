@@ -1,6 +1,7 @@
 package org.ventcase.report;
 
 import java.io.IOException;
+import java.util.List;
 import java.util.Locale;
 
 /**
@@ -206,5 +207,65 @@ final class ChartDrawing {
 
     private interface Mapper {
         float[] at(double x, double y);
+    }
+
+    /** Height a bar chart needs for its bars, points. */
+    static float barChartHeight(Figure.BarChart ch) {
+        return 44f + 15f * ch.bars().size() + 10f * ch.segmentLabels().size();
+    }
+
+    /** Draws a {@link Figure.BarChart}: category labels at the left, stacked bars, value axis below, legend. */
+    static void drawBars(PdfCanvas c, Figure.BarChart ch, float bx, float by, float bw, float bh) throws IOException {
+        double max = 0;
+        float labelWidth = 0;
+        for (Figure.Bar b : ch.bars()) {
+            max = Math.max(max, b.total());
+            labelWidth = Math.max(labelWidth, PdfCanvas.width(c.regular, TICK_SIZE, b.label()));
+        }
+        labelWidth = Math.min(labelWidth, bw * 0.35f);
+        Axis xa = Axis.nice(0, max > 0 ? max * 1.12 : 1, 6);
+        float legendH = 10f * ch.segmentLabels().size();
+        float px = bx + labelWidth + 8;
+        float py = by + 26 + legendH;
+        float pw = bw - (px - bx) - 8;
+        float ph = bh - 26 - legendH - 6;
+        for (double v = xa.lo(); v <= xa.hi() + xa.step() * 1e-6; v += xa.step()) {
+            float x = (float) (px + (v - xa.lo()) / (xa.hi() - xa.lo()) * pw);
+            c.line(x, py, x, py + ph, 0.25f, PdfCanvas.HAIRLINE);
+            c.line(x, py, x, py - 3, 0.5f, PdfCanvas.INK);
+            c.textCentre(xa.label(v), x, py - 11, c.regular, TICK_SIZE, PdfCanvas.INK);
+        }
+        c.strokeRect(px, py, pw, ph, 0.6f, PdfCanvas.INK);
+        c.textCentre(ch.valueLabel(), px + pw / 2, py - 22, c.regular, 7.5f, PdfCanvas.INK);
+        int n = ch.bars().size();
+        float slot = ph / n;
+        float barH = Math.min(10f, slot * 0.7f);
+        for (int i = 0; i < n; i++) {
+            Figure.Bar b = ch.bars().get(i);
+            float yc = py + ph - slot * (i + 0.5f);
+            List<String> label = PdfCanvas.wrap(b.label(), c.regular, TICK_SIZE, labelWidth);
+            c.textRight(label.isEmpty() ? "" : label.get(0) + (label.size() > 1 ? "…" : ""), px - 4, yc - 2.5f,
+                    c.regular, TICK_SIZE, PdfCanvas.INK);
+            double[] vs = b.values();
+            double acc = 0;
+            for (int k = 0; k < vs.length; k++) {
+                float x0 = (float) (px + acc / xa.hi() * pw);
+                acc += vs[k];
+                float x1 = (float) (px + acc / xa.hi() * pw);
+                if (x1 > x0) {
+                    c.fillRect(x0, yc - barH / 2, x1 - x0, barH, SERIES_COLOURS[k % SERIES_COLOURS.length]);
+                }
+            }
+            if (!b.note().isEmpty()) {
+                c.text(b.note(), (float) (px + acc / xa.hi() * pw) + 3, yc - 2.5f, c.regular, TICK_SIZE - 0.5f,
+                        PdfCanvas.MUTED);
+            }
+        }
+        float ly = by + legendH - 8;
+        for (int k = 0; k < ch.segmentLabels().size(); k++) {
+            c.fillRect(px, ly, 10, 6, SERIES_COLOURS[k % SERIES_COLOURS.length]);
+            c.text(ch.segmentLabels().get(k), px + 14, ly, c.regular, TICK_SIZE, PdfCanvas.INK);
+            ly -= 10;
+        }
     }
 }

@@ -5,8 +5,8 @@ import java.util.Objects;
 
 import org.ventcase.vessel.Vessel;
 
-/** A figure on the sheet: a vessel sketch or a line chart. Numbers are for drawing; labels are formatted text. */
-public sealed interface Figure permits Figure.VesselSketch, Figure.LineChart {
+/** A figure on the sheet: a vessel sketch, a line chart or a bar chart. Numbers are for drawing; labels are formatted text. */
+public sealed interface Figure permits Figure.VesselSketch, Figure.LineChart, Figure.BarChart {
 
     /** Caption printed under the figure. */
     String caption();
@@ -139,6 +139,66 @@ public sealed interface Figure permits Figure.VesselSketch, Figure.LineChart {
             if (!Double.isFinite(x) || !Double.isFinite(y)) {
                 throw new IllegalArgumentException(label + ": marker not finite");
             }
+        }
+    }
+
+    /**
+     * A horizontal bar chart: one bar per category, each bar made of stacked segments (e.g. liquid
+     * and vapour), values &gt;= 0 in display units.
+     *
+     * @param caption       caption
+     * @param valueLabel    value-axis title with unit
+     * @param segmentLabels legend text per segment, in stacking order
+     * @param bars          the bars, drawn top to bottom
+     */
+    record BarChart(String caption, String valueLabel, List<String> segmentLabels, List<Bar> bars) implements Figure {
+        public BarChart {
+            Objects.requireNonNull(caption, "caption");
+            Objects.requireNonNull(valueLabel, "valueLabel");
+            segmentLabels = List.copyOf(segmentLabels);
+            bars = List.copyOf(bars);
+            if (bars.isEmpty() || segmentLabels.isEmpty()) {
+                throw new IllegalArgumentException("a bar chart needs at least one bar and one segment");
+            }
+            for (Bar b : bars) {
+                if (b.values().length != segmentLabels.size()) {
+                    throw new IllegalArgumentException(b.label() + ": one value per segment is needed");
+                }
+            }
+        }
+    }
+
+    /**
+     * One bar.
+     *
+     * @param label  category text at the left of the bar
+     * @param values one value per segment, each finite and &gt;= 0
+     * @param note   text printed at the end of the bar (e.g. the total), may be empty
+     */
+    record Bar(String label, double[] values, String note) {
+        public Bar {
+            Objects.requireNonNull(label, "label");
+            Objects.requireNonNull(note, "note");
+            values = values.clone();
+            for (double v : values) {
+                if (!Double.isFinite(v) || v < 0) {
+                    throw new IllegalArgumentException(label + ": bar values must be finite and >= 0");
+                }
+            }
+        }
+
+        @Override
+        public double[] values() {
+            return values.clone();
+        }
+
+        /** Sum of the segments. */
+        public double total() {
+            double t = 0;
+            for (double v : values) {
+                t += v;
+            }
+            return t;
         }
     }
 }

@@ -108,7 +108,7 @@ public interface AlphaFunction {
 
         @Override
         public String describe() {
-            return String.format(java.util.Locale.ROOT, "Soave form, m = %.5f (%s)", m, correlation.citation());
+            return String.format(java.util.Locale.US, "Soave form, m = %.5f (%s)", m, correlation.citation());
         }
     }
 }

@@ -44,7 +44,7 @@ public record Composition(List<Component> components, double[] fractions) {
             sum += fractions[i];
         }
         if (!(Math.abs(sum - 1.0) <= SUM_TOLERANCE)) {
-            throw InvalidInputException.invalid("composition", String.format(Locale.ROOT, "sum %.9g", sum),
+            throw InvalidInputException.invalid("composition", String.format(Locale.US, "sum %.9g", sum),
                     "mole fractions must sum to 1 within 1e-6");
         }
         double[] x = new double[fractions.length];
@@ -189,7 +189,7 @@ public record Composition(List<Component> components, double[] fractions) {
         StringBuilder sb = new StringBuilder();
         for (int i = 0; i < fractions.length; i++) {
             sb.append(i == 0 ? "" : ",").append(components.get(i).name()).append(':')
-                    .append(String.format(Locale.ROOT, "%.6g", fractions[i]));
+                    .append(String.format(Locale.US, "%.6g", fractions[i]));
         }
         return sb.toString();
     }

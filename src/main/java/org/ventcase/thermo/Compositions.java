@@ -87,7 +87,7 @@ public final class Compositions {
             throw InvalidInputException.invalid(field, text, "the fractions' sum is not finite");
         }
         if (!normalize && !(Math.abs(sum - 1.0) <= Composition.SUM_TOLERANCE)) {
-            throw InvalidInputException.invalid(field, text, String.format(Locale.ROOT,
+            throw InvalidInputException.invalid(field, text, String.format(Locale.US,
                     "the mole fractions sum to %.9g; they must sum to 1 within 1e-6 (or ask for normalisation)", sum));
         }
         double[] x = new double[values.size()];

@@ -631,7 +631,7 @@ public final class CubicModel {
             sum += x[i];
         }
         if (!(Math.abs(sum - 1.0) <= 1e-6)) {
-            throw InvalidInputException.invalid("composition", String.format(Locale.ROOT, "sum %.9g", sum),
+            throw InvalidInputException.invalid("composition", String.format(Locale.US, "sum %.9g", sum),
                     "mole fractions must sum to 1 within 1e-6");
         }
         double[] out = new double[x.length];
@@ -704,7 +704,7 @@ public final class CubicModel {
         for (int i = 0; i < x.length; i++) {
             IdealGasCp c = components.get(i).cp();
             if (x[i] > 0 && !c.inRange(t)) {
-                warnings.add(String.format(Locale.ROOT,
+                warnings.add(String.format(Locale.US,
                         "%s: %.2f K is outside the ideal-gas Cp correlation's range %.0f-%.0f K; Cp, Cv, k and "
                                 + "speed of sound are extrapolated.", components.get(i).name(), t, c.tMinK(), c.tMaxK()));
             }

@@ -70,7 +70,7 @@ public final class PureSaturation {
         double tc = component.tcK();
         double pc = component.pcPa();
         if (p >= pc) {
-            throw new NoSolutionException("pressure", String.format(Locale.ROOT,
+            throw new NoSolutionException("pressure", String.format(Locale.US,
                     "%.6g Pa is at or above the critical pressure of %s (Pc = %.6g Pa): there is no saturation; "
                             + "the fluid is a single phase", p, component.name(), pc));
         }
@@ -78,14 +78,14 @@ public final class PureSaturation {
         double xHi = 1.0 / (MIN_TR * tc);
         Psat top = solvePressure(MAX_TR * tc);
         if (p > top.p) {
-            throw new NoSolutionException("pressure", String.format(Locale.ROOT,
+            throw new NoSolutionException("pressure", String.format(Locale.US,
                     "%.6g Pa is above the saturation pressure at Tr = %.4f (%.6g Pa): within %.3g %% of the critical "
                             + "pressure liquid and vapour are not distinct enough to compute; treat the fluid as near-critical",
                     p, MAX_TR, top.p, 100 * (pc - p) / pc));
         }
         Psat bottom = solvePressure(MIN_TR * tc);
         if (p < bottom.p) {
-            throw new NoSolutionException("pressure", String.format(Locale.ROOT,
+            throw new NoSolutionException("pressure", String.format(Locale.US,
                     "%.6g Pa is below the saturation pressure at Tr = %.2f (%.6g Pa), the lowest temperature "
                             + "the equation of state is used for", p, MIN_TR, bottom.p));
         }
@@ -124,7 +124,7 @@ public final class PureSaturation {
             x = xn;
         }
         throw new ConvergenceException("Tsat(P) Newton in 1/T", MAX_ITER, Double.NaN,
-                String.format(Locale.ROOT, "%s at %.6g Pa, bracket T = [%.6f, %.6f] K", component.name(), p,
+                String.format(Locale.US, "%s at %.6g Pa, bracket T = [%.6f, %.6f] K", component.name(), p,
                         1 / hi, 1 / lo));
     }
 
@@ -136,18 +136,18 @@ public final class PureSaturation {
         double tc = component.tcK();
         double tr = t / tc;
         if (tr >= 1.0) {
-            throw new NoSolutionException("temperature", String.format(Locale.ROOT,
+            throw new NoSolutionException("temperature", String.format(Locale.US,
                     "%.6g K is at or above the critical temperature of %s (Tc = %.6g K): there is no saturation; "
                             + "the fluid is supercritical", t, component.name(), tc));
         }
         if (tr > MAX_TR * (1 + 1e-12)) {
-            throw new NoSolutionException("temperature", String.format(Locale.ROOT,
+            throw new NoSolutionException("temperature", String.format(Locale.US,
                     "%.6g K is within %.3g K of the critical temperature of %s (Tc = %.6g K; Tr = %.6f > %.4f): "
                             + "liquid and vapour are not distinct enough to compute; treat the fluid as near-critical",
                     t, tc - t, component.name(), tc, tr, MAX_TR));
         }
         if (tr < MIN_TR * (1 - 1e-12)) {
-            throw new NoSolutionException("temperature", String.format(Locale.ROOT,
+            throw new NoSolutionException("temperature", String.format(Locale.US,
                     "%.6g K is below Tr = %.2f for %s: below the range the equation of state is used for", t,
                     MIN_TR, component.name()));
         }
@@ -199,7 +199,7 @@ public final class PureSaturation {
             lnP = next;
         }
         throw new ConvergenceException("Psat(T) equal fugacity", MAX_ITER, g,
-                String.format(Locale.ROOT, "%s at %.6f K, bracket P = [%.6g, %.6g] Pa", component.name(), t,
+                String.format(Locale.US, "%s at %.6f K, bracket P = [%.6g, %.6g] Pa", component.name(), t,
                         Math.exp(lnLo), Math.exp(lnHi)));
     }
 
@@ -278,12 +278,12 @@ public final class PureSaturation {
         }
         double tr = t / component.tcK();
         if (tr > 0.95) {
-            warnings.add(String.format(Locale.ROOT,
+            warnings.add(String.format(Locale.US,
                     "Tr = %.4f: near the critical point the latent heat is small and changes fast with temperature, "
                             + "and cubic-equation liquid densities are least accurate.", tr));
         }
         if (!component.cp().inRange(t)) {
-            warnings.add(String.format(Locale.ROOT, "%.2f K is outside the ideal-gas Cp range of %s (%.0f-%.0f K).", t,
+            warnings.add(String.format(Locale.US, "%.2f K is outside the ideal-gas Cp range of %s (%.0f-%.0f K).", t,
                     component.name(), component.cp().tMinK(), component.cp().tMaxK()));
         }
         SaturationResult.PhaseState liq = new SaturationResult.PhaseState(s.zL, vl, vl - c, mw / 1e3 / (vl - c), used,
@@ -293,7 +293,7 @@ public final class PureSaturation {
         double rackett = rackettDensity(component, t);
         double dev = liq.density() / rackett - 1.0;
         if (Math.abs(dev) > RACKETT_WARNING) {
-            warnings.add(String.format(Locale.ROOT,
+            warnings.add(String.format(Locale.US,
                     "The %s liquid density (%.4g kg/m3) differs from the Rackett correlation (%.4g kg/m3, Z_RA from "
                             + "%s) by %+.1f %%: a liquid inventory on this basis may be %s; compare the bases before "
                             + "relying on it.", used.label(), liq.density(), rackett, component.rackettSource(), 100 * dev,

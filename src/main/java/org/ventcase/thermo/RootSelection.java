@@ -21,19 +21,19 @@ public record RootSelection(double z, CubicRoots roots, PhaseRequest request, bo
     /** One sentence: which root was chosen and why. */
     public String reason() {
         if (roots.count() == 1) {
-            return String.format(Locale.ROOT,
+            return String.format(Locale.US,
                     "one physical root Z = %.6g; it is %s (molar volume %s v* = (Zc/Omega_b) b)", z,
                     liquidLike ? "liquid-like" : "vapour-like", liquidLike ? "below" : "above");
         }
         switch (request) {
             case LIQUID:
-                return String.format(Locale.ROOT, "%s; liquid requested: smallest root Z = %.6g",
+                return String.format(Locale.US, "%s; liquid requested: smallest root Z = %.6g",
                         roots.rootCase().words(), z);
             case VAPOR:
-                return String.format(Locale.ROOT, "%s; vapour requested: largest root Z = %.6g",
+                return String.format(Locale.US, "%s; vapour requested: largest root Z = %.6g",
                         roots.rootCase().words(), z);
             default:
-                return String.format(Locale.ROOT,
+                return String.format(Locale.US,
                         "%s; stable root by lowest Gibbs energy: G^R/RT = %.6g at Z = %.6g (liquid-like), "
                                 + "%.6g at Z = %.6g (vapour-like); chose %s",
                         roots.rootCase().words(), gLiquid, roots.smallest(), gVapor, roots.largest(),

@@ -46,6 +46,9 @@ class LayeringTest {
             // the reviewer's cross-check is domain-level: it may use calc and the lower domain packages
             Map.entry("review", List.of("org.ventcase.casefile", "org.ventcase.cli", "org.ventcase.report",
                     "org.ventcase.ui", "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx")),
+            // the inventory audit is domain-level: no case files (JSON), sheet, command line or JavaFX
+            Map.entry("audit", List.of("org.ventcase.casefile", "org.ventcase.cli", "org.ventcase.report", "org.ventcase.ui",
+                    "com.fasterxml", "picocli", "org.apache.pdfbox", "javafx")),
             Map.entry("calc", List.of("org.ventcase.casefile", "org.ventcase.cli", "org.ventcase.report", "com.fasterxml",
                     "picocli", "org.apache.pdfbox", "javafx")));
 

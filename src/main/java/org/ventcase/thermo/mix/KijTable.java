@@ -269,7 +269,7 @@ public final class KijTable {
                     unused.remove(p);
                     InvalidInputException.requireInRange("fluid.kij[" + a + "," + b + "]", v, -0.99, 0.99, "");
                     s = "case override";
-                    warnings.add(String.format(Locale.ROOT, "k_ij(%s, %s) = %.4f set by the case (override)", a, b, v));
+                    warnings.add(String.format(Locale.US, "k_ij(%s, %s) = %.4f set by the case (override)", a, b, v));
                 } else {
                     Optional<Entry> e = fam.flatMap(f -> find(a, b, f));
                     if (e.isPresent()) {
@@ -278,7 +278,7 @@ public final class KijTable {
                     } else {
                         v = 0.0;
                         s = "default zero (no table entry)";
-                        warnings.add(String.format(Locale.ROOT, "k_ij(%s, %s) = 0 assumed: no %s value in the table",
+                        warnings.add(String.format(Locale.US, "k_ij(%s, %s) = 0 assumed: no %s value in the table",
                                 a, b, fam.map(Enum::name).orElse(variant.displayName())));
                     }
                 }

@@ -106,12 +106,12 @@ public final class PTFlash {
         }
         Split s = split(at, p, z, lnK);
         if (s == null) {
-            throw new ConvergenceException("PT flash", 0, Double.NaN, String.format(Locale.ROOT,
+            throw new ConvergenceException("PT flash", 0, Double.NaN, String.format(Locale.US,
                     "the stability test found the feed unstable (tm = %.3g, trial %s) but the phase split collapsed to "
                             + "the trivial solution at T = %.6g K, P = %.6g Pa", stab.minimumTpd(), stab.trial(), t, p));
         }
         if (!(s.beta > 0 && s.beta < 1)) {
-            warnings.add(String.format(Locale.ROOT,
+            warnings.add(String.format(Locale.US,
                     "the phase split converged to a vapour fraction of %.6g outside (0, 1) although the stability test "
                             + "found the feed unstable; reported as a single phase", s.beta));
             return singlePhase(t, p, z, basis, stab, warnings, s.ss, s.newton, "negative flash: single phase");
@@ -276,7 +276,7 @@ public final class PTFlash {
             }
         }
         throw new ConvergenceException("PT flash successive substitution", s.ss, err,
-                String.format(Locale.ROOT, "T = %.6g K, P = %.6g Pa, vapour fraction outside (0, 1)", t, p));
+                String.format(Locale.US, "T = %.6g K, P = %.6g Pa, vapour fraction outside (0, 1)", t, p));
     }
 
     static void compositions(double[] z, double[] k, double beta, double[] x, double[] y) {
@@ -415,7 +415,7 @@ public final class PTFlash {
             }
         }
         throw new ConvergenceException("PT flash Newton on vapour moles", s.newton, err,
-                String.format(Locale.ROOT, "T = %.6g K, P = %.6g Pa after %d substitution steps", t, p, s.ss));
+                String.format(Locale.US, "T = %.6g K, P = %.6g Pa after %d substitution steps", t, p, s.ss));
     }
 
     private double gibbsOf(CubicModel.AtTemperature at, double p, double[] z, double[] v, double[] y, double[] lnPhi) {
@@ -497,7 +497,7 @@ public final class PTFlash {
             sk += z[i] * lk * lk;
         }
         if (sk < 1e-3) {
-            warnings.add(String.format(Locale.ROOT, "near-critical split: sum z_i (ln K_i)^2 = %.3g; the phases are "
+            warnings.add(String.format(Locale.US, "near-critical split: sum z_i (ln K_i)^2 = %.3g; the phases are "
                     + "nearly alike and their properties change fast with T and P", sk));
         }
         cpRangeWarnings(t, z, warnings);
@@ -559,7 +559,7 @@ public final class PTFlash {
         for (int i = 0; i < z.length; i++) {
             IdealGasCp c = model.components().get(i).cp();
             if (z[i] > 0 && !c.inRange(t)) {
-                addOnce(warnings, String.format(Locale.ROOT,
+                addOnce(warnings, String.format(Locale.US,
                         "%s: %.2f K is outside the ideal-gas Cp correlation's range %.0f-%.0f K; enthalpy and entropy "
                                 + "are extrapolated", model.components().get(i).name(), t, c.tMinK(), c.tMaxK()));
             }

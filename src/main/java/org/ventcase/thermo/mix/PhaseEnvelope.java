@@ -215,7 +215,7 @@ public final class PhaseEnvelope {
                 }
             }
             if (!ok) {
-                warnings.add(String.format(Locale.ROOT, "tracing stopped early at T = %.4g K, P = %.6g Pa: Newton did "
+                warnings.add(String.format(Locale.US, "tracing stopped early at T = %.4g K, P = %.6g Pa: Newton did "
                         + "not converge with the step reduced 8 times", Math.exp(x[n]), Math.exp(x[n + 1])));
                 break;
             }

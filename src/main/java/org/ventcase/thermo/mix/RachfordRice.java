@@ -116,6 +116,6 @@ public final class RachfordRice {
             beta = next;
         }
         throw new ConvergenceException("Rachford-Rice Newton/bisection", MAX_ITER, residual(z, k, beta),
-                String.format(Locale.ROOT, "bracket [%.17g, %.17g]", lo, hi));
+                String.format(Locale.US, "bracket [%.17g, %.17g]", lo, hi));
     }
 }

@@ -183,11 +183,11 @@ public final class SaturationPoints {
             }
             f = Math.log(sum);
             if (sk < 1e-6) {
-                throw new NoSolutionException(pressureFree ? "temperature" : "pressure", String.format(Locale.ROOT,
+                throw new NoSolutionException(pressureFree ? "temperature" : "pressure", String.format(Locale.US,
                         "the %s-point iteration at %s collapsed to the trivial solution (K-values -> 1): there is no "
                                 + "%s point of this mixture there (above the %s, or too near the critical point)",
-                        kind.label(), pressureFree ? String.format(Locale.ROOT, "T = %.6g K", t)
-                                : String.format(Locale.ROOT, "P = %.6g Pa", p),
+                        kind.label(), pressureFree ? String.format(Locale.US, "T = %.6g K", t)
+                                : String.format(Locale.US, "P = %.6g Pa", p),
                         kind.label(), pressureFree ? "cricondentherm" : "cricondenbar"));
             }
             // incipient composition at the new K, for the derivative weights
@@ -214,7 +214,7 @@ public final class SaturationPoints {
                 step = Math.max(-0.5, Math.min(0.5, step));
                 p *= Math.exp(step);
                 if (!(p > 1.0 && p < 1e9)) {
-                    throw new NoSolutionException("pressure", String.format(Locale.ROOT,
+                    throw new NoSolutionException("pressure", String.format(Locale.US,
                             "the %s pressure at T = %.6g K left the range 1 Pa to 1 GPa: no %s point found",
                             kind.label(), t, kind.label()));
                 }
@@ -236,14 +236,14 @@ public final class SaturationPoints {
                 step = Math.max(-0.1 * t, Math.min(0.1 * t, step));
                 t += step;
                 if (!(t > 10 && t < 4000)) {
-                    throw new NoSolutionException("temperature", String.format(Locale.ROOT,
+                    throw new NoSolutionException("temperature", String.format(Locale.US,
                             "the %s temperature at P = %.6g Pa left the range 10-4000 K: no %s point found",
                             kind.label(), p, kind.label()));
                 }
             }
         }
         throw new ConvergenceException(kind.label() + "-point Newton with K updates", MAX_ITER, f,
-                String.format(Locale.ROOT, "T = %.6g K, P = %.6g Pa", t, p));
+                String.format(Locale.US, "T = %.6g K, P = %.6g Pa", t, p));
     }
 
     private SaturationPoint result(Kind kind, double t, double p, double[] z, double[] w, double[] lnK, int it) {
@@ -257,7 +257,7 @@ public final class SaturationPoints {
             sk += z[i] * lnK[i] * lnK[i];
         }
         if (sk < 1e-2) {
-            warnings.add(String.format(Locale.ROOT, "near-critical %s point: sum z_i (ln K_i)^2 = %.3g",
+            warnings.add(String.format(Locale.US, "near-critical %s point: sum z_i (ln K_i)^2 = %.3g",
                     kind.label(), sk));
         }
         return new SaturationPoint(kind, t, p, z, w, k, it, warnings);

@@ -69,6 +69,6 @@ public final class SinglePhaseLabel {
             rule = "T < Tc: the root is " + (liquidLikeRoot ? "liquid-like" : "vapour-like")
                     + " (v against v* = (Zc/Omega_b) b)";
         }
-        return new Label(l, String.format(Locale.ROOT, "%s; %s with Tc = %.2f K, Pc = %.6g Pa", rule, what, tc, pc));
+        return new Label(l, String.format(Locale.US, "%s; %s with Tc = %.2f K, Pc = %.6g Pa", rule, what, tc, pc));
     }
 }

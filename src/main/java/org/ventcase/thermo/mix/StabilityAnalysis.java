@@ -228,7 +228,7 @@ public final class StabilityAnalysis {
             zTrial = PhaseEval.lnPhi(model, at, p, w, PhaseRequest.STABLE, lnPhi);
             out.trivial = isTrivial(w, z);
             if (!converged && !out.trivial) {
-                out.warning = String.format(Locale.ROOT,
+                out.warning = String.format(Locale.US,
                         "stability trial '%s' stopped after %d successive-substitution and %d Newton iterations with "
                                 + "max |g| = %.3g (tm = %.6g); its tm is a bound, not a stationary value",
                         name, ssIt, nw.iterations, gmax, tm);

@@ -93,7 +93,7 @@ public final class StateFlash {
             fa = fb;
             tb = fb < 0 ? tb * 1.15 : tb / 1.15;
             if (tb < T_MIN || tb > T_MAX) {
-                throw new NoSolutionException(what, String.format(Locale.ROOT,
+                throw new NoSolutionException(what, String.format(Locale.US,
                         "no temperature between %.0f and %.0f K gives %s %.6g at P = %.6g Pa", T_MIN, T_MAX, what,
                         spec, p));
             }
@@ -117,7 +117,7 @@ public final class StateFlash {
             if (Math.abs(fc) <= 1e-9 * scale || Math.abs(tb - ta) <= 1e-10 * tc) {
                 if (Math.abs(fc) > 1e-6 * scale) {
                     List<String> w = new ArrayList<>(rc.warnings());
-                    w.add(String.format(Locale.ROOT, "%s flash ended on a bracket of width %.3g K with residual %.3g: "
+                    w.add(String.format(Locale.US, "%s flash ended on a bracket of width %.3g K with residual %.3g: "
                             + "the %s changes abruptly with T here", enthalpy ? "PH" : "PS", Math.abs(tb - ta), fc, what));
                     rc = copy(rc, w, evals, what);
                     return rc;
@@ -140,7 +140,7 @@ public final class StateFlash {
             }
         }
         throw new ConvergenceException((enthalpy ? "PH" : "PS") + " flash (Illinois on T)", MAX_ITER, fb,
-                String.format(Locale.ROOT, "bracket T = [%.6f, %.6f] K at P = %.6g Pa", ta, tb, p));
+                String.format(Locale.US, "bracket T = [%.6f, %.6f] K at P = %.6g Pa", ta, tb, p));
     }
 
     private FlashResult withOuter(FlashResult r, int evals, String what) {

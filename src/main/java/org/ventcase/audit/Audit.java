@@ -1,0 +1,179 @@
+package org.ventcase.audit;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicInteger;
+
+import org.ventcase.calc.CaseCalculation;
+import org.ventcase.calc.CaseResult;
+import org.ventcase.common.InvalidInputException;
+import org.ventcase.common.VentcaseException;
+import org.ventcase.device.OrificeSelection;
+import org.ventcase.inventory.Inventories;
+import org.ventcase.inventory.Inventory;
+import org.ventcase.vessel.LevelState;
+
+/**
+ * Runs an audit: every item through {@link CaseCalculation#run} (in parallel, one row a task,
+ * results kept in input order), then the totals and threshold checks ({@link AuditResult#of}).
+ * A row whose calculation throws is reported as an error row; it never stops the run.
+ */
+public final class Audit {
+
+    /** Receives progress from worker threads; must be thread-safe. */
+    @FunctionalInterface
+    public interface Progress {
+        /** {@code done} of {@code total} rows are computed. */
+        void update(int done, int total);
+
+        /** No progress reports. */
+        Progress NONE = (d, t) -> {
+        };
+    }
+
+    private Audit() {
+    }
+
+    /** Runs the audit on all available processors. */
+    public static AuditResult run(List<AuditItem> items, Thresholds thresholds) {
+        return run(items, thresholds, Runtime.getRuntime().availableProcessors(), Progress.NONE);
+    }
+
+    /**
+     * Runs the audit.
+     *
+     * @param threads  worker threads, at least 1 (1 computes in the calling thread)
+     * @param progress progress listener, called from the worker threads
+     */
+    public static AuditResult run(List<AuditItem> items, Thresholds thresholds, int threads, Progress progress) {
+        if (threads < 1) {
+            throw InvalidInputException.invalid("threads", threads, "expected at least 1");
+        }
+        int n = items.size();
+        VesselAudit[] out = new VesselAudit[n];
+        AtomicInteger next = new AtomicInteger();
+        AtomicInteger done = new AtomicInteger();
+        Runnable worker = () -> {
+            for (int i = next.getAndIncrement(); i < n; i = next.getAndIncrement()) {
+                out[i] = audit(items.get(i));
+                progress.update(done.incrementAndGet(), n);
+            }
+        };
+        int t = Math.min(threads, Math.max(1, n));
+        if (t == 1) {
+            worker.run();
+        } else {
+            ExecutorService pool = Executors.newFixedThreadPool(t, r -> {
+                Thread th = new Thread(r, "ventcase-audit");
+                th.setDaemon(true);
+                return th;
+            });
+            try {
+                List<Future<?>> fs = new ArrayList<>();
+                for (int k = 0; k < t; k++) {
+                    fs.add(pool.submit(worker));
+                }
+                for (Future<?> f : fs) {
+                    f.get();
+                }
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new IllegalStateException("audit interrupted", e);
+            } catch (ExecutionException e) {
+                throw new IllegalStateException("audit worker failed", e.getCause());
+            } finally {
+                pool.shutdownNow();
+            }
+        }
+        return AuditResult.of(Arrays.asList(out), thresholds);
+    }
+
+    /** The audit of one item (the case path, then the checks). Never throws for a bad row. */
+    public static VesselAudit audit(AuditItem it) {
+        if (it.error().isPresent()) {
+            return error(it, it.error().get());
+        }
+        CaseResult r;
+        try {
+            r = CaseCalculation.run(it.input().get());
+        } catch (InvalidInputException e) {
+            String field = it.source().endsWith(".json") ? e.field() : RegisterCases.column(e.field());
+            return error(it, new AuditError(field, e.value(), e.accepted()));
+        } catch (VentcaseException e) {
+            return error(it, new AuditError("calculation", "", e.getMessage()));
+        } catch (RuntimeException e) {
+            return error(it, new AuditError("calculation", "", "internal error, please report: " + e));
+        }
+        return from(it, r);
+    }
+
+    private static VesselAudit error(AuditItem it, AuditError e) {
+        return new VesselAudit(it.row(), it.source(), it.tag(), it.area(), it.fluid(), VesselAudit.Status.ERROR,
+                Optional.of(e), Optional.empty(), Optional.empty(), List.of(), List.of());
+    }
+
+    /** Maps a case result to the audit row. */
+    static VesselAudit from(AuditItem it, CaseResult r) {
+        Inventory inv = r.inventory();
+        LevelState v = r.vessel();
+        VesselAudit.Contents contents = new VesselAudit.Contents(inv.mode(), inv.temperatureK(), inv.pressurePa(),
+                v.totalVolume(), v.liquidVolume(), v.vapourVolume(), v.levelPercentVolume(), v.wettedArea(),
+                v.fire().area(), inv.liquidMassKg(), inv.vapourMassKg(), inv.totalMassKg(), inv.massPerComponentKg());
+        LinkedHashSet<String> warnings = new LinkedHashSet<>(it.notes());
+        for (CaseResult.CaseWarning w : r.warnings()) {
+            warnings.add(w.message());
+        }
+        List<VesselAudit.Flag> flags = new ArrayList<>();
+        if (inv.liquidFull().map(c -> c.fillsBeforeRelief()).orElse(false)) {
+            flags.add(VesselAudit.Flag.LIQUID_FULL);
+        }
+        if (inv.liquid().isPresent() && v.levelPercentVolume() > 100 - Inventories.MIN_OUTAGE_PERCENT) {
+            flags.add(VesselAudit.Flag.LOW_OUTAGE);
+        }
+        if (it.statedPressurePa().isPresent()) {
+            double stated = it.statedPressurePa().getAsDouble();
+            double rel = Math.abs(stated - inv.pressurePa()) / inv.pressurePa();
+            if (rel > RegisterCases.STATED_PRESSURE_TOLERANCE) {
+                flags.add(VesselAudit.Flag.PRESSURE_MISMATCH);
+                warnings.add(String.format(Locale.ROOT, "The register states %.1f kPa abs for saturated storage; the "
+                        + "bubble pressure at the storage temperature is %.1f kPa abs (%.0f %% apart). The inventory "
+                        + "uses the bubble pressure: check the temperature, the fluid or the storage mode.",
+                        stated / 1e3, inv.pressurePa() / 1e3, 100 * rel));
+            }
+        }
+        CaseResult.ScenarioResult s = r.scenarios().get(0);
+        if (s.failure().isPresent() || s.requiredAreaM2().isEmpty()) {
+            flags.add(VesselAudit.Flag.FIRE_NOT_COMPUTED);
+            String why = s.failure().orElse("the scenario gave no required area");
+            return new VesselAudit(it.row(), it.source(), it.tag(), it.area(), it.fluid(), VesselAudit.Status.PARTIAL,
+                    Optional.of(new AuditError("fire load", "", why)), Optional.of(contents), Optional.empty(), flags,
+                    new ArrayList<>(warnings));
+        }
+        double area = s.requiredAreaM2().getAsDouble();
+        double w = s.reliefLoadKgPerS().getAsDouble();
+        Optional<VesselAudit.InstalledCheck> check = Optional.empty();
+        if (it.installed().isPresent()) {
+            InstalledOrifice io = it.installed().get();
+            double a = io.areaM2();
+            boolean covers = a >= area;
+            check = Optional.of(new VesselAudit.InstalledCheck(io.designation(), a, 100 * (a / area - 1), covers));
+            if (!covers) {
+                flags.add(VesselAudit.Flag.INSTALLED_SHORT);
+            }
+        }
+        String selected = s.orifice().map(OrificeSelection::designation).orElse("");
+        VesselAudit.FireLoad fire = new VesselAudit.FireLoad(s.type().key(), s.relievingPressurePa().getAsDouble(),
+                s.relievingTemperatureK().getAsDouble(), s.heatInputW(), s.latentHeatJPerKg(), w, area, selected,
+                check);
+        return new VesselAudit(it.row(), it.source(), it.tag(), it.area(), it.fluid(), VesselAudit.Status.OK,
+                Optional.empty(), Optional.of(contents), Optional.of(fire), flags, new ArrayList<>(warnings));
+    }
+}

@@ -1,0 +1,139 @@
+package org.ventcase.audit;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.ventcase.common.InvalidInputException;
+
+/**
+ * A vessel register read from CSV: the header (columns and their header units) and one
+ * {@link RegisterRow} per data record, in file order. The file as a whole is refused only when no
+ * row could be read from it: no header, a required column missing from the header, a column named
+ * twice, a unit in the header that is not a unit, or a quote left open. Everything wrong with a
+ * single row is reported against that row.
+ *
+ * @param origin         the file name, for messages
+ * @param columns        the header's columns, in order (empty for a column the register does not know)
+ * @param headerUnits    the unit in square brackets per column position, or empty
+ * @param ignoredColumns header names that are not register columns (kept out of the calculation)
+ * @param rows           the data rows in file order
+ */
+public record Register(String origin, List<Optional<RegisterColumn>> columns, List<String> headerUnits,
+                       List<String> ignoredColumns, List<RegisterRow> rows) {
+
+    /** Largest register accepted, bytes (a register of 100,000 vessels is about 20 MB). */
+    public static final long MAX_BYTES = 64L * 1024 * 1024;
+
+    private static final Pattern HEADER = Pattern.compile("^([^\\[]*?)\\s*(?:\\[([^\\]]*)\\])?\\s*$");
+    private static final Pattern BARE_NUMBER = Pattern.compile(
+            "^[-+]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][-+]?\\d+)?$");
+
+    public Register {
+        columns = List.copyOf(columns);
+        headerUnits = List.copyOf(headerUnits);
+        ignoredColumns = List.copyOf(ignoredColumns);
+        rows = List.copyOf(rows);
+    }
+
+    /** Reads a register file (UTF-8). */
+    public static Register read(Path file) throws IOException {
+        if (Files.size(file) > MAX_BYTES) {
+            throw InvalidInputException.invalid(file.toString(), Files.size(file) + " bytes",
+                    "expected a register of at most " + MAX_BYTES + " bytes");
+        }
+        return parse(Files.readString(file, StandardCharsets.UTF_8), file.getFileName().toString());
+    }
+
+    /** Parses register text. */
+    public static Register parse(String text, String origin) {
+        List<Csv.Record> records = Csv.parse(text, origin);
+        if (records.isEmpty()) {
+            throw InvalidInputException.missing(origin, "expected a header line naming the columns, then one vessel a "
+                    + "line (docs/audit.md)");
+        }
+        Csv.Record head = records.get(0);
+        List<Optional<RegisterColumn>> cols = new ArrayList<>();
+        List<String> units = new ArrayList<>();
+        List<String> ignored = new ArrayList<>();
+        Map<RegisterColumn, Integer> seen = new EnumMap<>(RegisterColumn.class);
+        for (int i = 0; i < head.fields().size(); i++) {
+            String cell = head.fields().get(i);
+            Matcher m = HEADER.matcher(cell);
+            String name = m.matches() ? m.group(1) : cell;
+            String unit = m.matches() && m.group(2) != null ? m.group(2).strip() : "";
+            Optional<RegisterColumn> col = RegisterColumn.byName(name);
+            String where = origin + " line " + head.line() + ", column " + (i + 1);
+            if (col.isEmpty()) {
+                if (!name.isBlank()) {
+                    ignored.add(cell);
+                }
+            } else {
+                RegisterColumn c = col.get();
+                if (seen.containsKey(c)) {
+                    throw InvalidInputException.invalid(where, cell, "column '" + c.header() + "' is already column "
+                            + (seen.get(c) + 1) + "; name each column once");
+                }
+                seen.put(c, i);
+                if (!unit.isEmpty() && !c.takesUnit()) {
+                    throw InvalidInputException.invalid(where, cell, "column '" + c.header() + "' holds text, not a "
+                            + "quantity: leave out the unit in brackets");
+                }
+                if (!unit.isEmpty()) {
+                    RegisterCases.checkHeaderUnit(where, c, unit);
+                }
+            }
+            cols.add(col);
+            units.add(unit);
+        }
+        for (RegisterColumn c : RegisterColumn.values()) {
+            if (c.requiredInHeader() && !seen.containsKey(c)) {
+                throw InvalidInputException.missing(origin + " line " + head.line() + ": column '" + c.header() + "'",
+                        "expected a header with at least the columns " + requiredList() + " (docs/audit.md)");
+            }
+        }
+        List<RegisterRow> rows = new ArrayList<>();
+        for (int r = 1; r < records.size(); r++) {
+            Csv.Record rec = records.get(r);
+            Map<RegisterColumn, String> cells = new EnumMap<>(RegisterColumn.class);
+            for (int i = 0; i < Math.min(rec.fields().size(), cols.size()); i++) {
+                if (cols.get(i).isPresent()) {
+                    cells.put(cols.get(i).get(), withUnit(rec.fields().get(i), units.get(i)));
+                }
+            }
+            Optional<RegisterColumn> firstMissing = Optional.empty();
+            for (int i = rec.fields().size(); i < cols.size() && firstMissing.isEmpty(); i++) {
+                firstMissing = cols.get(i);
+            }
+            rows.add(new RegisterRow(rec.line(), cells, rec.fields().size(), cols.size(), firstMissing));
+        }
+        return new Register(origin, cols, units, ignored, rows);
+    }
+
+    private static String requiredList() {
+        List<String> out = new ArrayList<>();
+        for (RegisterColumn c : RegisterColumn.values()) {
+            if (c.requiredInHeader()) {
+                out.add(c.header());
+            }
+        }
+        return String.join(", ", out);
+    }
+
+    /** A bare number takes the header's unit; a cell with its own unit keeps it; text is left alone. */
+    static String withUnit(String cell, String headerUnit) {
+        String v = cell == null ? "" : cell.strip();
+        if (!headerUnit.isEmpty() && BARE_NUMBER.matcher(v).matches()) {
+            return v + " " + headerUnit;
+        }
+        return v;
+    }
+}
