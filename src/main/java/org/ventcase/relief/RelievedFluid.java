@@ -88,7 +88,7 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
     public String realRootsText() {
         StringBuilder sb = new StringBuilder();
         for (double r : realRoots) {
-            sb.append(sb.length() == 0 ? "" : ", ").append(String.format(Locale.ROOT, "%.5f", r));
+            sb.append(sb.length() == 0 ? "" : ", ").append(String.format(Locale.US, "%.5f", r));
         }
         return sb.toString();
     }

@@ -337,7 +337,7 @@ public final class Review {
         } else {
             hs.addAll(hints.of(q, c));
             if (within) {
-                hs.add(new ReviewResult.Hint("within-model-uncertainty", String.format(Locale.ROOT,
+                hs.add(new ReviewResult.Hint("within-model-uncertainty", String.format(Locale.US,
                         "The claimed value lies inside the range Ventcase gets with PR78 and SRK on the translated "
                                 + "and cubic density bases (%s to %s): the difference is within model uncertainty. "
                                 + "Look at which equation of state and density basis the claim used.",
@@ -530,12 +530,12 @@ public final class Review {
             ReviewQuantity q = ReviewQuantity.RELIEVING_PRESSURE;
             double p1 = p1();
             if (explains(q, c, p1 - patm)) {
-                add(out, "gauge-as-absolute", String.format(Locale.ROOT, "The claimed P1 is one atmosphere below "
+                add(out, "gauge-as-absolute", String.format(Locale.US, "The claimed P1 is one atmosphere below "
                         + "Ventcase's absolute P1 (P1 - P_atm = %s): a gauge pressure was probably used as "
                         + "absolute.", f(q, p1 - patm)) + GAUGE_LOOK);
             }
             if (explains(q, c, p1 + patm)) {
-                add(out, "atmosphere-added-twice", String.format(Locale.ROOT, "The claimed P1 is one atmosphere "
+                add(out, "atmosphere-added-twice", String.format(Locale.US, "The claimed P1 is one atmosphere "
                         + "above Ventcase's (P1 + P_atm = %s): the atmospheric pressure was probably added to a "
                         + "pressure that was already absolute. Look at the pressure basis of the set pressure and "
                         + "the MAWP.", f(q, p1 + patm)));
@@ -547,7 +547,7 @@ public final class Review {
                         r.mawpGaugePa(), r.atmosphericPa(), r.deviceCount(), other, false,
                         r.setAboveLimitReason())).relievingPressurePa();
                 if (explains(q, c, alt)) {
-                    add(out, "accumulation", String.format(Locale.ROOT, "The claimed P1 is the relieving pressure "
+                    add(out, "accumulation", String.format(Locale.US, "The claimed P1 is the relieving pressure "
                             + "with the %s accumulation (%s): look at the allowable overpressure used: 21 %% of MAWP "
                             + "for a fire case; 10 %% (16 %% with several devices) otherwise.",
                             other == ScenarioKind.FIRE ? "fire" : "non-fire", f(q, alt)));
@@ -561,7 +561,7 @@ public final class Review {
             ReviewQuantity q = ReviewQuantity.RELIEVING_TEMPERATURE;
             gaugeState().ifPresent(g -> {
                 if (explains(q, c, g.temperatureK())) {
-                    add(out, "gauge-as-absolute", String.format(Locale.ROOT, "The claimed T1 is the saturation "
+                    add(out, "gauge-as-absolute", String.format(Locale.US, "The claimed T1 is the saturation "
                             + "(bubble) temperature at P1 - P_atm = %s (%s): the relieving temperature was found at "
                             + "a gauge pressure read as absolute.", ReviewQuantity.RELIEVING_PRESSURE.format(
                                     g.pressurePa()), f(q, g.temperatureK())) + GAUGE_LOOK);
@@ -569,14 +569,14 @@ public final class Review {
             });
             double ts = in.storage().temperatureK();
             if (explains(q, c, ts)) {
-                add(out, "storage-temperature", String.format(Locale.ROOT, "The claimed T1 is the storage "
+                add(out, "storage-temperature", String.format(Locale.US, "The claimed T1 is the storage "
                         + "temperature (%s): the relieving temperature of a boiling liquid is its saturation "
                         + "(bubble) temperature at P1. Look at where T1 was taken.", f(q, ts)));
             }
             claimedPressureState().ifPresent(g -> {
                 if (explains(q, c, g.temperatureK()) && out.stream().noneMatch(h -> h.code().equals(
                         "gauge-as-absolute"))) {
-                    add(out, "follows-claimed-pressure", String.format(Locale.ROOT, "The claimed T1 is the "
+                    add(out, "follows-claimed-pressure", String.format(Locale.US, "The claimed T1 is the "
                             + "saturation temperature at the claimed P1 (%s): T1 follows from the difference in P1; "
                             + "look at the P1 row first.", f(q, g.temperatureK())));
                 }
@@ -587,7 +587,7 @@ public final class Review {
             ReviewQuantity q = ReviewQuantity.MOLAR_MASS;
             double ml = spec.model().molarMass(spec.composition());
             if (explains(q, c, ml)) {
-                add(out, "liquid-composition", String.format(Locale.ROOT, "The claimed M is the molar mass of the "
+                add(out, "liquid-composition", String.format(Locale.US, "The claimed M is the molar mass of the "
                         + "stored liquid (%s): the relieved vapour is the incipient vapour, richer in the light "
                         + "components. Look at the composition used for the relieved fluid.", f(q, ml)));
             }
@@ -601,13 +601,13 @@ public final class Review {
             }
             gaugeState().ifPresent(g -> {
                 if (explains(q, c, g.vapourProps().z())) {
-                    add(out, "gauge-as-absolute", String.format(Locale.ROOT, "The claimed Z is the vapour's Z at "
+                    add(out, "gauge-as-absolute", String.format(Locale.US, "The claimed Z is the vapour's Z at "
                             + "P1 - P_atm (%s).", f(q, g.vapourProps().z())) + GAUGE_LOOK);
                 }
             });
             double zs = result.inventory().vapour().z();
             if (explains(q, c, zs)) {
-                add(out, "storage-conditions", String.format(Locale.ROOT, "The claimed Z is the vapour's Z at "
+                add(out, "storage-conditions", String.format(Locale.US, "The claimed Z is the vapour's Z at "
                         + "storage conditions (%s), not at relieving conditions. Look at where Z was taken.",
                         f(q, zs)));
             }
@@ -621,7 +621,7 @@ public final class Review {
             RelievedFluid rf = s.relievedFluid().get();
             String ideal = f(q, rf.kIdeal());
             if (explains(q, c, rf.isentropicExponent())) {
-                add(out, "k-real-isentropic", String.format(Locale.ROOT, "The claimed k matches the real-gas "
+                add(out, "k-real-isentropic", String.format(Locale.US, "The claimed k matches the real-gas "
                         + "isentropic exponent at relieving conditions (%s), not the ideal-gas Cp/Cv at T1 (%s) that "
                         + "Ventcase uses in the API 520 gas equation. Look at which k the sizing used: the "
                         + "coefficient C is defined with the ideal-gas ratio; a real-gas exponent needs the "
@@ -629,7 +629,7 @@ public final class Review {
             }
             relievedAt(rf.densityBasis(), PhaseRequest.VAPOR).ifPresent(fp -> {
                 if (explains(q, c, fp.kReal())) {
-                    add(out, "k-real-cp-cv", String.format(Locale.ROOT, "The claimed k matches the real-fluid "
+                    add(out, "k-real-cp-cv", String.format(Locale.US, "The claimed k matches the real-fluid "
                             + "Cp/Cv at T1 and P1 (%s), not the ideal-gas Cp/Cv (%s) of the API 520 gas equation. "
                             + "Look at whether k was read at real-gas conditions (a simulator's Cp/Cv at pressure) "
                             + "rather than for the ideal gas at T1.", f(q, fp.kReal()), ideal));
@@ -639,7 +639,7 @@ public final class Review {
             double cp = spec.model().idealGasCp(STANDARD_T_K, y);
             double k15 = cp / (cp - PhysicalConstants.R);
             if (explains(q, c, k15)) {
-                add(out, "k-at-standard-temperature", String.format(Locale.ROOT, "The claimed k is the ideal-gas "
+                add(out, "k-at-standard-temperature", String.format(Locale.US, "The claimed k is the ideal-gas "
                         + "Cp/Cv at 15 C (%s), not at the relieving temperature (%s). Look at the temperature at "
                         + "which k was read (a table at 15 C or 60 F).", f(q, k15), ideal));
             }
@@ -649,7 +649,7 @@ public final class Review {
             ReviewQuantity q = ReviewQuantity.LATENT_HEAT;
             storageState().ifPresent(g -> {
                 if (explains(q, c, g.latentHeatJPerKg())) {
-                    add(out, "latent-heat-at-storage", String.format(Locale.ROOT, "The claimed L is the latent heat "
+                    add(out, "latent-heat-at-storage", String.format(Locale.US, "The claimed L is the latent heat "
                             + "at the storage temperature (%s at %s), not at relieving conditions (T1 = %s). L falls "
                             + "as the temperature rises toward the critical point, so a storage value understates "
                             + "the load. Look at the temperature at which L was taken: it must be T1 at P1.",
@@ -659,7 +659,7 @@ public final class Review {
             });
             gaugeState().ifPresent(g -> {
                 if (explains(q, c, g.latentHeatJPerKg())) {
-                    add(out, "gauge-as-absolute", String.format(Locale.ROOT, "The claimed L is the latent heat at "
+                    add(out, "gauge-as-absolute", String.format(Locale.US, "The claimed L is the latent heat at "
                             + "P1 - P_atm (%s).", f(q, g.latentHeatJPerKg())) + GAUGE_LOOK);
                 }
             });
@@ -676,7 +676,7 @@ public final class Review {
             });
             result.inventory().liquid().ifPresent(l -> {
                 if (explains(q, c, l.densityKgM3())) {
-                    add(out, "storage-conditions", String.format(Locale.ROOT, "The claimed liquid density is the "
+                    add(out, "storage-conditions", String.format(Locale.US, "The claimed liquid density is the "
                             + "liquid's at the storage temperature (%s), not at relieving conditions. Look at where "
                             + "the density was taken: the liquid expands as it heats to T1.", f(q, l.densityKgM3())));
                 }
@@ -685,12 +685,12 @@ public final class Review {
 
         private String basisText(String phase, DensityBasis other, double alt, ReviewQuantity q) {
             if (other == DensityBasis.CUBIC) {
-                return String.format(Locale.ROOT, "The claimed %s density matches the raw cubic equation without "
+                return String.format(Locale.US, "The claimed %s density matches the raw cubic equation without "
                         + "volume translation (%s); Ventcase's value is on the translated basis (Peneloux-type "
                         + "shift). Look at whether the density was corrected: raw cubic liquid densities are "
                         + "several percent off.", phase, f(q, alt));
             }
-            return String.format(Locale.ROOT, "The claimed %s density matches the volume-translated basis (%s); "
+            return String.format(Locale.US, "The claimed %s density matches the volume-translated basis (%s); "
                     + "the case asks for the raw cubic density. Look at which density basis the claim used.", phase,
                     f(q, alt));
         }
@@ -708,14 +708,14 @@ public final class Review {
                 RelievedFluid rf = s.relievedFluid().get();
                 double ideal = rf.pressurePa() * rf.molarMass() * 1e-3 / (PhysicalConstants.R * rf.temperatureK());
                 if (explains(q, c, ideal)) {
-                    add(out, "ideal-gas-density", String.format(Locale.ROOT, "The claimed vapour density is the "
+                    add(out, "ideal-gas-density", String.format(Locale.US, "The claimed vapour density is the "
                             + "ideal-gas density P M / (R T) (%s), i.e. Z = 1. Look at the compressibility used.",
                             f(q, ideal)));
                 }
             }
             gaugeState().ifPresent(g -> {
                 if (explains(q, c, g.vapourProps().density())) {
-                    add(out, "gauge-as-absolute", String.format(Locale.ROOT, "The claimed vapour density is the "
+                    add(out, "gauge-as-absolute", String.format(Locale.US, "The claimed vapour density is the "
                             + "vapour's at P1 - P_atm (%s).", f(q, g.vapourProps().density())) + GAUGE_LOOK);
                 }
             });
@@ -736,13 +736,13 @@ public final class Review {
             double atWet = qx.getAsDouble() * Math.pow(wet / a, e);
             double atWhole = qx.getAsDouble() * Math.pow(whole / a, e);
             if (explains(q, c, atWet)) {
-                add(out, "wetted-area-fire-height", String.format(Locale.ROOT, "The claimed Q is C F A^0.82 on the "
+                add(out, "wetted-area-fire-height", String.format(Locale.US, "The claimed Q is C F A^0.82 on the "
                         + "wetted area at the liquid level without the fire-height limit (%s on %s): look at the "
                         + "wetted area: only the surface within the fire height above grade counts.", f(q, atWet),
                         ReviewQuantity.WETTED_AREA.format(wet)));
             }
             if (explains(q, c, atWhole)) {
-                add(out, "wetted-area-whole-surface", String.format(Locale.ROOT, "The claimed Q is C F A^0.82 on "
+                add(out, "wetted-area-whole-surface", String.format(Locale.US, "The claimed Q is C F A^0.82 on "
                         + "the whole inside surface of the vessel (%s on %s): look at the wetted area: only the "
                         + "liquid-wetted surface within the fire height counts.", f(q, atWhole),
                         ReviewQuantity.WETTED_AREA.format(whole)));
@@ -751,7 +751,7 @@ public final class Review {
             if (ac.isPresent()) {
                 double atClaimed = qx.getAsDouble() * Math.pow(ac.get() / a, e);
                 if (explains(q, c, atClaimed)) {
-                    add(out, "follows-claimed-area", String.format(Locale.ROOT, "The claimed Q is C F A^0.82 on the "
+                    add(out, "follows-claimed-area", String.format(Locale.US, "The claimed Q is C F A^0.82 on the "
                             + "claimed wetted area (%s): Q follows from the difference in the wetted area; look at "
                             + "that row first.", f(q, atClaimed)));
                 }
@@ -764,7 +764,7 @@ public final class Review {
                         : FireHeatInput.C_SI_ADEQUATE / FireHeatInput.C_SI_INADEQUATE;
                 double alt = qx.getAsDouble() * ratio;
                 if (explains(q, c, alt)) {
-                    add(out, "fire-fighting", String.format(Locale.ROOT, "The claimed Q is Ventcase's with C for %s "
+                    add(out, "fire-fighting", String.format(Locale.US, "The claimed Q is Ventcase's with C for %s "
                             + "drainage and fire-fighting (%s): look at the drainage and fire-fighting assumption.",
                             adequate ? "inadequate" : "adequate", f(q, alt)));
                 }
@@ -789,14 +789,14 @@ public final class Review {
             double wet = result.vessel().wettedArea();
             double whole = result.vessel().totalInsideArea();
             if (explains(q, c, wet)) {
-                add(out, "wetted-area-fire-height", String.format(Locale.ROOT, "The claimed area is the wetted area "
+                add(out, "wetted-area-fire-height", String.format(Locale.US, "The claimed area is the wetted area "
                         + "at the liquid level (%s) without the fire-height limit: only the wetted surface up to "
                         + "%.1f m above grade (the fire height; the vessel bottom is %.1f m above grade) is exposed. "
                         + "Look at the level, the elevation and the fire height used.", f(q, wet),
                         in.exposure().fireHeight(), in.exposure().bottomElevation()));
             }
             if (explains(q, c, whole)) {
-                add(out, "wetted-area-whole-surface", String.format(Locale.ROOT, "The claimed area is the whole "
+                add(out, "wetted-area-whole-surface", String.format(Locale.US, "The claimed area is the whole "
                         + "inside surface of the vessel (%s): only the liquid-wetted surface within the fire height "
                         + "counts. Look at the level and the fire height used.", f(q, whole)));
             }
@@ -825,7 +825,7 @@ public final class Review {
                             > tol.of(ReviewQuantity.LATENT_HEAT)) {
                         from.add("L");
                     }
-                    add(out, "load-follows", String.format(Locale.ROOT, "The claimed load is the claimed Q / L (%s): "
+                    add(out, "load-follows", String.format(Locale.US, "The claimed load is the claimed Q / L (%s): "
                             + "the load is consistent; its difference follows from %s. Look at %s first.", f(q, alt),
                             from.isEmpty() ? "the rounding of Q and L" : "the difference in " + String.join(" and ",
                                     from), from.isEmpty() ? "Q and L" : "the " + String.join(" and ", from)
@@ -837,7 +837,7 @@ public final class Review {
             if (boiling() && rv.isPresent() && rl.isPresent()) {
                 double alt = qx.getAsDouble() / lx.getAsDouble() * (1 - rv.getAsDouble() / rl.getAsDouble());
                 if (explains(q, c, alt)) {
-                    add(out, "displacement", String.format(Locale.ROOT, "The claimed load is W = Q / L (1 - "
+                    add(out, "displacement", String.format(Locale.US, "The claimed load is W = Q / L (1 - "
                             + "rho_V/rho_L) (%s): the vapour-displacement refinement was applied, while this case "
                             + "uses W = Q / L. Look at which form the basis intends.", f(q, alt)));
                 }
@@ -887,7 +887,7 @@ public final class Review {
                 return;
             }
             if (explains(q, c, alt)) {
-                add(out, "area-follows", String.format(Locale.ROOT, "The claimed area is what the API 520 critical-flow "
+                add(out, "area-follows", String.format(Locale.US, "The claimed area is what the API 520 critical-flow "
                         + "equation gives with the claimed W, P1, T1, Z, M and k (%s; Ventcase's values where none "
                         + "is claimed): the sizing is consistent; its difference follows from %s. Look at %s first.",
                         f(q, alt), differing.isEmpty() ? "rounding" : "the claimed " + String.join(", ", differing),
@@ -909,13 +909,13 @@ public final class Review {
             if (ax.isPresent()) {
                 double have = claimedOrificeArea(c);
                 if (have > 0 && have < ax.getAsDouble()) {
-                    add(out, "orifice-too-small", String.format(Locale.ROOT, "The claimed orifice has %s effective "
+                    add(out, "orifice-too-small", String.format(Locale.US, "The claimed orifice has %s effective "
                             + "area, less than Ventcase's required area (%s): it would not pass the relief load as "
                             + "computed here. Look at the required area and the orifice selection.",
                             ReviewQuantity.REQUIRED_AREA.format(have), ReviewQuantity.REQUIRED_AREA.format(
                                     ax.getAsDouble())));
                 } else if (have > 0 && out.isEmpty()) {
-                    add(out, "orifice-larger", String.format(Locale.ROOT, "The claimed orifice (%s) is larger than "
+                    add(out, "orifice-larger", String.format(Locale.US, "The claimed orifice (%s) is larger than "
                             + "the smallest standard orifice for Ventcase's required area (%s): it passes the load; "
                             + "look at whether a larger orifice was chosen on purpose (check the inlet pressure loss "
                             + "and chatter).", ReviewQuantity.REQUIRED_AREA.format(have),

@@ -144,9 +144,9 @@ public enum ReviewQuantity {
         double d = toDisplay(si);
         String u = displayUnit();
         String num = switch (this) {
-            case Z, K -> String.format(Locale.ROOT, "%.3f", d);
-            case RELIEVING_TEMPERATURE -> String.format(Locale.ROOT, "%.1f", d);
-            case MOLAR_MASS -> String.format(Locale.ROOT, "%.2f", d);
+            case Z, K -> String.format(Locale.US, "%.3f", d);
+            case RELIEVING_TEMPERATURE -> String.format(Locale.US, "%.1f", d);
+            case MOLAR_MASS -> String.format(Locale.US, "%.2f", d);
             default -> significant(d, 4);
         };
         return u.isEmpty() ? num : num + " " + u;
@@ -160,8 +160,8 @@ public enum ReviewQuantity {
         double d = differenceToDisplay(si);
         String sign = d < 0 ? "-" : "+";
         String num = switch (this) {
-            case Z, K -> String.format(Locale.ROOT, "%.3f", Math.abs(d));
-            case RELIEVING_TEMPERATURE -> String.format(Locale.ROOT, "%.1f", Math.abs(d));
+            case Z, K -> String.format(Locale.US, "%.3f", Math.abs(d));
+            case RELIEVING_TEMPERATURE -> String.format(Locale.US, "%.1f", Math.abs(d));
             default -> significant(Math.abs(d), 3);
         };
         String u = differenceUnit();
@@ -183,7 +183,7 @@ public enum ReviewQuantity {
         }
         int mag = (int) Math.floor(Math.log10(Math.abs(v)));
         int decimals = Math.max(0, digits - 1 - mag);
-        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+        return String.format(Locale.US, "%." + decimals + "f", v);
     }
 
     /** The quantity with this key (case-insensitive; "vapourDensity" is accepted for "vaporDensity"). */
