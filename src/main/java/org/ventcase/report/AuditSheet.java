@@ -177,7 +177,7 @@ public final class AuditSheet {
                         new SheetModel.Signatory("Checked", ""), new SheetModel.Signatory("Approved", ""))),
                 inputs, List.of(), results, warnings, figures, method, cautions, deferral,
                 "Masses in tonnes (1 t = 1000 kg), loads in kg/h, areas in mm²; the per-vessel CSV has every "
-                        + "number with its unit in the column header.");
+                        + "number with its unit in the column header.", "INVENTORY AUDIT  \u00b7  SCREENING SUMMARY");
     }
 
     private static Table groupTable(String title, String first, List<AuditResult.Group> groups) {
