@@ -57,12 +57,13 @@ public final class WizardApp extends Application {
     /** Seconds between autosave copies. */
     static final int AUTOSAVE_SECONDS = 30;
 
-    private final WizardViewModel vm = new WizardViewModel(CaseRunner.standard(), UserFiles.standard());
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "ventcase-calc");
         t.setDaemon(true);
         return t;
     });
+    private final WizardViewModel vm = new WizardViewModel(CaseRunner.standard(), UserFiles.standard(),
+            LiveCalculation.Env.fx(worker), LiveCalculation.DEBOUNCE_MS);
     private Stage stage;
     private final BorderPane root = new BorderPane();
     private final BorderPane body = new BorderPane();
@@ -264,9 +265,16 @@ public final class WizardApp extends Application {
         next.setOnAction(e -> vm.next());
         next.disableProperty().bind(vm.canAdvance().not());
         statusLabel.setId("status");
+        Label liveLabel = new Label();
+        liveLabel.setId("live-result");
+        liveLabel.getStyleClass().add("live-result");
+        Runnable live = () -> liveLabel.setText(liveText());
+        vm.live().state().addListener(o -> live.run());
+        vm.live().progress().addListener(o -> live.run());
+        live.run();
         Region gap = new Region();
         HBox.setHgrow(gap, Priority.ALWAYS);
-        HBox bar = new HBox(10, statusLabel, gap, back, next);
+        HBox bar = new HBox(10, statusLabel, gap, liveLabel, back, next);
         bar.getStyleClass().add("nav-bar");
         bar.setAlignment(Pos.CENTER_LEFT);
         return bar;
@@ -358,6 +366,21 @@ public final class WizardApp extends Application {
             b.setOnAction(e -> vm.goTo(s));
             stepList.getChildren().add(b);
         }
+    }
+
+    /** The live result in one line for the navigation bar, so that edits on any step show their effect. */
+    private String liveText() {
+        LiveCalculation l = vm.live();
+        return switch (l.state().get()) {
+            case IDLE -> "";
+            case WAITING -> Messages.get("live.waiting");
+            case RUNNING -> Messages.get("live.running", Math.round(100 * Math.max(0, l.progress().get())));
+            case INVALID -> Messages.get("live.invalid");
+            case CANCELLED, FAILED -> Messages.get("live.stopped");
+            case CURRENT -> l.summary().get().flatMap(s -> s.governingRow()).map(g -> Messages.get("live.current",
+                    g.orifice().orElse(Messages.get("results.notComputed")), g.label()))
+                    .orElse(Messages.get("live.none"));
+        };
     }
 
     private String statusText() {
