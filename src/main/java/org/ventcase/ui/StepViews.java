@@ -463,12 +463,24 @@ final class StepViews {
         c.setWrapText(true);
         Label h2 = new Label(Messages.get("results.deferral"));
         h2.getStyleClass().add("form-heading");
-        Label d = new Label(Texts.deferral(vm.valueAt("$.identity.tag"),
-                vm.validated().map(ValidatedCase::inputHash).orElse("(computed when the case is complete)")));
+        Label d = new Label(deferralText());
         d.setId("deferral");
         d.setWrapText(true);
+        // the tag and the input hash follow the case (an undo on this step changes them)
+        javafx.beans.InvalidationListener l = o -> d.setText(deferralText());
+        vm.problems().addListener(l);
+        vm.live().state().addListener(l);
+        onLeave(() -> {
+            vm.problems().removeListener(l);
+            vm.live().state().removeListener(l);
+        });
         v.getChildren().addAll(h2, d, h1, c);
         return v;
+    }
+
+    private String deferralText() {
+        return Texts.deferral(vm.valueAt("$.identity.tag"),
+                vm.validated().map(ValidatedCase::inputHash).orElse("(computed when the case is complete)"));
     }
 
     private static String opt(OptionalDouble v, java.util.function.DoubleFunction<String> f) {

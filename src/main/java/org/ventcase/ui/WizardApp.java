@@ -4,7 +4,6 @@ import java.io.File;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.ExecutorService;
@@ -56,6 +55,9 @@ public final class WizardApp extends Application {
 
     /** Seconds between autosave copies. */
     static final int AUTOSAVE_SECONDS = 30;
+
+    /** Launch argument that opens the built-in demo case ({@link WizardLauncher#launchDemo}). */
+    static final String DEMO_ARG = "--demo";
 
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "ventcase-calc");
@@ -124,6 +126,9 @@ public final class WizardApp extends Application {
         autosave.setCycleCount(Timeline.INDEFINITE);
         autosave.play();
         s.show();
+        if (getParameters() != null && getParameters().getRaw().contains(DEMO_ARG)) {
+            openBuiltInDemo();
+        }
     }
 
     @Override
@@ -212,31 +217,27 @@ public final class WizardApp extends Application {
     }
 
     private void openDemo() {
-        Path dir = Path.of("demo-cases");
-        List<String> names = new ArrayList<>();
-        if (Files.isDirectory(dir)) {
-            try (var s = Files.list(dir)) {
-                s.filter(p -> p.toString().endsWith(".json")).sorted().forEach(p -> names.add(p.getFileName().toString()));
-            } catch (IOException e) {
-                // fall back to the templates
-            }
-        }
-        boolean fromDir = !names.isEmpty();
-        if (!fromDir) {
-            names.addAll(Templates.CASES);
-        }
-        ChoiceDialog<String> d = new ChoiceDialog<>(names.get(0), names);
+        ChoiceDialog<String> d = new ChoiceDialog<>(Demos.BUILT_IN, Demos.ALL);
         d.initOwner(stage);
         d.setHeaderText(Messages.plain("start.demo"));
         d.showAndWait().ifPresent(n -> {
             try {
-                String json = fromDir ? Files.readString(dir.resolve(n)) : Templates.caseJson(n).orElseThrow();
-                vm.openUnsaved(json, n, false);
+                vm.openUnsaved(Demos.json(n), n, false);
                 enterWizard();
-            } catch (IOException | RuntimeException ex) {
+            } catch (RuntimeException ex) {
                 error(Messages.get("dialog.open.failed"), ex.getMessage());
             }
         });
+    }
+
+    /**
+     * Opens the built-in demo case on its results step, computing them ({@code ventcase demo}; also
+     * used by tests).
+     */
+    public void openBuiltInDemo() {
+        vm.openUnsaved(Demos.json(Demos.BUILT_IN), Demos.BUILT_IN, false);
+        enterWizard();
+        vm.goTo(Step.RESULTS);
     }
 
     // ------------------------------------------------------------------------------ wizard shell
