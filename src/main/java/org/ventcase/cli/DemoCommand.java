@@ -27,6 +27,7 @@ import org.ventcase.vessel.Vessel;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 
 /**
@@ -34,15 +35,27 @@ import picocli.CommandLine.Spec;
  * an invented terminal), printed step by step as a reviewer would check it.
  */
 @Command(name = "demo", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
-        header = "First-pass fire relief basis for a built-in invented propane bullet, step by step.",
-        description = {"Invented case: bullet V-3101 at the (invented) Wrenfield Marsh LPG terminal, 3.2 m ID x "
+        header = "The built-in demo: the case wizard on an invented propane bullet, or its fire case step by step.",
+        description = {"Where a display is available, opens the case wizard with the demo case "
+                + "demo-cases/propane-bullet-fire.json (invented bullet V-4101) loaded and its results computed.",
+                "With --text, or where no display is available, prints a first-pass fire relief basis step by step "
+                + "instead. Invented case: bullet V-3101 at the (invented) Wrenfield Marsh LPG terminal, 3.2 m ID x "
                 + "16 m tangent-to-tangent, 2:1 heads, 85 % of volume full of propane at 15 C, bottom 1.0 m above "
                 + "grade, bare, one relief valve set at its MAWP of 17.2 barg, discharging to atmosphere."},
         footer = ExitCode.HELP_LIST)
 final class DemoCommand implements Callable<Integer> {
 
+    /** The line after the printed demo: how to go on without a window. */
+    static final String HEADLESS_HINT = "Headless commands: 'ventcase calc demo-cases/propane-bullet-fire.json', "
+            + "'ventcase sheet --demo -o demo.pdf', 'ventcase props --fluid propane --temperature 50 C --pressure "
+            + "20 bara', 'ventcase new --template horizontal-bullet case.json'; 'ventcase --help' lists them all.";
+
     @Spec
     CommandSpec spec;
+
+    @Option(names = "--text", description = "Print the demo step by step instead of opening the wizard "
+            + "(the default where no display is available).")
+    boolean text;
 
     static WettedFireInput demoInput() {
         double atm = PhysicalConstants.ATM_PA;
@@ -57,8 +70,33 @@ final class DemoCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        WettedFireResult r = WettedFire.run(demoInput());
         PrintWriter out = spec.commandLine().getOut();
+        boolean display = Main.displayAvailableHere();
+        if (opensWindow(text, Main.windowsAllowed, display)) {
+            out.println("ventcase demo: opening the case wizard with the demo case "
+                    + "(for the printed demo: 'ventcase demo --text').");
+            out.flush();
+            org.ventcase.ui.WizardLauncher.launchDemo();
+            return ExitCode.OK;
+        }
+        if (!text && !display) {
+            out.println("ventcase demo: no display is available, so the demo is printed instead of opening the "
+                    + "case wizard.");
+            out.println();
+        }
+        printDemo(out);
+        out.println();
+        out.println(HEADLESS_HINT);
+        return ExitCode.OK;
+    }
+
+    /** True when {@code demo} opens the wizard: not asked for text, a window may be opened and a display is there. */
+    static boolean opensWindow(boolean text, boolean windowsAllowed, boolean display) {
+        return !text && windowsAllowed && display;
+    }
+
+    private static void printDemo(PrintWriter out) {
+        WettedFireResult r = WettedFire.run(demoInput());
         out.println("VENTCASE DEMO: pool fire on propane bullet V-3101 (invented case, Wrenfield Marsh LPG terminal)");
         out.println("First-pass estimate only. Final relief design must be verified by a qualified engineer under the");
         out.println("applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) and local regulations.");
@@ -95,6 +133,5 @@ final class DemoCommand implements Callable<Integer> {
                 out.println("  ! " + w);
             }
         }
-        return ExitCode.OK;
     }
 }

@@ -43,12 +43,18 @@ public final class Main implements Callable<Integer> {
         return ExitCode.OK;
     }
 
+    /**
+     * True only in {@link #main}: commands may open a window. {@link #run} (scripts' and tests' entry)
+     * stays headless.
+     */
+    static volatile boolean windowsAllowed;
+
     public static void main(String[] args) {
         PrintWriter out = new PrintWriter(System.out, true);
         PrintWriter err = new PrintWriter(System.err, true);
+        windowsAllowed = true;
         if (args.length == 0) {
-            if (displayAvailable(System.getenv("DISPLAY"), System.getenv("WAYLAND_DISPLAY"),
-                    System.getProperty("java.awt.headless"), System.getProperty("os.name"))) {
+            if (displayAvailableHere()) {
                 org.ventcase.ui.WizardLauncher.launch();
                 System.exit(ExitCode.OK);
             }
@@ -61,8 +67,14 @@ public final class Main implements Callable<Integer> {
     /** Printed when {@code ventcase} is started without arguments and without a display. */
     static final String NO_DISPLAY = "ventcase: no display is available, so the case wizard cannot open. Run the "
             + "headless commands instead, e.g. 'ventcase new --template vertical-drum case.json', "
-            + "'ventcase check case.json', 'ventcase demo'; or start the wizard where a display is available "
+            + "'ventcase check case.json', 'ventcase demo --text'; or start the wizard where a display is available "
             + "(on a server: 'Xvfb :99 &' and DISPLAY=:99). Commands:";
+
+    /** {@link #displayAvailable} for this process's environment. */
+    static boolean displayAvailableHere() {
+        return displayAvailable(System.getenv("DISPLAY"), System.getenv("WAYLAND_DISPLAY"),
+                System.getProperty("java.awt.headless"), System.getProperty("os.name"));
+    }
 
     /**
      * True when a window can be opened: Windows and macOS have a display; elsewhere DISPLAY or

@@ -54,6 +54,10 @@ final class Forms {
         t.textProperty().bindBidirectional(f.text());
         t.setId(id(f));
         f.dimension().ifPresent(d -> t.setPromptText(promptFor(d)));
+        String key = Messages.fieldKey(f.path());
+        if (Messages.has("prompt." + key)) {
+            t.setPromptText(Messages.get("prompt." + key));
+        }
         add(f, t);
         return t;
     }
@@ -77,11 +81,15 @@ final class Forms {
         c.setSelected("true".equals(f.text().get()));
         c.selectedProperty().addListener((o, a, b) -> f.text().set(String.valueOf(b)));
         f.text().addListener((o, a, b) -> c.setSelected("true".equals(b)));
+        c.setWrapText(true);
+        c.setMaxWidth(Double.MAX_VALUE);
+        c.setAccessibleText(f.label());
         Label message = message(f);
-        grid.add(c, 1, row, 2, 1);
-        grid.add(help(f), 3, row);
+        // the box sits in the field column and its help button in the same column as every other row's
+        grid.add(c, 1, row);
+        grid.add(help(f), 2, row);
         row++;
-        grid.add(message, 1, row++, 3, 1);
+        grid.add(message, 1, row++, 2, 1);
         return c;
     }
 

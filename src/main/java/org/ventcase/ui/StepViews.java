@@ -7,7 +7,6 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.concurrent.ExecutorService;
 
-import javafx.application.Platform;
 import javafx.concurrent.Task;
 import javafx.geometry.Insets;
 import javafx.geometry.Pos;
@@ -22,6 +21,7 @@ import javafx.scene.control.TextField;
 import javafx.scene.layout.GridPane;
 import javafx.scene.layout.HBox;
 import javafx.scene.layout.Priority;
+import javafx.scene.layout.Region;
 import javafx.scene.layout.VBox;
 import javafx.stage.FileChooser;
 import javafx.stage.Window;
@@ -52,6 +52,8 @@ final class StepViews {
     }
 
     Node build(Step s) {
+        leave.forEach(Runnable::run);
+        leave.clear();
         return switch (s) {
             case IDENTITY -> identity();
             case FLUID -> fluid();
@@ -276,79 +278,92 @@ final class StepViews {
     // ------------------------------------------------------------------------------ results
 
     private Node results() {
+        LiveCalculation live = vm.live();
         VBox box = new VBox(12);
         Button run = new Button(Messages.get("results.run"));
         run.setId("run");
+        run.setOnAction(e -> live.recalculate());
         Button cancel = new Button(Messages.get("results.cancel"));
         cancel.setId("cancel");
-        cancel.setDisable(true);
+        cancel.setOnAction(e -> live.cancel());
         ProgressBar bar = new ProgressBar(0);
-        bar.setPrefWidth(240);
-        bar.setVisible(false);
-        Label status = new Label();
-        status.setId("results-status");
+        bar.setId("results-progress");
+        bar.setPrefWidth(200);
+        bar.progressProperty().bind(live.progress());
         ChoiceBox<UnitSystem> units = new ChoiceBox<>();
         units.getItems().setAll(UnitSystem.values());
         units.setValue(UnitSystem.SI);
-        HBox controls = new HBox(10, run, cancel, bar, status, new Label(Messages.get("results.units")), units);
+        Region gap = new Region();
+        HBox.setHgrow(gap, Priority.ALWAYS);
+        HBox controls = new HBox(10, run, cancel, bar, gap, new Label(Messages.get("results.units")), units);
         controls.setAlignment(Pos.CENTER_LEFT);
+        Label status = new Label();
+        status.setId("results-status");
+        status.setWrapText(true);
+        status.getStyleClass().add("results-status");
         VBox out = new VBox(10);
         out.setId("results-body");
-        Runnable show = () -> vm.summary().get().ifPresent(s -> showSummary(out, s, units.getValue()));
+        Runnable show = () -> {
+            LiveCalculation.State st = live.state().get();
+            boolean busy = st == LiveCalculation.State.RUNNING || st == LiveCalculation.State.WAITING;
+            run.setDisable(vm.validated().isEmpty());
+            cancel.setDisable(!busy);
+            bar.setVisible(st == LiveCalculation.State.RUNNING);
+            bar.setManaged(st == LiveCalculation.State.RUNNING);
+            boolean have = live.summary().get().isPresent();
+            status.setText(statusLine(st, have, live.message().get()));
+            status.pseudoClassStateChanged(PROBLEM, st == LiveCalculation.State.INVALID
+                    || st == LiveCalculation.State.FAILED);
+            status.pseudoClassStateChanged(CURRENT, st == LiveCalculation.State.CURRENT);
+            out.pseudoClassStateChanged(STALE, have && !live.current());
+            out.getChildren().clear();
+            live.summary().get().ifPresent(sum -> showSummary(out, sum, units.getValue()));
+        };
         units.valueProperty().addListener((o, a, b) -> show.run());
-        box.getChildren().addAll(controls, out, cautions());
-        Optional<ValidatedCase> kase = vm.validated();
-        if (kase.isEmpty()) {
-            status.setText(Messages.get("results.blocked"));
-            run.setDisable(true);
-            return box;
-        }
-        run.setOnAction(e -> {
-            Task<CaseSummary> task = new Task<>() {
-                @Override
-                protected CaseSummary call() {
-                    return vm.calculate(kase.get(), (fr, msg) -> {
-                        updateProgress(fr, 1);
-                        updateMessage(msg);
-                    }, this::isCancelled);
-                }
-            };
-            bar.progressProperty().bind(task.progressProperty());
-            status.textProperty().bind(task.messageProperty());
-            bar.setVisible(true);
-            run.setDisable(true);
-            cancel.setDisable(false);
-            cancel.setOnAction(x -> task.cancel());
-            task.setOnSucceeded(x -> {
-                finish(bar, status, run, cancel);
-                status.setText("");
-                vm.summary().set(Optional.of(task.getValue()));
-                show.run();
-            });
-            task.setOnCancelled(x -> {
-                finish(bar, status, run, cancel);
-                status.setText(Messages.get("results.cancelled"));
-            });
-            task.setOnFailed(x -> {
-                finish(bar, status, run, cancel);
-                status.setText(Messages.get("results.failed", String.valueOf(task.getException().getMessage())));
-            });
-            worker.submit(task);
+        javafx.beans.InvalidationListener l = o -> show.run();
+        live.state().addListener(l);
+        live.summary().addListener(l);
+        javafx.beans.InvalidationListener msg = o -> status.setText(statusLine(live.state().get(),
+                live.summary().get().isPresent(), live.message().get()));
+        live.message().addListener(msg);
+        onLeave(() -> {
+            live.state().removeListener(l);
+            live.summary().removeListener(l);
+            live.message().removeListener(msg);
         });
+        box.getChildren().addAll(controls, status, out, cautions());
         show.run();
-        if (vm.summary().get().isEmpty()) {
-            Platform.runLater(run::fire);
+        if (live.state().get() == LiveCalculation.State.IDLE) {
+            live.recalculate();
         }
         return box;
     }
 
-    private static void finish(ProgressBar bar, Label status, Button run, Button cancel) {
-        bar.progressProperty().unbind();
-        status.textProperty().unbind();
-        bar.setVisible(false);
-        run.setDisable(false);
-        cancel.setDisable(true);
+    private static final javafx.css.PseudoClass STALE = javafx.css.PseudoClass.getPseudoClass("stale");
+    private static final javafx.css.PseudoClass PROBLEM = javafx.css.PseudoClass.getPseudoClass("problem");
+    private static final javafx.css.PseudoClass CURRENT = javafx.css.PseudoClass.getPseudoClass("current");
+
+    /** One line saying whether the numbers shown are those of the inputs as they are now. */
+    static String statusLine(LiveCalculation.State st, boolean haveResult, String message) {
+        String stale = haveResult ? " " + Messages.get("results.stale") : "";
+        return switch (st) {
+            case IDLE -> "";
+            case WAITING -> Messages.get("results.state.waiting") + stale;
+            case RUNNING -> (message.isBlank() ? Messages.get("results.running") : Messages.get("results.state.running",
+                    message)) + stale;
+            case CURRENT -> Messages.get("results.state.current");
+            case INVALID -> Messages.get("results.state.invalid") + stale;
+            case CANCELLED -> Messages.get("results.state.cancelled") + stale;
+            case FAILED -> message + stale;
+        };
     }
+
+    /** Runs {@code r} when the step now shown is left (listeners on long-lived properties). */
+    private void onLeave(Runnable r) {
+        leave.add(r);
+    }
+
+    private final List<Runnable> leave = new java.util.ArrayList<>();
 
     private void showSummary(VBox out, CaseSummary s, UnitSystem u) {
         out.getChildren().clear();
@@ -448,12 +463,24 @@ final class StepViews {
         c.setWrapText(true);
         Label h2 = new Label(Messages.get("results.deferral"));
         h2.getStyleClass().add("form-heading");
-        Label d = new Label(Texts.deferral(vm.valueAt("$.identity.tag"),
-                vm.validated().map(ValidatedCase::inputHash).orElse("(computed when the case is complete)")));
+        Label d = new Label(deferralText());
         d.setId("deferral");
         d.setWrapText(true);
+        // the tag and the input hash follow the case (an undo on this step changes them)
+        javafx.beans.InvalidationListener l = o -> d.setText(deferralText());
+        vm.problems().addListener(l);
+        vm.live().state().addListener(l);
+        onLeave(() -> {
+            vm.problems().removeListener(l);
+            vm.live().state().removeListener(l);
+        });
         v.getChildren().addAll(h2, d, h1, c);
         return v;
+    }
+
+    private String deferralText() {
+        return Texts.deferral(vm.valueAt("$.identity.tag"),
+                vm.validated().map(ValidatedCase::inputHash).orElse("(computed when the case is complete)"));
     }
 
     private static String opt(OptionalDouble v, java.util.function.DoubleFunction<String> f) {

@@ -4,7 +4,6 @@ import java.io.File;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.ExecutorService;
@@ -57,12 +56,16 @@ public final class WizardApp extends Application {
     /** Seconds between autosave copies. */
     static final int AUTOSAVE_SECONDS = 30;
 
-    private final WizardViewModel vm = new WizardViewModel(CaseRunner.standard(), UserFiles.standard());
+    /** Launch argument that opens the built-in demo case ({@link WizardLauncher#launchDemo}). */
+    static final String DEMO_ARG = "--demo";
+
     private final ExecutorService worker = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "ventcase-calc");
         t.setDaemon(true);
         return t;
     });
+    private final WizardViewModel vm = new WizardViewModel(CaseRunner.standard(), UserFiles.standard(),
+            LiveCalculation.Env.fx(worker), LiveCalculation.DEBOUNCE_MS);
     private Stage stage;
     private final BorderPane root = new BorderPane();
     private final BorderPane body = new BorderPane();
@@ -123,6 +126,9 @@ public final class WizardApp extends Application {
         autosave.setCycleCount(Timeline.INDEFINITE);
         autosave.play();
         s.show();
+        if (getParameters() != null && getParameters().getRaw().contains(DEMO_ARG)) {
+            openBuiltInDemo();
+        }
     }
 
     @Override
@@ -211,31 +217,27 @@ public final class WizardApp extends Application {
     }
 
     private void openDemo() {
-        Path dir = Path.of("demo-cases");
-        List<String> names = new ArrayList<>();
-        if (Files.isDirectory(dir)) {
-            try (var s = Files.list(dir)) {
-                s.filter(p -> p.toString().endsWith(".json")).sorted().forEach(p -> names.add(p.getFileName().toString()));
-            } catch (IOException e) {
-                // fall back to the templates
-            }
-        }
-        boolean fromDir = !names.isEmpty();
-        if (!fromDir) {
-            names.addAll(Templates.CASES);
-        }
-        ChoiceDialog<String> d = new ChoiceDialog<>(names.get(0), names);
+        ChoiceDialog<String> d = new ChoiceDialog<>(Demos.BUILT_IN, Demos.ALL);
         d.initOwner(stage);
         d.setHeaderText(Messages.plain("start.demo"));
         d.showAndWait().ifPresent(n -> {
             try {
-                String json = fromDir ? Files.readString(dir.resolve(n)) : Templates.caseJson(n).orElseThrow();
-                vm.openUnsaved(json, n, false);
+                vm.openUnsaved(Demos.json(n), n, false);
                 enterWizard();
-            } catch (IOException | RuntimeException ex) {
+            } catch (RuntimeException ex) {
                 error(Messages.get("dialog.open.failed"), ex.getMessage());
             }
         });
+    }
+
+    /**
+     * Opens the built-in demo case on its results step, computing them ({@code ventcase demo}; also
+     * used by tests).
+     */
+    public void openBuiltInDemo() {
+        vm.openUnsaved(Demos.json(Demos.BUILT_IN), Demos.BUILT_IN, false);
+        enterWizard();
+        vm.goTo(Step.RESULTS);
     }
 
     // ------------------------------------------------------------------------------ wizard shell
@@ -264,9 +266,16 @@ public final class WizardApp extends Application {
         next.setOnAction(e -> vm.next());
         next.disableProperty().bind(vm.canAdvance().not());
         statusLabel.setId("status");
+        Label liveLabel = new Label();
+        liveLabel.setId("live-result");
+        liveLabel.getStyleClass().add("live-result");
+        Runnable live = () -> liveLabel.setText(liveText());
+        vm.live().state().addListener(o -> live.run());
+        vm.live().progress().addListener(o -> live.run());
+        live.run();
         Region gap = new Region();
         HBox.setHgrow(gap, Priority.ALWAYS);
-        HBox bar = new HBox(10, statusLabel, gap, back, next);
+        HBox bar = new HBox(10, statusLabel, gap, liveLabel, back, next);
         bar.getStyleClass().add("nav-bar");
         bar.setAlignment(Pos.CENTER_LEFT);
         return bar;
@@ -358,6 +367,21 @@ public final class WizardApp extends Application {
             b.setOnAction(e -> vm.goTo(s));
             stepList.getChildren().add(b);
         }
+    }
+
+    /** The live result in one line for the navigation bar, so that edits on any step show their effect. */
+    private String liveText() {
+        LiveCalculation l = vm.live();
+        return switch (l.state().get()) {
+            case IDLE -> "";
+            case WAITING -> Messages.get("live.waiting");
+            case RUNNING -> Messages.get("live.running", Math.round(100 * Math.max(0, l.progress().get())));
+            case INVALID -> Messages.get("live.invalid");
+            case CANCELLED, FAILED -> Messages.get("live.stopped");
+            case CURRENT -> l.summary().get().flatMap(s -> s.governingRow()).map(g -> Messages.get("live.current",
+                    g.orifice().orElse(Messages.get("results.notComputed")), g.label()))
+                    .orElse(Messages.get("live.none"));
+        };
     }
 
     private String statusText() {

@@ -16,6 +16,11 @@ public final class WizardLauncher {
         Application.launch(WizardApp.class, args);
     }
 
+    /** Opens the wizard with the built-in demo case and its results; returns when the window closes. */
+    public static void launchDemo() {
+        Application.launch(WizardApp.class, WizardApp.DEMO_ARG);
+    }
+
     public static void main(String[] args) {
         launch(args);
     }

@@ -12,7 +12,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.function.BooleanSupplier;
 
 import javafx.beans.binding.Bindings;
 import javafx.beans.binding.BooleanBinding;
@@ -52,9 +51,10 @@ import org.ventcase.units.Units;
  * {@link DraftCase}; each input is a {@link FieldModel} addressed by its case-file path, and its
  * message is the case validator's problem at that path, so the wizard and {@code ventcase check}
  * say the same thing. Navigation is blocked only by problems on the current step; warnings never
- * block. Edits are undoable. Calculations are not done here: {@link #calculate} and
- * {@link #sheet} hand the validated case to the {@link CaseRunner}, which the view runs off the
- * application thread. Usable without a window (tests build one directly).
+ * block. Edits are undoable. Calculations are not done here: every change goes to the
+ * {@link LiveCalculation}, which hands the validated case to the {@link CaseRunner} off the
+ * application thread once the edits pause, and {@link #sheet} does the same for the PDF sheet.
+ * Usable without a window (tests build one directly).
  */
 public final class WizardViewModel {
 
@@ -85,13 +85,22 @@ public final class WizardViewModel {
     private final IntegerProperty structure = new SimpleIntegerProperty(this, "structure");
     private final StringProperty compositionSum = new SimpleStringProperty(this, "compositionSum", "");
     private final BooleanProperty compositionOk = new SimpleBooleanProperty(this, "compositionOk");
-    private final ObjectProperty<Optional<CaseSummary>> summary = new SimpleObjectProperty<>(this, "summary",
-            Optional.empty());
+    private final LiveCalculation live;
     private final BooleanBinding canAdvance;
 
+    /** A view-model whose results are not recalculated live (tests that do not look at results). */
     public WizardViewModel(CaseRunner runner, UserFiles files) {
+        this(runner, files, LiveCalculation.Env.off(), LiveCalculation.DEBOUNCE_MS);
+    }
+
+    /**
+     * A view-model whose results follow the case: recomputed by {@code runner} in {@code env}'s
+     * background, {@code debounceMs} after the last edit.
+     */
+    public WizardViewModel(CaseRunner runner, UserFiles files, LiveCalculation.Env env, long debounceMs) {
         this.runner = runner;
         this.files = files;
+        this.live = new LiveCalculation(runner, env, this::validated, debounceMs);
         canAdvance = Bindings.createBooleanBinding(() -> step.get() != Step.EXPORT
                 && stepProblems(step.get()).isEmpty(), step, problems);
         revalidate();
@@ -145,10 +154,10 @@ public final class WizardViewModel {
         redo.clear();
         file.set(p);
         savedJson = d.json();
-        summary.set(Optional.empty());
         fields.clear();
         step.set(Step.IDENTITY);
-        afterChange(true);
+        afterChange(true, false);
+        live.loaded();
     }
 
     /** Saves to the current file; false when there is none yet (ask for one and call {@link #saveAs}). */
@@ -391,6 +400,10 @@ public final class WizardViewModel {
     }
 
     private void afterChange(boolean structural) {
+        afterChange(structural, true);
+    }
+
+    private void afterChange(boolean structural, boolean recalculate) {
         canUndo.set(!undo.isEmpty());
         canRedo.set(!redo.isEmpty());
         if (structural) {
@@ -408,8 +421,10 @@ public final class WizardViewModel {
             structure.set(structure.get() + 1);
         }
         dirty.set(!draft.json().equals(savedJson));
-        summary.set(Optional.empty());
         revalidate();
+        if (recalculate) {
+            live.changed();
+        }
     }
 
     // ------------------------------------------------------------------------------ validation
@@ -674,9 +689,9 @@ public final class WizardViewModel {
         return draft.check(file.get() == null ? "wizard" : file.get().toString()).validated();
     }
 
-    /** Runs the case (call off the application thread). */
-    public CaseSummary calculate(ValidatedCase kase, CaseRunner.Progress progress, BooleanSupplier cancelled) {
-        return runner.run(kase, progress, cancelled);
+    /** The results, recomputed as the case changes. */
+    public LiveCalculation live() {
+        return live;
     }
 
     /** The sheet of the case (call off the application thread). */
@@ -684,8 +699,9 @@ public final class WizardViewModel {
         return runner.sheet(kase, units, version);
     }
 
-    public ObjectProperty<Optional<CaseSummary>> summary() {
-        return summary;
+    /** The last good result (see {@link LiveCalculation#current()} for whether it is today's). */
+    public javafx.beans.property.ReadOnlyObjectProperty<Optional<CaseSummary>> summary() {
+        return live.summary();
     }
 
     // ------------------------------------------------------------------------------ properties

@@ -40,6 +40,35 @@ class CliTest {
         assertTrue(r.out().replaceAll("\\s+", " ").contains("qualified engineer"), "cautions in the help");
     }
 
+    @Test
+    void demoTextPrintsTheStepsCautionsOrificeAndHowToGoOnHeadless() {
+        Run r = run("demo", "--text");
+        assertEquals(0, r.code(), r.err());
+        String flat = r.out().replaceAll("\\s+", " ");
+        assertTrue(flat.contains("qualified engineer"), "cautions");
+        assertTrue(flat.contains("ASME BPVC Section VIII"), "code deferral");
+        assertTrue(r.out().matches("(?s).*Selected orifice +[A-T],.*"), "the selected orifice letter");
+        assertTrue(r.out().contains("1. "), "numbered steps");
+        String[] lines = r.out().strip().split("\\R");
+        String last = lines[lines.length - 1];
+        assertEquals(DemoCommand.HEADLESS_HINT, last);
+        for (String cmd : List.of("calc", "sheet", "props")) {
+            assertTrue(last.contains("ventcase " + cmd), cmd);
+        }
+        assertFalse(r.out().contains("opening the case wizard"));
+    }
+
+    @Test
+    void demoOpensTheWizardOnlyWithADisplayAndWithoutText() {
+        assertTrue(DemoCommand.opensWindow(false, true, true));
+        assertFalse(DemoCommand.opensWindow(true, true, true), "--text prints");
+        assertFalse(DemoCommand.opensWindow(false, true, false), "no display: prints");
+        assertFalse(DemoCommand.opensWindow(false, false, true), "Main.run (scripts, tests) stays headless");
+        assertFalse(Main.displayAvailable(":0", null, "true", "Linux"), "headless AWT");
+        assertFalse(Main.displayAvailable(null, null, null, "Linux"), "no DISPLAY on Linux");
+        assertTrue(Main.displayAvailable(":97", null, null, "Linux"));
+    }
+
     @ParameterizedTest
     @ValueSource(strings = {"demo", "props", "sat", "vessel", "inventory", "flash", "envelope", "new", "check"})
     void everyCommandHasHelpAndVersion(String cmd) {

@@ -24,14 +24,19 @@ import javafx.stage.Stage;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.MethodOrderer;
+import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestMethodOrder;
 import org.ventcase.casefile.CaseFiles;
 
 /**
  * The wizard in a real window (under Xvfb in CI: .ci/run provides the display): a template walked
  * through every step, a bad value typed and its message seen, saved and reopened. Skipped where no
- * display is available. Screenshots of every step go to the folder named by -Dventcase.shots.
+ * display is available. The built-in demo opened on its results, which follow an edit live.
+ * Screenshots of every step go to the folder named by -Dventcase.shots.
  */
+@TestMethodOrder(MethodOrderer.OrderAnnotation.class)
 class WizardWindowTest {
 
     private static WizardApp app;
@@ -120,6 +125,7 @@ class WizardWindowTest {
     }
 
     @Test
+    @Order(1)
     void walksATemplateThroughEveryStepShowsAMessageSavesAndReopens() throws Exception {
         shot("00-start");
         fx(() -> {
@@ -187,5 +193,80 @@ class WizardWindowTest {
         assertEquals(saved, fx(() -> app.viewModel().caseJson()));
         assertEquals(saved, CaseFiles.toJson(CaseFiles.read(f)));
         assertFalse(fx(() -> app.viewModel().dirty().get()));
+    }
+
+    private static LiveCalculation.State liveState() throws Exception {
+        return fx(() -> app.viewModel().live().state().get());
+    }
+
+    private static void awaitCurrent() throws Exception {
+        long end = System.currentTimeMillis() + 60_000;
+        while (liveState() != LiveCalculation.State.CURRENT && System.currentTimeMillis() < end) {
+            Thread.sleep(100);
+        }
+        assertEquals(LiveCalculation.State.CURRENT, liveState(), () -> "live calculation did not finish");
+        settle();
+    }
+
+    private static String text(String id) throws Exception {
+        Label l = (Label) lookup(id);
+        assertNotNull(l, id);
+        return fx(l::getText);
+    }
+
+    private static boolean stale() throws Exception {
+        Node body = lookup("results-body");
+        return fx(() -> body.getPseudoClassStates().contains(javafx.css.PseudoClass.getPseudoClass("stale")));
+    }
+
+    @Test
+    @Order(2)
+    void theDemoOpensOnItsComputedResultsWhichFollowEditsLive() throws Exception {
+        fx(() -> {
+            app.openBuiltInDemo();
+            return null;
+        });
+        assertEquals(Step.RESULTS, fx(() -> app.viewModel().step().get()));
+        awaitCurrent();
+        String orifice = fx(() -> app.viewModel().summary().get().orElseThrow().governingRow().orElseThrow()
+                .orifice().orElseThrow());
+        String governing = text("governing");
+        assertTrue(governing.contains("orifice " + orifice), governing);
+        assertTrue(text("deferral").contains("qualified engineer"));
+        assertTrue(text("results-status").startsWith("Up to date"), text("results-status"));
+        assertTrue(text("live-result").contains(orifice), text("live-result"));
+        assertFalse(stale());
+        shot("20-demo-results");
+
+        // an edit (here from the view-model, as undo would on this step): the old numbers stay, greyed and labelled
+        fx(() -> {
+            app.viewModel().set("$.storage.liquidLevel", "40 %v");
+            return null;
+        });
+        settle();
+        assertTrue(stale(), "the previous result is greyed while the new one is pending");
+        assertTrue(text("results-status").contains("NOT CURRENT"), text("results-status"));
+        shot("21-demo-recalculating");
+        awaitCurrent();
+        assertFalse(stale());
+        assertFalse(governing.equals(text("governing")), "a lower level wets less area: the required area changes");
+        shot("22-demo-recalculated");
+
+        // a problem in the case: no new numbers, and the old ones are not passed off as current
+        fx(() -> {
+            app.viewModel().set("$.vessel.insideDiameter", "3.4");
+            return null;
+        });
+        settle();
+        assertEquals(LiveCalculation.State.INVALID, liveState());
+        assertTrue(text("results-status").contains("fix the marked fields"), text("results-status"));
+        assertTrue(stale());
+        assertTrue(text("live-result").contains("fix the marked fields"));
+        shot("23-demo-invalid");
+        fx(() -> {
+            app.viewModel().undo();
+            return null;
+        });
+        awaitCurrent();
     }
 }
