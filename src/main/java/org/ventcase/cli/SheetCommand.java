@@ -1,9 +1,6 @@
 package org.ventcase.cli;
 
 import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
@@ -16,8 +13,6 @@ import org.ventcase.casefile.CaseValidationException;
 import org.ventcase.casefile.Problem;
 import org.ventcase.casefile.ValidatedCase;
 import org.ventcase.common.InvalidInputException;
-import org.ventcase.relief.WettedFire;
-import org.ventcase.relief.WettedFireResult;
 import org.ventcase.report.CalculationSheet;
 import org.ventcase.report.SheetIdentity;
 import org.ventcase.report.SheetModel;
@@ -43,16 +38,14 @@ import picocli.CommandLine.Spec;
         footer = ExitCode.HELP_LIST)
 final class SheetCommand implements Callable<Integer> {
 
-    /** The demo as a case file, for its title block and input hash. */
-    static final String DEMO_CASE = "/org/ventcase/cli/demo-case.json";
-
     @Spec
     CommandSpec spec;
 
     @Parameters(arity = "0..1", paramLabel = "CASE.json", description = "The case file (format: docs/case-files.md); it is only read.")
     Path caseFile;
 
-    @Option(names = "--demo", description = "Use the built-in invented demo case (the one 'ventcase demo' prints).")
+    @Option(names = "--demo", description = "Use the built-in invented demo case demo-cases/propane-bullet-fire.json (the one "
+            + "'ventcase demo' opens and prints).")
     boolean demo;
 
     @Option(names = {"-o", "--output"}, required = true, paramLabel = "SHEET.pdf",
@@ -120,22 +113,8 @@ final class SheetCommand implements Callable<Integer> {
                 "Ventcase", version, kase.inputHash());
     }
 
-    /** The demo's sheet: the demo calculation with the title block and input hash of its case file. */
+    /** The demo's sheet: the packaged demo case (the one 'ventcase demo' runs) through the case pipeline. */
     static SheetModel demoModel(UnitSystem system) {
-        ValidatedCase kase = CaseFiles.load(demoCaseJson(), "demo-case.json");
-        SheetIdentity identity = identity(kase, Main.version());
-        WettedFireResult r = WettedFire.run(DemoCommand.demoInput());
-        return SheetModels.from(r, identity, system);
-    }
-
-    static String demoCaseJson() {
-        try (InputStream in = SheetCommand.class.getResourceAsStream(DEMO_CASE)) {
-            if (in == null) {
-                throw new IllegalStateException("missing packaged resource " + DEMO_CASE);
-            }
-            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
+        return caseModel(DemoCommand.demoCase(), system, Main.version());
     }
 }

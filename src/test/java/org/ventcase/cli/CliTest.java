@@ -41,14 +41,42 @@ class CliTest {
     }
 
     @Test
-    void demoTextPrintsTheStepsCautionsOrificeAndHowToGoOnHeadless() {
+    void demoTextPrintsTheStepsCautionsOrificeAndHowToGoOnHeadless() throws Exception {
         Run r = run("demo", "--text");
         assertEquals(0, r.code(), r.err());
+        // Expected values: the golden results of the packaged demo case, the case the wizard opens
+        // (demo-cases/golden/propane-bullet-fire.results.json, written by tools/regenerate-goldens.sh).
+        JsonNode golden = json(java.nio.file.Files.readString(
+                java.nio.file.Path.of("demo-cases/golden/propane-bullet-fire.results.json")));
+        JsonNode fire = golden.get("scenarios").get(0);
+        assertTrue(r.out().startsWith("VENTCASE DEMO: " + golden.get("title").asText() + " (V-4101)"), r.out());
+        for (String caution : DemoCommand.CAUTIONS) {
+            assertTrue(r.out().contains(caution + "\n") || r.out().contains(caution + "\r\n"), caution);
+        }
         String flat = r.out().replaceAll("\\s+", " ");
-        assertTrue(flat.contains("qualified engineer"), "cautions");
-        assertTrue(flat.contains("ASME BPVC Section VIII"), "code deferral");
-        assertTrue(r.out().matches("(?s).*Selected orifice +[A-T],.*"), "the selected orifice letter");
-        assertTrue(r.out().contains("1. "), "numbered steps");
+        assertTrue(flat.contains("qualified engineer") && flat.contains("ASME BPVC Section VIII"), "cautions");
+        assertTrue(r.out().contains("SCENARIO 1: " + fire.get("label").asText() + " [fire-wetted], governing"),
+                r.out());
+        // every step of the scenario's trace, numbered, in the golden's order
+        int from = 0;
+        int n = 1;
+        for (JsonNode step : fire.get("trace")) {
+            String heading = n++ + ". " + step.get("title").asText();
+            int at = r.out().indexOf(heading, from);
+            assertTrue(at >= from, "step in order: " + heading);
+            from = at + heading.length();
+        }
+        assertTrue(r.out().indexOf("SUMMARY") > from, "summary after the steps");
+        String letter = fire.get("orifice").get("letter").asText();
+        assertTrue(r.out().matches("(?s).*Selected orifice +" + letter + " \\(.*"), "the golden orifice " + letter);
+        assertTrue(r.out().contains(String.format(java.util.Locale.ROOT, "%.1f mm2",
+                fire.get("requiredArea_mm2").asDouble())), "the golden required area");
+        assertTrue(r.out().matches("(?s).*Governing scenario +1\\. " + java.util.regex.Pattern.quote(
+                fire.get("label").asText()) + ".*"), r.out());
+        assertTrue(r.out().indexOf("WARNINGS") > r.out().indexOf("SUMMARY"));
+        for (JsonNode w : golden.get("warnings")) {
+            assertTrue(flat.contains(w.get("message").asText().replaceAll("\\s+", " ")), "warning printed");
+        }
         String[] lines = r.out().strip().split("\\R");
         String last = lines[lines.length - 1];
         assertEquals(DemoCommand.HEADLESS_HINT, last);
@@ -56,6 +84,7 @@ class CliTest {
             assertTrue(last.contains("ventcase " + cmd), cmd);
         }
         assertFalse(r.out().contains("opening the case wizard"));
+        assertFalse(r.out().contains("V-3101"), "the old hard-coded demo bullet is gone");
     }
 
     @Test

@@ -7,11 +7,17 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Files;
 import java.nio.file.Path;
 
+import com.fasterxml.jackson.databind.JsonNode;
+
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.ventcase.casefile.CaseFiles;
 import org.ventcase.casefile.ValidatedCase;
-import org.ventcase.relief.WettedFireInput;
+import org.ventcase.report.DisplayUnits;
+import org.ventcase.report.UnitSystem;
 
 class SheetCommandTest {
 
@@ -80,19 +86,30 @@ class SheetCommandTest {
     }
 
     @Test
-    void demoCaseFileDescribesTheDemoInputs() {
-        // The demo sheet takes its title block and input hash from demo-case.json, so that file
-        // must describe the same case as DemoCommand.demoInput().
-        ValidatedCase k = CaseFiles.load(SheetCommand.demoCaseJson(), "demo-case.json");
-        WettedFireInput in = DemoCommand.demoInput();
-        assertEquals(in.vessel(), k.vessel().vessel());
-        assertEquals(in.exposure(), k.vessel().exposure());
-        assertEquals(in.storageTemperatureK(), k.storage().temperatureK(), 1e-9);
-        assertEquals(in.level(), k.storage().level());
-        assertEquals(in.relieving().setPressureGaugePa(), k.device().setPressureGaugePa(), 1e-6);
-        assertEquals(in.relieving().mawpGaugePa(), k.device().mawpGaugePa(), 1e-6);
-        assertEquals(in.component().name(), k.fluid().composition().components().get(0).name());
-        assertEquals(in.eos(), k.fluid().eos());
-        assertEquals(64, k.inputHash().length());
+    void demoSheetIsThePackagedDemoCaseThroughTheCasePipeline() throws Exception {
+        Path pdf = dir.resolve("demo-si.pdf");
+        CliTest.Run r = CliTest.run("sheet", "--demo", "-o", pdf.toString());
+        assertEquals(ExitCode.OK, r.code(), r.err());
+        assertTrue(r.out().contains("(V-4101, SI units, A4)"), r.out());
+        String text;
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            text = new PDFTextStripper().getText(doc).replaceAll("[\\s\\u00A0]+", " ");
+        }
+        // Expected values: the golden results of the packaged demo case (the case the wizard opens),
+        // demo-cases/golden/propane-bullet-fire.results.json, written by tools/regenerate-goldens.sh.
+        JsonNode golden = CliTest.json(Files.readString(Path.of("demo-cases/golden/propane-bullet-fire.results.json")));
+        JsonNode fire = golden.get("scenarios").get(0);
+        DisplayUnits si = new DisplayUnits(UnitSystem.SI);
+        String area = si.plain(DisplayUnits.Kind.ORIFICE_AREA, fire.get("requiredArea_mm2").asDouble() * 1e-6)
+                .replace('\u00A0', ' ');
+        assertTrue(text.contains("Required effective area " + area), "golden required area " + area);
+        String letter = fire.get("orifice").get("letter").asText();
+        assertTrue(text.contains("Selected orifice " + letter + " (API Std 526)"), "golden orifice " + letter);
+        // the title block is the case file's identity, hashed from the packaged case file
+        ValidatedCase demo = CaseFiles.load(Path.of("demo-cases/propane-bullet-fire.json"));
+        assertTrue(text.contains(demo.identity().title()), "title block");
+        assertTrue(text.contains(demo.inputHash()), "input hash of the packaged case");
+        assertEquals(golden.get("inputHash").asText(), demo.inputHash());
+        assertFalse(text.contains("V-3101"), "the old hard-coded demo bullet is gone");
     }
 }
