@@ -7,7 +7,7 @@ import java.util.Objects;
  * The title block of a sheet: what the calculation is about and who made it. Text fields may be
  * empty (printed as a blank field to fill in by hand) but never null.
  *
- * @param title       case title, e.g. "Bullet V-3101: fire relief basis"
+ * @param title       case title, e.g. "Propane bullet V-4101: pool fire"
  * @param tag         equipment tag
  * @param revision    revision letter or number of this issue
  * @param date        date of this issue
