@@ -134,21 +134,6 @@ public final class AuditCsv {
     }
 
     static void writeAtomically(String text, Path target) throws IOException {
-        Path abs = target.toAbsolutePath();
-        Path dir = abs.getParent();
-        Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
-        try {
-            try (OutputStream out = Files.newOutputStream(tmp)) {
-                out.write(text.getBytes(StandardCharsets.UTF_8));
-            }
-            try {
-                Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        org.ventcase.common.AtomicFiles.writeText(text, target);
     }
 }

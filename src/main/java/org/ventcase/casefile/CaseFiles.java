@@ -296,35 +296,10 @@ public final class CaseFiles {
 
     /** Writes text atomically, as {@link #write(Case, Path)} does. */
     public static void writeText(String text, Path target) {
-        byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
-        Path abs = target.toAbsolutePath();
-        Path dir = abs.getParent();
-        Path tmp = null;
         try {
-            tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
-            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
-                java.nio.ByteBuffer buf = java.nio.ByteBuffer.wrap(bytes);
-                while (buf.hasRemaining()) {
-                    ch.write(buf);
-                }
-                ch.force(true);
-            }
-            try {
-                Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
-            }
-            tmp = null;
+            org.ventcase.common.AtomicFiles.writeText(text, target);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + target + ": " + e, e);
-        } finally {
-            if (tmp != null) {
-                try {
-                    Files.deleteIfExists(tmp);
-                } catch (IOException ignored) {
-                    // the write has already failed; that error is the one reported
-                }
-            }
         }
     }
 

@@ -50,18 +50,7 @@ final class EnvelopeCommand implements Callable<Integer> {
                 sb.append(p.branch().name().toLowerCase(Locale.ROOT)).append(',').append(p.temperatureK()).append(',')
                         .append(p.pressurePa()).append('\n');
             }
-            Path target = csv.toAbsolutePath();
-            Path tmp = Files.createTempFile(target.getParent(), ".ventcase-", ".tmp");
-            try {
-                Files.writeString(tmp, sb);
-                try {
-                    Files.move(tmp, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-                } catch (java.nio.file.AtomicMoveNotSupportedException e) {
-                    Files.move(tmp, target, StandardCopyOption.REPLACE_EXISTING);
-                }
-            } finally {
-                Files.deleteIfExists(tmp);
-            }
+            org.ventcase.common.AtomicFiles.writeText(sb.toString(), csv);
         }
         PrintWriter out = spec.commandLine().getOut();
         if (common.json) {

@@ -93,22 +93,7 @@ public final class CalculationSheet {
      */
     public static void write(SheetModel model, Path target, PageSize size) throws IOException {
         checkText(model);
-        Path abs = target.toAbsolutePath();
-        Path dir = abs.getParent();
-        Files.createDirectories(dir);
-        Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
-        try {
-            try (OutputStream out = Files.newOutputStream(tmp)) {
-                render(model, size, out);
-            }
-            try {
-                Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
-            }
-        } finally {
-            Files.deleteIfExists(tmp);
-        }
+        org.ventcase.common.AtomicFiles.write(target, out -> render(model, size, out));
     }
 
     /** Renders the sheet to a stream (the caller closes it). */

@@ -44,6 +44,7 @@ class AuditCommandTest {
                 + "V-3,Area 2,ammonia,,horizontal,2:1,2.4,10,1.0,80,15,,saturated,,17,,,\n");
         Path th = dir.resolve("th.csv");
         Files.writeString(th, "substance,threshold [t],label\nammonia,1,invented for the test\n");
+        Files.createDirectories(dir.resolve("out"));
         Path csv = dir.resolve("out/audit.csv");
         Path pdf = dir.resolve("out/audit.pdf");
         Run r = run("audit", reg.toString(), "-o", csv.toString(), "--pdf", pdf.toString(), "--thresholds",

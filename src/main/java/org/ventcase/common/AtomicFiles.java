@@ -1,0 +1,86 @@
+package org.ventcase.common;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.channels.Channels;
+import java.nio.channels.FileChannel;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.util.concurrent.ThreadLocalRandom;
+
+/**
+ * The one way Ventcase writes an output file: into a hidden temporary file in the target's own
+ * folder, flushed to disk, then moved over the target in one step (atomically where the file
+ * system allows). A failed write leaves the old file as it was and no temporary file behind. The
+ * temporary file is created like any other file, so the result has the user's usual permissions
+ * (a {@code Files.createTempFile} file would stay readable by its owner only). The target's folder
+ * must exist: a mistyped folder is reported, not created.
+ */
+public final class AtomicFiles {
+
+    private AtomicFiles() {
+    }
+
+    /** What writes the content. */
+    @FunctionalInterface
+    public interface Writer {
+        void write(OutputStream out) throws IOException;
+    }
+
+    /** Writes text as UTF-8. */
+    public static void writeText(String text, Path target) throws IOException {
+        byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
+        write(target, out -> out.write(bytes));
+    }
+
+    /** Writes whatever {@code writer} produces. */
+    public static void write(Path target, Writer writer) throws IOException {
+        Path abs = target.toAbsolutePath();
+        Path dir = abs.getParent();
+        if (!Files.isDirectory(dir)) {
+            throw new java.nio.file.NoSuchFileException(dir.toString(), null,
+                    "the folder does not exist (create it first; a mistyped folder is not created)");
+        }
+        Path tmp = null;
+        try {
+            tmp = newTemp(dir, abs.getFileName().toString());
+            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING);
+                 OutputStream out = Channels.newOutputStream(ch)) {
+                writer.write(out);
+                out.flush();
+                ch.force(true);
+            }
+            try {
+                Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING);
+            }
+            tmp = null;
+        } finally {
+            if (tmp != null) {
+                try {
+                    Files.deleteIfExists(tmp);
+                } catch (IOException ignored) {
+                    // the write has already failed; that error is the one reported
+                }
+            }
+        }
+    }
+
+    private static Path newTemp(Path dir, String name) throws IOException {
+        for (int i = 0; i < 100; i++) {
+            Path p = dir.resolve("." + name + "." + Long.toHexString(ThreadLocalRandom.current().nextLong()) + ".tmp");
+            try {
+                return Files.createFile(p);
+            } catch (FileAlreadyExistsException e) {
+                // try another name
+            }
+        }
+        throw new IOException("cannot create a temporary file in " + dir);
+    }
+}
