@@ -364,6 +364,7 @@ final class ReviewView {
             TextField tf = new TextField();
             tf.setId("review-tol-" + q.key());
             tf.setPrefColumnCount(5);
+            tf.setMinWidth(72);
             tf.textProperty().bindBidirectional(f.text());
             Label unit = new Label(f.unit());
             Label dflt = new Label(Messages.get("review.tolerances.default", f.defaultText()));

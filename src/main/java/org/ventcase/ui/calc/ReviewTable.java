@@ -82,16 +82,22 @@ public final class ReviewTable {
                 claimed = row.claimed().isPresent() ? q.format(row.claimed().getAsDouble()) : row.claimedText();
                 computed = row.computed().isPresent() ? q.format(row.computed().getAsDouble()) : "-";
                 if (row.difference().isPresent()) {
-                    diff = q.formatDifference(row.difference().getAsDouble());
+                    diff = unsignedZero(q.formatDifference(row.difference().getAsDouble()));
                 }
                 if (row.relativeDifference().isPresent()) {
-                    rel = String.format(Locale.ROOT, "%+.1f %%", row.relativeDifference().getAsDouble() * 100);
+                    rel = unsignedZero(String.format(Locale.ROOT, "%+.1f %%",
+                            row.relativeDifference().getAsDouble() * 100));
                 }
             }
             out.add(new Line(q, q.label(), claimed, computed, diff, rel, q.formatTolerance(row.tolerance()),
                     row.verdict(), row.withinModelUncertainty(), r.tolerances().changed(q)));
         }
         return out;
+    }
+
+    /** "-0.0 K" -> "0.0 K": a difference that rounds to zero has no direction to show. */
+    static String unsignedZero(String s) {
+        return s.matches("[-+]0(\\.0+)?( .*)?") ? s.substring(1) : s;
     }
 
     /** The possible causes under the table: every hint of every row, and why a row was not compared. */
@@ -126,7 +132,9 @@ public final class ReviewTable {
             if (q == ReviewQuantity.ORIFICE) {
                 range = row.modelOrifices().isEmpty() ? "not computed" : String.join(", ", row.modelOrifices());
             } else if (row.modelMin().isPresent()) {
-                range = q.format(row.modelMin().getAsDouble()) + " to " + q.format(row.modelMax().getAsDouble());
+                String lo = q.format(row.modelMin().getAsDouble());
+                String hi = q.format(row.modelMax().getAsDouble());
+                range = lo.equals(hi) ? lo + " (every run)" : lo + " to " + hi;
             } else {
                 range = "not computed";
             }
