@@ -73,10 +73,20 @@ public final class WizardApp extends Application {
     private final Label statusLabel = new Label();
     private StepViews steps;
     private boolean started;
+    /** True while the review screen is shown (the wizard's keys are off). */
+    private boolean reviewing;
+    private final ReviewViewModel review = new ReviewViewModel(new org.ventcase.ui.calc.ReviewRunner(),
+            LiveCalculation.Env.fx(worker), this::openCase, LiveCalculation.DEBOUNCE_MS);
+    private ReviewView reviewView;
 
     /** The view-model (for tests driving the window). */
     public WizardViewModel viewModel() {
         return vm;
+    }
+
+    /** The review mode's view-model (for tests driving the window). */
+    public ReviewViewModel reviewModel() {
+        return review;
     }
 
     private static volatile WizardApp current;
@@ -164,7 +174,8 @@ public final class WizardApp extends Application {
         });
         Button open = startButton("start.open", "start-open", this::openDialog);
         Button demo = startButton("start.demo", "start-demo", this::openDemo);
-        VBox actions = new VBox(8, blank, template, open, demo);
+        Button rev = startButton("start.review", "start-review", this::showReview);
+        VBox actions = new VBox(8, blank, template, open, demo, rev);
         VBox recent = new VBox(4);
         Label rh = new Label(Messages.get("start.recent"));
         rh.getStyleClass().add("form-heading");
@@ -240,10 +251,51 @@ public final class WizardApp extends Application {
         vm.goTo(Step.RESULTS);
     }
 
+    // ------------------------------------------------------------------------------ review mode
+
+    /** The case open in the wizard, for claimed values that name none (none from the start screen). */
+    private org.ventcase.ui.calc.ReviewRunner.OpenCase openCase() {
+        Path f = vm.file().get();
+        String name = f == null ? vm.title() : f.getFileName().toString();
+        return new org.ventcase.ui.calc.ReviewRunner.OpenCase(started ? vm.validated() : Optional.empty(), name);
+    }
+
+    /** Shows the review screen (start screen button, File menu; also used by tests). */
+    public void showReview() {
+        if (reviewView != null) {
+            reviewView.dispose();
+        }
+        reviewing = true;
+        reviewView = new ReviewView(review, () -> stage, this::closeReview);
+        root.setLeft(null);
+        root.setCenter(reviewView.build());
+        stage.setTitle(Messages.get("review.title") + " - " + Messages.get("app.title"));
+    }
+
+    /** Leaves the review screen for the case (when one is open) or the start screen. */
+    void closeReview() {
+        if (reviewView != null) {
+            reviewView.dispose();
+            reviewView = null;
+        }
+        reviewing = false;
+        if (started) {
+            enterWizard();
+        } else {
+            root.setCenter(startScreen());
+            stage.setTitle(Messages.get("app.title"));
+        }
+    }
+
     // ------------------------------------------------------------------------------ wizard shell
 
     /** Shows the steps after a case was opened or created. */
     void enterWizard() {
+        if (reviewView != null) {
+            reviewView.dispose();
+            reviewView = null;
+        }
+        reviewing = false;
         started = true;
         stepList.getStyleClass().setAll("step-list");
         stepList.setPrefWidth(210);
@@ -399,7 +451,7 @@ public final class WizardApp extends Application {
     }
 
     private void keys(KeyEvent e) {
-        if (!started) {
+        if (!started || reviewing) {
             return;
         }
         if (new KeyCodeCombination(KeyCode.Z, KeyCombination.SHORTCUT_DOWN).match(e)) {
@@ -433,9 +485,15 @@ public final class WizardApp extends Application {
                 this::save);
         MenuItem sa = item("menu.file.saveAs", new KeyCodeCombination(KeyCode.S, KeyCombination.SHORTCUT_DOWN,
                 KeyCombination.SHIFT_DOWN), this::saveAs);
+        MenuItem rv = item("menu.file.review", null, this::showReview);
         MenuItem st = item("menu.file.start", null, () -> {
             if (confirmDiscard()) {
                 vm.discardAutosave();
+                if (reviewView != null) {
+                    reviewView.dispose();
+                    reviewView = null;
+                }
+                reviewing = false;
                 root.setLeft(null);
                 root.setCenter(startScreen());
             }
@@ -446,7 +504,7 @@ public final class WizardApp extends Application {
                 Platform.exit();
             }
         });
-        Menu file = new Menu(Messages.get("menu.file"), null, nw, op, sv, sa, st, ex);
+        Menu file = new Menu(Messages.get("menu.file"), null, nw, op, sv, sa, rv, st, ex);
         MenuItem un = item("menu.edit.undo", null, vm::undo);
         un.disableProperty().bind(vm.canUndo().not());
         MenuItem re = item("menu.edit.redo", null, vm::redo);

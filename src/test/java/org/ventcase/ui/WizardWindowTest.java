@@ -269,4 +269,55 @@ class WizardWindowTest {
         });
         awaitCurrent();
     }
+    @Test
+    @Order(3)
+    void theReviewScreenShowsTheDeviationTableAndAHintOfADemoFile() throws Exception {
+        fx(() -> {
+            app.showReview();
+            return null;
+        });
+        settle();
+        assertTrue(text("review-status").startsWith("No claimed values"), text("review-status"));
+        shot("30-review-empty");
+        fx(() -> {
+            @SuppressWarnings("unchecked")
+            javafx.scene.control.ChoiceBox<String> examples = (javafx.scene.control.ChoiceBox<String>) app.stage()
+                    .getScene().lookup("#review-examples");
+            examples.setValue("propane-bullet-latent-at-storage.json");
+            ((Button) app.stage().getScene().lookup("#review-open-example")).fire();
+            return null;
+        });
+        long end = System.currentTimeMillis() + 60_000;
+        while (fx(() -> app.reviewModel().state().get()) != ReviewViewModel.State.CURRENT
+                && fx(() -> app.reviewModel().state().get()) != ReviewViewModel.State.FAILED
+                && System.currentTimeMillis() < end) {
+            Thread.sleep(100);
+        }
+        settle();
+        assertEquals(ReviewViewModel.State.CURRENT, fx(() -> app.reviewModel().state().get()),
+                () -> "review did not finish: " + app.reviewModel().message().get());
+        assertNotNull(lookup("review-table"), "the deviation table is shown");
+        assertEquals("Latent heat L", text("review-row-latentHeat"));
+        assertTrue(text("review-verdict-latentHeat").startsWith("disagrees"), text("review-verdict-latentHeat"));
+        Node causes = lookup("review-causes");
+        String all = fx(() -> causes.lookupAll(".cause-code").stream().map(n -> ((Label) n).getText())
+                .reduce("", (a, b) -> a + " " + b));
+        assertTrue(all.contains("latent-heat-at-storage"), all);
+        assertTrue(text("review-deferral").contains("qualified engineer"));
+        assertNotNull(lookup("review-range"), "the model range is shown");
+        shot("31-review-latent-at-storage");
+        for (double v : new double[] {0.45, 1.0}) {
+            fx(() -> {
+                ((javafx.scene.control.ScrollPane) app.stage().getScene().lookup(".page-scroll")).setVvalue(v);
+                return null;
+            });
+            shot("32-review-scrolled-" + Math.round(v * 100));
+        }
+        fx(() -> {
+            app.closeReview();
+            return null;
+        });
+        settle();
+        assertNotNull(lookup("next"), "closing the review returns to the open case");
+    }
 }
