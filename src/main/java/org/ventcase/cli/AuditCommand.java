@@ -221,8 +221,7 @@ final class AuditCommand implements Callable<Integer> {
 
     private static void print(PrintWriter out, AuditResult r, String register) {
         out.println("VENTCASE AUDIT: " + register);
-        out.println("First-pass estimate only. Final relief design must be verified by a qualified engineer under the");
-        out.println("applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) and local regulations.");
+        DemoCommand.CAUTIONS.forEach(out::println);
         out.println();
         out.printf(Locale.ROOT, "Rows %d: ok %d, partial %d, error %d%n", r.rows().size(),
                 r.count(VesselAudit.Status.OK), r.count(VesselAudit.Status.PARTIAL), r.count(VesselAudit.Status.ERROR));

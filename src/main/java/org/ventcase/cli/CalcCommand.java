@@ -81,8 +81,7 @@ final class CalcCommand implements Callable<Integer> {
 
     private static void print(PrintWriter out, CaseResult r) {
         out.println("VENTCASE CALC: " + r.title() + " (" + r.tag() + ")");
-        out.println("First-pass estimate only. Final relief design must be verified by a qualified engineer under the");
-        out.println("applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) and local regulations.");
+        DemoCommand.CAUTIONS.forEach(out::println);
         out.println("Input hash " + r.inputHash());
         out.println();
         List<CaseResult.ScenarioResult> order = new ArrayList<>();

@@ -125,8 +125,7 @@ final class ReviewCommand implements Callable<Integer> {
 
     static void print(PrintWriter out, ReviewResult r, Path kase, Path claimed) {
         out.println("VENTCASE REVIEW: " + r.title() + " (" + r.tag() + ")");
-        out.println("First-pass estimate only. Final relief design must be verified by a qualified engineer under the");
-        out.println("applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) and local regulations.");
+        DemoCommand.CAUTIONS.forEach(out::println);
         out.println("Case " + kase + ", input hash " + r.inputHash());
         out.println("Claimed values " + claimed + (r.source().isEmpty() ? "" : " (" + r.source() + ")"));
         out.printf(Locale.ROOT, "Scenario %d. %s [%s], %s%n", r.scenarioIndex() + 1, r.scenarioLabel(),
