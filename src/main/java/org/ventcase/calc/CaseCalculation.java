@@ -314,19 +314,19 @@ public final class CaseCalculation {
             if (s instanceof CaseInput.WettedFire f) {
                 wetted(c, f, o);
             } else if (s instanceof CaseInput.BoilOffFire f) {
-                o.trace.add(relievingStep(rp));
+                o.trace.add(relievingStep(s.relieving(), rp));
                 boilOff(c, f, rp.relievingPressurePa(), o);
             } else if (s instanceof CaseInput.NearCriticalFire f) {
-                o.trace.add(relievingStep(rp));
+                o.trace.add(relievingStep(s.relieving(), rp));
                 nearCritical(c, f, rp.relievingPressurePa(), o);
             } else if (s instanceof CaseInput.GasFilledFire f) {
-                o.trace.add(relievingStep(rp));
+                o.trace.add(relievingStep(s.relieving(), rp));
                 gasFilled(c, f, rp.relievingPressurePa(), o);
             } else if (s instanceof CaseInput.BlockedOutlet f) {
-                o.trace.add(relievingStep(rp));
+                o.trace.add(relievingStep(s.relieving(), rp));
                 blocked(c, f, rp.relievingPressurePa(), o);
             } else if (s instanceof CaseInput.ThermalExpansion f) {
-                o.trace.add(relievingStep(rp));
+                o.trace.add(relievingStep(s.relieving(), rp));
                 thermal(c, f, rp.relievingPressurePa(), o);
             }
         } catch (NoSolutionException | InvalidInputException e) {
@@ -581,9 +581,12 @@ public final class CaseCalculation {
                 .note(os.ruleApplied()).build();
     }
 
-    private static TraceStep relievingStep(RelievingPressureResult rp) {
+    private static TraceStep relievingStep(org.ventcase.relief.RelievingPressureInput in, RelievingPressureResult rp) {
         return TraceStep.of("Relieving pressure").equation("P1 = set pressure + allowable overpressure + P_atm")
                 .source(rp.source())
+                .in("Set pressure", String.format(Locale.US, "%.1f kPa gauge", in.setPressureGaugePa() / 1e3))
+                .in("MAWP", String.format(Locale.US, "%.1f kPa gauge", in.mawpGaugePa() / 1e3))
+                .in("Atmospheric pressure", String.format(Locale.US, "%.3f kPa abs", in.atmosphericPa() / 1e3))
                 .out("Overpressure above set", String.format(Locale.US, "%.1f kPa (%.1f %% of set)",
                         rp.overpressurePa() / 1e3, rp.overpressurePercentOfSet()))
                 .out("P1", String.format(Locale.US, "%.1f kPa abs", rp.relievingPressurePa() / 1e3))

@@ -69,7 +69,12 @@ public final class MixtureFire {
         warnings.addAll(rp.warnings());
         double p1 = rp.relievingPressurePa();
         trace.add(TraceStep.of("Relieving pressure").equation("P1 = MAWP + allowable accumulation + P_atm")
-                .source(rp.source()).out("P1", ScenarioSupport.kpa(p1) + " abs").note(rp.ruleApplied()).build());
+                .source(rp.source())
+                .in("Set pressure", String.format(Locale.US, "%.1f kPa gauge", in.relieving().setPressureGaugePa() / 1e3))
+                .in("MAWP", String.format(Locale.US, "%.1f kPa gauge", in.relieving().mawpGaugePa() / 1e3))
+                .in("Atmospheric pressure", String.format(Locale.US, "%.3f kPa abs", in.relieving().atmosphericPa() / 1e3))
+                .out("Accumulation", String.format(Locale.US, "%.1f kPa", rp.accumulationPa() / 1e3))
+                .out("P1", ScenarioSupport.kpa(p1) + " abs").note(rp.ruleApplied()).build());
 
         LevelState vs = LevelState.of(in.vessel(), in.level(), in.exposure());
         trace.add(TraceStep.of("Vessel and fire-exposed wetted area")
