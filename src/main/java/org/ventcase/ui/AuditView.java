@@ -117,8 +117,10 @@ final class AuditView {
             thName.setText(avm.thresholdsFile().get().map(AuditRunner.Input::name)
                     .orElse(Messages.get("audit.thresholds.none")));
             cancel.setDisable(!busy);
-            cancel.setVisible(busy);
-            bar.setVisible(busy);
+            for (Node x : new Node[] {cancel, bar}) {
+                x.setVisible(busy);
+                x.setManaged(busy);
+            }
             int n = avm.total().get();
             bar.setProgress(n == 0 ? ProgressBar.INDETERMINATE_PROGRESS : (double) avm.done().get() / n);
             status.setText(switch (st) {
@@ -154,7 +156,7 @@ final class AuditView {
         show.run();
         refill.run();
 
-        page.getChildren().addAll(h, intro, chooser, thRow, controls, cautions(), body, export());
+        page.getChildren().addAll(h, intro, chooser, thRow, controls, body, export(), cautions());
         ScrollPane sp = new ScrollPane(page);
         sp.setFitToWidth(true);
         sp.getStyleClass().add("page-scroll");
@@ -197,13 +199,18 @@ final class AuditView {
         Label basis = new Label(Messages.get("audit.basis", o.registerName(),
                 o.thresholdsName().orElse(Messages.get("audit.thresholds.none")), o.inputHash().substring(0, 12)));
         basis.getStyleClass().add("hint");
-        body.getChildren().addAll(counts, site, basis);
+        Label firstPass = new Label(Messages.get("audit.firstPass"));
+        firstPass.setId("audit-first-pass");
+        firstPass.setWrapText(true);
+        firstPass.getStyleClass().add("warning");
+        body.getChildren().addAll(counts, site, basis, firstPass);
 
         GridPane areas = table("audit-by-area", List.of("area", "vessels", "liquid", "vapour", "total"), r.byArea(),
                 g -> cells(g.name(), Integer.toString(g.vessels()), t(g.liquidMassKg()), t(g.vapourMassKg()),
-                        t(g.totalMassKg())), 1);
+                        t(g.totalMassKg())), 1, 4);
         GridPane comps = table("audit-by-component", List.of("component", "total"),
-                new ArrayList<>(r.site().massPerComponentKg().entrySet()), e -> cells(e.getKey(), t(e.getValue())), 1);
+                new ArrayList<>(r.site().massPerComponentKg().entrySet()),
+                e -> cells(e.getKey(), t(e.getValue())), 1, 1);
         HBox totals = new HBox(40, section("audit.byArea", areas), section("audit.byComponent", comps));
         body.getChildren().add(totals);
 
@@ -219,7 +226,7 @@ final class AuditView {
                         v.getStyleClass().addAll("verdict", c.siteExceeds() ? "verdict-disagrees" : "verdict-agrees");
                         v.setId("audit-threshold-" + c.entry().component().name());
                         return cs;
-                    }, 1);
+                    }, 1, 2);
             body.getChildren().add(section("audit.thresholds.heading", th));
         }
 
@@ -229,11 +236,11 @@ final class AuditView {
                 v.fire().map(f -> kgh(f.reliefLoadKgPerS())).orElse(""),
                 v.fire().map(f -> mm2(f.requiredAreaM2())).orElse(""),
                 v.fire().map(VesselAudit.FireLoad::selectedOrifice).orElse(""));
-        body.getChildren().add(new HBox(40,
+        body.getChildren().addAll(
                 section(Messages.get("audit.top.inventory", AuditRunner.TOP),
-                        table("audit-top-inventory", vesselCols, o.topByInventory(), vessel, 4)),
+                        table("audit-top-inventory", vesselCols, o.topByInventory(), vessel, 4, 6)),
                 section(Messages.get("audit.top.fire", AuditRunner.TOP),
-                        table("audit-top-fire", vesselCols, o.topByFireLoad(), vessel, 4))));
+                        table("audit-top-fire", vesselCols, o.topByFireLoad(), vessel, 4, 6)));
 
         List<VesselAudit> bad = o.notComputed();
         Node badNode = bad.isEmpty() ? new Label(Messages.get("audit.notComputed.none"))
@@ -244,9 +251,9 @@ final class AuditView {
                                             .orElse(""), v.error().map(org.ventcase.audit.AuditError::reason)
                                             .orElse(""));
                             cs.get(5).setWrapText(true);
-                            cs.get(5).setMaxWidth(560);
+                            cs.get(5).setMaxWidth(640);
                             return cs;
-                        }, 99);
+                        }, 0, 0);
         body.getChildren().add(section("audit.notComputed", badNode, more(bad.size())));
 
         List<VesselAudit> shorts = o.installedShort();
@@ -258,7 +265,7 @@ final class AuditView {
                             return cells(Integer.toString(v.row()), v.tag(), v.area(), mm2(f.requiredAreaM2()),
                                     ic.designation() + " (" + mm2(ic.areaM2()) + ")",
                                     String.format(Locale.ROOT, "%+.0f %%", ic.marginPercent()));
-                        }, 3);
+                        }, 3, 5);
         body.getChildren().add(section("audit.short", shortNode, more(shorts.size())));
     }
 
@@ -282,9 +289,9 @@ final class AuditView {
         return out;
     }
 
-    /** A table of labels; columns from {@code firstNumber} on (up to the text columns) are right-aligned numbers. */
+    /** A table of labels; columns {@code firstNumber} to {@code lastNumber} hold numbers. */
     private static <T> GridPane table(String id, List<String> cols, List<T> rows, Function<T, List<Label>> cells,
-                                      int firstNumber) {
+                                      int firstNumber, int lastNumber) {
         GridPane g = new GridPane();
         g.setId(id);
         g.getStyleClass().add("results-table");
@@ -304,7 +311,7 @@ final class AuditView {
                 if (!l.isWrapText()) {
                     l.setMinWidth(Region.USE_PREF_SIZE);
                 }
-                if (c >= firstNumber && !l.getStyleClass().contains("verdict")) {
+                if (c >= firstNumber && c <= lastNumber && !l.getStyleClass().contains("verdict")) {
                     l.getStyleClass().add("number");
                 }
                 g.add(l, c, row);
