@@ -124,4 +124,15 @@ class AuditViewModelTest {
         assertEquals(AuditViewModel.State.FAILED, vm.state().get());
         assertTrue(vm.message().get().contains("no-such-register.csv"), vm.message().get());
     }
+
+    @Test
+    void aCancelDuringTheRunStopsTheWorkersWithCancelled() {
+        for (int threads : new int[] {1, 3}) {
+            java.util.concurrent.atomic.AtomicInteger seen = new java.util.concurrent.atomic.AtomicInteger();
+            org.junit.jupiter.api.Assertions.assertThrows(org.ventcase.ui.calc.CaseRunner.Cancelled.class,
+                    () -> new AuditRunner().run(AuditRunner.Input.file(REGISTER), Optional.empty(), threads,
+                            (d, n) -> seen.incrementAndGet(), () -> seen.get() > 5));
+            assertTrue(seen.get() < 100, "stopped early, not after the whole register: " + seen.get());
+        }
+    }
 }
