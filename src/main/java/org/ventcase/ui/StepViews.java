@@ -51,6 +51,22 @@ final class StepViews {
         this.window = window;
     }
 
+    /** Where the PDF sheet is written, given a suggested file name: the save dialog (tests set a fixed file). */
+    private java.util.function.Function<String, Optional<Path>> sheetTarget = this::chooseSheet;
+
+    private Optional<Path> chooseSheet(String name) {
+        FileChooser fc = new FileChooser();
+        fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("PDF", "*.pdf"));
+        fc.setInitialFileName(name);
+        java.io.File target = fc.showSaveDialog(window.get());
+        return Optional.ofNullable(target).map(java.io.File::toPath);
+    }
+
+    /** Replaces the save dialog of the Export step (window tests). */
+    void sheetTarget(java.util.function.Function<String, Optional<Path>> chooser) {
+        sheetTarget = chooser;
+    }
+
     Node build(Step s) {
         leave.forEach(Runnable::run);
         leave.clear();
@@ -546,15 +562,9 @@ final class StepViews {
             write.setDisable(true);
             status.setText(Messages.get("results.blocked"));
         }
-        write.setOnAction(e -> {
-            FileChooser fc = new FileChooser();
-            fc.getExtensionFilters().add(new FileChooser.ExtensionFilter("PDF", "*.pdf"));
-            fc.setInitialFileName(vm.valueAt("$.identity.tag").replaceAll("[^A-Za-z0-9_-]", "_") + "-relief-basis.pdf");
-            java.io.File target = fc.showSaveDialog(window.get());
-            if (target != null) {
-                writeSheet(kase.get(), target.toPath(), units.getValue(), page.getValue(), status);
-            }
-        });
+        write.setOnAction(e -> sheetTarget.apply(vm.valueAt("$.identity.tag").replaceAll("[^A-Za-z0-9_-]", "_")
+                + "-relief-basis.pdf").ifPresent(target -> writeSheet(kase.get(), target, units.getValue(),
+                page.getValue(), status)));
         VBox box = new VBox(16, f.grid(), cautions());
         box.setPadding(new Insets(0));
         return box;

@@ -73,15 +73,28 @@ public final class WizardApp extends Application {
     private final Label statusLabel = new Label();
     private StepViews steps;
     private boolean started;
-    /** True while the review screen is shown (the wizard's keys are off). */
+    /** True while the review or audit screen is shown (the wizard's keys are off). */
     private boolean reviewing;
     private final ReviewViewModel review = new ReviewViewModel(new org.ventcase.ui.calc.ReviewRunner(),
             LiveCalculation.Env.fx(worker), this::openCase, LiveCalculation.DEBOUNCE_MS);
     private ReviewView reviewView;
+    private final AuditViewModel audit = new AuditViewModel(new org.ventcase.ui.calc.AuditRunner(),
+            LiveCalculation.Env.fx(worker), Math.max(1, Runtime.getRuntime().availableProcessors() - 1));
+    private AuditView auditView;
 
     /** The view-model (for tests driving the window). */
     public WizardViewModel viewModel() {
         return vm;
+    }
+
+    /** The step views (for tests driving the window). */
+    StepViews steps() {
+        return steps;
+    }
+
+    /** The audit mode's view-model (for tests driving the window). */
+    public AuditViewModel auditModel() {
+        return audit;
     }
 
     /** The review mode's view-model (for tests driving the window). */
@@ -175,7 +188,8 @@ public final class WizardApp extends Application {
         Button open = startButton("start.open", "start-open", this::openDialog);
         Button demo = startButton("start.demo", "start-demo", this::openDemo);
         Button rev = startButton("start.review", "start-review", this::showReview);
-        VBox actions = new VBox(8, blank, template, open, demo, rev);
+        Button aud = startButton("start.audit", "start-audit", this::showAudit);
+        VBox actions = new VBox(8, blank, template, open, demo, rev, aud);
         VBox recent = new VBox(4);
         Label rh = new Label(Messages.get("start.recent"));
         rh.getStyleClass().add("form-heading");
@@ -262,9 +276,7 @@ public final class WizardApp extends Application {
 
     /** Shows the review screen (start screen button, File menu; also used by tests). */
     public void showReview() {
-        if (reviewView != null) {
-            reviewView.dispose();
-        }
+        disposeModes();
         reviewing = true;
         reviewView = new ReviewView(review, () -> stage, this::closeReview);
         root.setLeft(null);
@@ -272,12 +284,31 @@ public final class WizardApp extends Application {
         stage.setTitle(Messages.get("review.title") + " - " + Messages.get("app.title"));
     }
 
-    /** Leaves the review screen for the case (when one is open) or the start screen. */
-    void closeReview() {
+    /** Shows the audit screen (start screen button, File menu; also used by tests). */
+    public void showAudit() {
+        disposeModes();
+        reviewing = true;
+        auditView = new AuditView(audit, () -> stage, this::closeReview);
+        root.setLeft(null);
+        root.setCenter(auditView.build());
+        stage.setTitle(Messages.get("audit.title") + " - " + Messages.get("app.title"));
+    }
+
+    /** Removes the review and audit screens' listeners. */
+    private void disposeModes() {
         if (reviewView != null) {
             reviewView.dispose();
             reviewView = null;
         }
+        if (auditView != null) {
+            auditView.dispose();
+            auditView = null;
+        }
+    }
+
+    /** Leaves the review or audit screen for the case (when one is open) or the start screen. */
+    void closeReview() {
+        disposeModes();
         reviewing = false;
         if (started) {
             enterWizard();
@@ -291,10 +322,7 @@ public final class WizardApp extends Application {
 
     /** Shows the steps after a case was opened or created. */
     void enterWizard() {
-        if (reviewView != null) {
-            reviewView.dispose();
-            reviewView = null;
-        }
+        disposeModes();
         reviewing = false;
         started = true;
         stepList.getStyleClass().setAll("step-list");
@@ -486,13 +514,11 @@ public final class WizardApp extends Application {
         MenuItem sa = item("menu.file.saveAs", new KeyCodeCombination(KeyCode.S, KeyCombination.SHORTCUT_DOWN,
                 KeyCombination.SHIFT_DOWN), this::saveAs);
         MenuItem rv = item("menu.file.review", null, this::showReview);
+        MenuItem au = item("menu.file.audit", null, this::showAudit);
         MenuItem st = item("menu.file.start", null, () -> {
             if (confirmDiscard()) {
                 vm.discardAutosave();
-                if (reviewView != null) {
-                    reviewView.dispose();
-                    reviewView = null;
-                }
+                disposeModes();
                 reviewing = false;
                 root.setLeft(null);
                 root.setCenter(startScreen());
@@ -504,7 +530,7 @@ public final class WizardApp extends Application {
                 Platform.exit();
             }
         });
-        Menu file = new Menu(Messages.get("menu.file"), null, nw, op, sv, sa, rv, st, ex);
+        Menu file = new Menu(Messages.get("menu.file"), null, nw, op, sv, sa, rv, au, st, ex);
         MenuItem un = item("menu.edit.undo", null, vm::undo);
         un.disableProperty().bind(vm.canUndo().not());
         MenuItem re = item("menu.edit.redo", null, vm::redo);

@@ -127,6 +127,7 @@ class WizardWindowTest {
     @Test
     @Order(1)
     void walksATemplateThroughEveryStepShowsAMessageSavesAndReopens() throws Exception {
+        java.util.List<String> before = new java.util.ArrayList<>();
         shot("00-start");
         fx(() -> {
             app.viewModel().newFromTemplate("horizontal-bullet");
@@ -169,7 +170,27 @@ class WizardWindowTest {
                 String cautions = fx(deferral::getText);
                 assertTrue(cautions.contains("ASME BPVC Section VIII"));
                 assertTrue(cautions.contains("qualified engineer"));
+                awaitCurrent();
+                before.addAll(results());
+                assertFalse(before.isEmpty());
                 shot("07-results-done");
+            }
+            if (s == Step.EXPORT) {
+                // export the PDF sheet from the Export step (the save dialog replaced by a fixed file)
+                Path pdf = home.resolve("walked-sheet.pdf");
+                fx(() -> {
+                    app.steps().sheetTarget(name -> java.util.Optional.of(pdf));
+                    ((Button) app.stage().getScene().lookup("#write-sheet")).fire();
+                    return null;
+                });
+                long end = System.currentTimeMillis() + 60_000;
+                while (!text("export-status").startsWith("Sheet written") && System.currentTimeMillis() < end) {
+                    Thread.sleep(100);
+                }
+                assertTrue(text("export-status").startsWith("Sheet written"), text("export-status"));
+                byte[] b = Files.readAllBytes(pdf);
+                assertTrue(b.length > 1000);
+                assertEquals("%PDF", new String(b, 0, 4, java.nio.charset.StandardCharsets.US_ASCII));
             }
             if (s != Step.EXPORT) {
                 Button next = (Button) lookup("next");
@@ -193,6 +214,19 @@ class WizardWindowTest {
         assertEquals(saved, fx(() -> app.viewModel().caseJson()));
         assertEquals(saved, CaseFiles.toJson(CaseFiles.read(f)));
         assertFalse(fx(() -> app.viewModel().dirty().get()));
+        // the reopened case computes the same results as the case did before it was saved
+        fx(() -> {
+            app.viewModel().goTo(Step.RESULTS);
+            return null;
+        });
+        awaitCurrent();
+        assertEquals(before, results());
+    }
+
+    /** Every scenario's label, required area (full precision) and orifice, as the live calculation has them. */
+    private static java.util.List<String> results() throws Exception {
+        return fx(() -> app.viewModel().summary().get().orElseThrow().scenarios().stream()
+                .map(r -> r.label() + " | " + r.requiredAreaM2() + " | " + r.orifice()).toList());
     }
 
     private static LiveCalculation.State liveState() throws Exception {
@@ -319,5 +353,55 @@ class WizardWindowTest {
         });
         settle();
         assertNotNull(lookup("next"), "closing the review returns to the open case");
+    }
+
+    @Test
+    @Order(4)
+    void theAuditScreenShowsTheDemoRegistersCountsTotalsChecksAndRowsNotComputed() throws Exception {
+        fx(() -> {
+            app.showAudit();
+            return null;
+        });
+        settle();
+        assertTrue(text("audit-status").startsWith("No register chosen"), text("audit-status"));
+        fx(() -> {
+            ((Button) app.stage().getScene().lookup("#audit-open-demo")).fire();
+            return null;
+        });
+        long end = System.currentTimeMillis() + 120_000;
+        while (fx(() -> app.auditModel().state().get()) == AuditViewModel.State.RUNNING
+                && System.currentTimeMillis() < end) {
+            Thread.sleep(100);
+        }
+        settle();
+        assertEquals(AuditViewModel.State.DONE, fx(() -> app.auditModel().state().get()),
+                () -> "audit did not finish: " + app.auditModel().message().get());
+        org.ventcase.ui.calc.AuditRunner.Outcome o = fx(() -> app.auditModel().outcome().get().orElseThrow());
+        assertTrue(text("audit-counts").contains("error " + o.count(org.ventcase.audit.VesselAudit.Status.ERROR)),
+                text("audit-counts"));
+        assertNotNull(lookup("audit-by-area"));
+        assertNotNull(lookup("audit-by-component"));
+        assertNotNull(lookup("audit-top-inventory"));
+        assertNotNull(lookup("audit-top-fire"));
+        assertNotNull(lookup("audit-not-computed"));
+        String verdict = text("audit-threshold-propane");
+        assertTrue(verdict.equals("EXCEEDED") || verdict.equals("below"), verdict);
+        assertTrue(text("audit-deferral").contains("qualified engineer"));
+        Node writePdf = lookup("audit-write-pdf");
+        assertFalse(fx(writePdf::isDisabled));
+        shot("40-audit-demo");
+        for (double v : new double[] {0.5, 1.0}) {
+            fx(() -> {
+                ((javafx.scene.control.ScrollPane) app.stage().getScene().lookup(".page-scroll")).setVvalue(v);
+                return null;
+            });
+            shot("41-audit-scrolled-" + Math.round(v * 100));
+        }
+        fx(() -> {
+            app.closeReview();
+            return null;
+        });
+        settle();
+        assertNotNull(lookup("next"), "closing the audit returns to the open case");
     }
 }
