@@ -48,14 +48,65 @@ public final class SaturationPoints {
         this.model = model;
     }
 
-    /** Bubble pressure at T. */
+    /** Bubble pressure at T (continued from a lower temperature where a direct start fails; see below). */
     public SaturationPoint bubblePressure(double t, double[] z) {
-        return pressure(Kind.BUBBLE, t, z, Double.NaN, null);
+        return pressureWithContinuation(Kind.BUBBLE, t, z);
     }
 
     /** Dew pressure at T (the lower, normal dew point where the iteration started from Wilson reaches it). */
     public SaturationPoint dewPressure(double t, double[] z) {
-        return pressure(Kind.DEW, t, z, Double.NaN, null);
+        return pressureWithContinuation(Kind.DEW, t, z);
+    }
+
+    /** Steps of the temperature continuation. */
+    static final int CONTINUATION_STEPS = 20;
+
+    /**
+     * Near a mixture's critical point the Wilson start can lie so close to K = 1 that the
+     * iteration falls into the trivial solution although a saturation point exists. Then the point
+     * is found where it is easy (at a lower temperature, 5, 10, 20 ... K below) and followed back up
+     * to T in small steps, each started from the previous solution (natural-parameter
+     * continuation; M.L. Michelsen, Fluid Phase Equilib. 4 (1980) 1, the same idea as the envelope
+     * tracer). Where even that fails, the original message stands: there is no point there.
+     */
+    private SaturationPoint pressureWithContinuation(Kind kind, double t, double[] z) {
+        try {
+            return pressure(kind, t, z, Double.NaN, null);
+        } catch (NoSolutionException | org.ventcase.common.ConvergenceException first) {
+            SaturationPoint cur = null;
+            double t0 = t;
+            for (double dt = 5; dt <= 0.5 * t && cur == null; dt *= 2) {
+                try {
+                    cur = pressure(kind, t - dt, z, Double.NaN, null);
+                    t0 = t - dt;
+                } catch (NoSolutionException | org.ventcase.common.ConvergenceException e) {
+                    // try further below
+                }
+            }
+            if (cur == null) {
+                throw first;
+            }
+            for (int k = 1; k <= CONTINUATION_STEPS; k++) {
+                double tk = t0 + (t - t0) * k / CONTINUATION_STEPS;
+                double[] kv = cur.kValues();
+                double[] lnK = new double[kv.length];
+                for (int i = 0; i < kv.length; i++) {
+                    lnK[i] = Math.log(kv[i]);
+                }
+                try {
+                    cur = pressure(kind, tk, z, cur.pressurePa(), lnK);
+                } catch (NoSolutionException | org.ventcase.common.ConvergenceException e) {
+                    throw first;
+                }
+            }
+            List<String> w = new java.util.ArrayList<>(cur.warnings());
+            w.add(String.format(Locale.US, "The %s point was found by continuation in temperature from %.2f K: the "
+                    + "direct start fell into the trivial solution (K -> 1), as it can close to the mixture's critical "
+                    + "point; results this close to the critical point are sensitive to the equation of state.",
+                    kind.label(), t0));
+            return new SaturationPoint(cur.kind(), cur.temperatureK(), cur.pressurePa(), cur.feed(),
+                    cur.incipientComposition(), cur.kValues(), cur.iterations(), w);
+        }
     }
 
     /** Bubble temperature at P. */
