@@ -182,15 +182,7 @@ final class CaseSheet {
         Vessel v = in.vessel();
         LevelState vs = r.vessel();
         List<Row> vessel = new ArrayList<>();
-        vessel.add(Row.of("Arrangement", v.describe()));
-        vessel.add(Row.of("Inside diameter", u.plain(Kind.LENGTH, v.diameter())));
-        if (v.shape() != Vessel.Shape.SPHERE) {
-            vessel.add(Row.of("Tangent-to-tangent length", u.plain(Kind.LENGTH, v.tangentLength())));
-            vessel.add(Row.of(v.shape() == Vessel.Shape.HORIZONTAL_CYLINDER ? "Head depths (left / right)"
-                    : "Head depths (bottom / top)", u.plain(Kind.LENGTH, v.firstHeadDepth()) + " / "
-                    + u.plain(Kind.LENGTH, v.secondHeadDepth())));
-        }
-        vessel.add(Row.of("Inside height", u.plain(Kind.LENGTH, v.totalHeight())));
+        vessel.addAll(SheetModels.vesselGeometryRows(v, u));
         vessel.add(Row.of("Vessel bottom above grade", u.plain(Kind.LENGTH, in.exposure().bottomElevation())));
         vessel.add(Row.of("Skirted bottom head excluded from the fire area",
                 in.exposure().excludeSkirtedBottomHead() ? "yes" : "no"));

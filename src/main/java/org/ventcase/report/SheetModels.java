@@ -119,15 +119,7 @@ public final class SheetModels {
                         + (in.eos().hasVolumeShift() ? " (" + in.eos().volumeShiftCitation() + ")" : ""))), ""));
         Vessel v = in.vessel();
         List<Row> vessel = new ArrayList<>();
-        vessel.add(Row.of("Arrangement", v.describe()));
-        vessel.add(Row.of("Inside diameter", u.plain(Kind.LENGTH, v.diameter())));
-        if (v.shape() != Vessel.Shape.SPHERE) {
-            vessel.add(Row.of("Tangent-to-tangent length", u.plain(Kind.LENGTH, v.tangentLength())));
-            vessel.add(Row.of(v.shape() == Vessel.Shape.HORIZONTAL_CYLINDER ? "Head depths (left / right)"
-                    : "Head depths (bottom / top)", u.plain(Kind.LENGTH, v.firstHeadDepth()) + " / "
-                    + u.plain(Kind.LENGTH, v.secondHeadDepth())));
-        }
-        vessel.add(Row.of("Inside height", u.plain(Kind.LENGTH, v.totalHeight())));
+        vessel.addAll(SheetModels.vesselGeometryRows(v, u));
         vessel.add(Row.of("Total volume", u.plain(Kind.VOLUME, vs.totalVolume())));
         vessel.add(Row.of("Total inside area", u.plain(Kind.AREA, vs.totalInsideArea())));
         t.add(Table.keyValue("Vessel (inside dimensions)", vessel, ""));
@@ -160,6 +152,21 @@ public final class SheetModels {
                 Row.of("Kd / Kb / Kc", String.format(Locale.ROOT, "%.3f / %.3f / %.3f", in.kd(), in.kb(), in.kc()))),
                 ""));
         return t;
+    }
+
+    /** The rows that describe a vessel's inside geometry, shared by every sheet that shows a vessel. */
+    static List<Row> vesselGeometryRows(Vessel v, DisplayUnits u) {
+        List<Row> vessel = new ArrayList<>();
+        vessel.add(Row.of("Arrangement", v.describe()));
+        vessel.add(Row.of("Inside diameter", u.plain(Kind.LENGTH, v.diameter())));
+        if (v.shape() != Vessel.Shape.SPHERE) {
+            vessel.add(Row.of("Tangent-to-tangent length", u.plain(Kind.LENGTH, v.tangentLength())));
+            vessel.add(Row.of(v.shape() == Vessel.Shape.HORIZONTAL_CYLINDER ? "Head depths (left / right)"
+                    : "Head depths (bottom / top)", u.plain(Kind.LENGTH, v.firstHeadDepth()) + " / "
+                    + u.plain(Kind.LENGTH, v.secondHeadDepth())));
+        }
+        vessel.add(Row.of("Inside height", u.plain(Kind.LENGTH, v.totalHeight())));
+        return vessel;
     }
 
     static String levelText(Level level, DisplayUnits u) {
