@@ -37,7 +37,7 @@ import org.ventcase.vessel.Vessel;
 public final class RegisterCases {
 
     /** Default equation of state when the register has no eos column or the cell is blank. */
-    public static final EosVariant DEFAULT_EOS = EosVariant.PR78;
+    public static final EosVariant DEFAULT_EOS = EosVariant.DEFAULT;
 
     /**
      * Relative difference between a saturated row's stated pressure and the computed bubble pressure

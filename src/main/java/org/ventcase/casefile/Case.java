@@ -49,7 +49,7 @@ public record Case(Integer schemaVersion, Identity identity, Fluid fluid, Vessel
 
     /**
      * @param components   the mixture; mole fractions sum to 1
-     * @param eos          equation of state: vdW, RK, SRK, PR76, PR78 (PR = PR78)
+     * @param eos          equation of state: PR-Twu, vdW, RK, SRK, PR76, PR78 (PR = PR78)
      * @param kij          binary interaction parameters other than 0; optional
      * @param densityBasis liquid density from the translated (Peneloux-type) or the cubic volume
      */

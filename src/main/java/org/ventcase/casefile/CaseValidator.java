@@ -280,13 +280,13 @@ public final class CaseValidator {
         Optional<EosVariant> eos = f.eos() == null ? Optional.empty() : attempt("$.fluid.eos",
                 () -> EosVariant.parse("$.fluid.eos", f.eos()));
         if (f.eos() == null) {
-            missing("$.fluid.eos", "expected one of vdW, RK, SRK, PR76, PR78 (PR = PR78)");
+            missing("$.fluid.eos", "expected one of " + EosVariant.ACCEPTED);
         }
         Optional<DensityBasis> basis = choice("$.fluid.densityBasis", f.densityBasis(),
                 options("translated", DensityBasis.TRANSLATED, "cubic", DensityBasis.CUBIC), true);
         if (eos.isPresent() && basis.orElse(null) == DensityBasis.TRANSLATED && !eos.get().hasVolumeShift()) {
             problem("$.fluid.densityBasis", f.densityBasis(), "translated densities need a variant with a published "
-                    + "volume shift (SRK, PR76, PR78); " + eos.get().displayName() + " has none: use cubic");
+                    + "volume shift (PR-Twu, SRK, PR76, PR78); " + eos.get().displayName() + " has none: use cubic");
         }
         List<ValidatedCase.KijEntry> kij = new ArrayList<>();
         double[][] matrix = null;

@@ -10,8 +10,8 @@ import picocli.CommandLine.Option;
 /** Options shared by the property commands. */
 final class CommonOptions {
 
-    @Option(names = "--eos", paramLabel = "NAME", defaultValue = "PR78",
-            description = "Equation of state: vdW, RK, SRK, PR76, PR78 (PR = PR78). Default: ${DEFAULT-VALUE}.")
+    @Option(names = "--eos", paramLabel = "NAME", defaultValue = "PR-Twu",
+            description = "Equation of state: PR-Twu (Peng-Robinson with the Twu alpha and a temperature-dependent volume translation), PR78 (= PR), PR76, SRK, RK, vdW. Default: ${DEFAULT-VALUE}.")
     String eos;
 
     @Option(names = "--density-basis", paramLabel = "BASIS", defaultValue = "translated",

@@ -40,7 +40,7 @@ public final class Fluid {
             throw InvalidInputException.missing("fluid.composition", "expected components and mole fractions");
         }
         if (variant == null) {
-            throw InvalidInputException.missing("fluid.eos", "expected one of vdW, RK, SRK, PR76, PR78");
+            throw InvalidInputException.missing("fluid.eos", "expected one of " + EosVariant.ACCEPTED);
         }
         if (densityBasis == null) {
             throw InvalidInputException.missing("fluid.densityBasis", "expected translated or cubic");
@@ -63,7 +63,7 @@ public final class Fluid {
             throw InvalidInputException.missing("fluid.composition", "expected components and mole fractions");
         }
         if (variant == null) {
-            throw InvalidInputException.missing("fluid.eos", "expected one of vdW, RK, SRK, PR76, PR78");
+            throw InvalidInputException.missing("fluid.eos", "expected one of " + EosVariant.ACCEPTED);
         }
         return new Fluid(composition, variant, KijTable.builtIn().matrix(composition.components(), variant),
                 densityBasis);

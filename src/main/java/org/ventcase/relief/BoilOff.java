@@ -391,7 +391,7 @@ public final class BoilOff {
         MixParams m = model.mix(t, x);
         double v = model.select(m, p, req).z() * PhysicalConstants.R * t / p;
         if (basis == DensityBasis.TRANSLATED && model.hasVolumeShift()) {
-            double vt = v - model.volumeShift(x);
+            double vt = v - model.volumeShift(t, x);
             return vt > 0 ? vt : v;
         }
         return v;

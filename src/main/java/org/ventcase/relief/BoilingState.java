@@ -24,10 +24,11 @@ import org.ventcase.thermo.mix.SaturationPoints;
  * For a pure fluid it is the ordinary latent heat h_V - h_L at Tsat(P).
  *
  * <p>Enthalpies are on the same density basis as the volumes: with a volume translation c
- * (v = v_cubic - c, Peneloux), H = H_cubic - P c, since the translation shifts the Gibbs energy
- * by -P c and leaves the entropy and phase equilibrium unchanged (A. Peneloux, E. Rauzy, R. Freze,
- * Fluid Phase Equilib. 8 (1982) 7-23). This keeps U = H - P V exact in the balances; for a pure
- * fluid the latent heat is unaffected.
+ * (v = v_cubic - c(T), Peneloux), H = H_cubic - P (c - T dc/dT), since the translation shifts the
+ * Gibbs energy by -P c(T) and leaves phase equilibrium unchanged (A. Peneloux, E. Rauzy, R. Freze,
+ * Fluid Phase Equilib. 8 (1982) 7-23, for constant c; the T dc/dT term follows from S = -dG/dT,
+ * see {@link org.ventcase.thermo.VolumeTranslation}). This keeps U = H - P V exact in the
+ * balances; for a pure fluid the latent heat is unaffected.
  *
  * @param temperatureK  bubble temperature, K
  * @param pressurePa    Pa absolute
@@ -147,7 +148,7 @@ public record BoilingState(double temperatureK, double pressurePa, double[] liqu
         double[] x = fp.composition();
         double h = MixtureThermo.idealGasEnthalpy(model, fp.temperatureK(), x) + fp.residualEnthalpy();
         if (fp.densityBasis() == DensityBasis.TRANSLATED) {
-            h -= fp.pressurePa() * (fp.molarVolumeCubic() - fp.molarVolume());
+            h += model.translatedEnthalpyShift(fp.temperatureK(), fp.pressurePa(), x);
         }
         return h;
     }

@@ -28,7 +28,7 @@ public record MixtureSpec(EosVariant eos, List<Component> components, double[][]
 
     public MixtureSpec {
         if (eos == null) {
-            throw InvalidInputException.missing("fluid.eos", "expected an equation of state (vdW, RK, SRK, PR76, PR78)");
+            throw InvalidInputException.missing("fluid.eos", "expected an equation of state: " + org.ventcase.thermo.EosVariant.ACCEPTED);
         }
         if (components == null || components.isEmpty()) {
             throw InvalidInputException.missing("fluid.components", "expected at least one component");

@@ -242,7 +242,9 @@ public final class NearCriticalFire {
         double h = 0;
         for (MixturePhase ph : r.phases()) {
             vol += ph.amount() * ph.molarVolume();
-            h += ph.amount() * (ph.enthalpyJmol() - p * (ph.molarVolumeCubic() - ph.molarVolume()));
+            double shift = ph.densityBasis() == DensityBasis.TRANSLATED
+                    ? model.translatedEnthalpyShift(t, p, ph.composition()) : 0.0;
+            h += ph.amount() * (ph.enthalpyJmol() + shift);
         }
         double mkg = r.molarMass() * 1e-3;
         s.v = vol / mkg;

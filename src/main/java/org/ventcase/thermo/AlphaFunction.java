@@ -111,4 +111,51 @@ public interface AlphaFunction {
             return String.format(java.util.Locale.US, "Soave form, m = %.5f (%s)", m, correlation.citation());
         }
     }
+    /**
+     * Twu (1991) form alpha = Tr^(N(M - 1)) exp[L (1 - Tr^(M N))], with per-component published L,
+     * M and N. With g = d ln alpha/d Tr = N (M - 1)/Tr - L M N Tr^(M N - 1):
+     * d alpha/d Tr = alpha g and d2 alpha/d Tr2 = alpha (g^2 + g'),
+     * g' = -N (M - 1)/Tr^2 - L M N (M N - 1) Tr^(M N - 2).
+     *
+     * <p>Source: C.H. Twu, D. Bluck, J.R. Cunningham, J.E. Coon, Fluid Phase Equilib. 69 (1991)
+     * 33-50, DOI 10.1016/0378-3812(91)90024-2. The parameters carry their own source
+     * ({@link TwuParameters}).
+     *
+     * @param source where L, M and N come from (for the trace)
+     */
+    record Twu(double l, double m, double n, String source) implements AlphaFunction {
+        public Twu {
+            if (!(Double.isFinite(l) && Double.isFinite(m) && Double.isFinite(n)) || !(m > 0) || !(n > 0)) {
+                throw new IllegalArgumentException("Twu L, M, N must be finite with M, N > 0");
+            }
+        }
+
+        @Override
+        public double alpha(double tr) {
+            return Math.exp(n * (m - 1.0) * Math.log(tr) + l * (1.0 - Math.pow(tr, m * n)));
+        }
+
+        private double g(double tr, double trMn) {
+            return n * (m - 1.0) / tr - l * m * n * trMn / tr;
+        }
+
+        @Override
+        public double dAlpha(double tr) {
+            double trMn = Math.pow(tr, m * n);
+            return alpha(tr) * g(tr, trMn);
+        }
+
+        @Override
+        public double d2Alpha(double tr) {
+            double trMn = Math.pow(tr, m * n);
+            double g = g(tr, trMn);
+            double g1 = -n * (m - 1.0) / (tr * tr) - l * m * n * (m * n - 1.0) * trMn / (tr * tr);
+            return alpha(tr) * (g * g + g1);
+        }
+
+        @Override
+        public String describe() {
+            return String.format(java.util.Locale.US, "Twu form, L = %.6f, M = %.6f, N = %.6f (%s)", l, m, n, source);
+        }
+    }
 }

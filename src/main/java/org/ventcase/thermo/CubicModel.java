@@ -42,7 +42,10 @@ public final class CubicModel {
     private final double[] ac;
     private final double[] bi;
     private final double[] tc;
-    private final double[] shift;
+    private final double[] pc;
+    private final VolumeTranslation[] shift;
+    private final boolean shiftVaries;
+    private final List<String> notes;
     private final double[] molarMass;
     private final double sigma;
     private final double epsilon;
@@ -54,6 +57,15 @@ public final class CubicModel {
      *            all zero
      */
     public CubicModel(EosVariant variant, List<Component> components, double[][] kij) {
+        this(variant, components, kij, true);
+    }
+
+    /** A one-component model of the variant without its volume translation (builds the anchored one). */
+    static CubicModel untranslated(EosVariant variant, Component c) {
+        return new CubicModel(variant, List.of(c), null, false);
+    }
+
+    private CubicModel(EosVariant variant, List<Component> components, double[][] kij, boolean translated) {
         if (components == null || components.isEmpty()) {
             throw InvalidInputException.missing("fluid.components", "expected at least one component");
         }
@@ -82,19 +94,41 @@ public final class CubicModel {
         ac = new double[n];
         bi = new double[n];
         tc = new double[n];
+        pc = new double[n];
         molarMass = new double[n];
-        shift = variant.hasVolumeShift() ? new double[n] : null;
+        shift = translated && variant.hasVolumeShift() ? new VolumeTranslation[n] : null;
+        List<String> notes = new ArrayList<>();
+        boolean varies = false;
         for (int i = 0; i < n; i++) {
             Component c = this.components.get(i);
-            alphas[i] = variant.alphaFor(c);
-            ac[i] = variant.ac(c);
-            bi[i] = variant.b(c);
-            tc[i] = c.tcK();
+            EosVariant.Constants k = variant.constants(c);
+            alphas[i] = k.alpha();
+            tc[i] = k.tcK();
+            pc[i] = k.pcPa();
+            double rt = R * k.tcK();
+            ac[i] = variant.omegaA() * rt * rt / k.pcPa();
+            bi[i] = variant.omegaB() * rt / k.pcPa();
             molarMass[i] = c.molarMass();
+            if (!k.note().isEmpty()) {
+                notes.add(k.note());
+            }
             if (shift != null) {
-                shift[i] = variant.volumeShift(c);
+                shift[i] = variant.translation(c);
+                varies |= shift[i].temperatureDependent();
+                String tn = variant.translationNote(c);
+                if (!tn.isEmpty()) {
+                    notes.add(tn);
+                }
             }
         }
+        this.shiftVaries = varies;
+        for (Component c : this.components) {
+            String a = AssociatingFluids.note(c);
+            if (!a.isEmpty()) {
+                notes.add(a);
+            }
+        }
+        this.notes = List.copyOf(notes);
         sigma = variant.sigma();
         epsilon = variant.epsilon();
         u = sigma + epsilon;
@@ -123,6 +157,48 @@ public final class CubicModel {
         double[][] out = new double[kij.length][];
         for (int i = 0; i < kij.length; i++) {
             out[i] = kij[i].clone();
+        }
+        return out;
+    }
+
+    /** Critical temperature the model uses for component i, K (a published set may bring its own). */
+    public double tc(int i) {
+        return tc[i];
+    }
+
+    /** Critical pressure the model uses for component i, Pa. */
+    public double pc(int i) {
+        return pc[i];
+    }
+
+    /** The volume translation of component i, or {@code null} where the model has none. */
+    public VolumeTranslation translation(int i) {
+        return shift == null ? null : shift[i];
+    }
+
+    /**
+     * Warnings about the model's constants: a component for which a fallback is in use (no
+     * published parameter set), each naming the component. Empty for the classic variants.
+     */
+    public List<String> notes() {
+        return notes;
+    }
+
+    /** The notes of the components present (x_i > 0) in a composition. */
+    public List<String> notes(double[] x) {
+        if (notes.isEmpty()) {
+            return notes;
+        }
+        List<String> out = new ArrayList<>();
+        for (int i = 0; i < components.size(); i++) {
+            if (x[i] > 0) {
+                String name = components.get(i).name() + ":";
+                for (String n : notes) {
+                    if (n.startsWith(name)) {
+                        out.add(n);
+                    }
+                }
+            }
         }
         return out;
     }
@@ -594,16 +670,49 @@ public final class CubicModel {
         return shift != null;
     }
 
-    /** Volume shift of a composition, m3/mol (v_translated = v_cubic - c). */
-    public double volumeShift(double[] x) {
+    /** Volume shift of a composition at T, m3/mol (v_translated = v_cubic - c(T, x)). */
+    public double volumeShift(double t, double[] x) {
         if (shift == null) {
             throw new IllegalStateException(variant.displayName() + " has no published volume shift");
         }
         double c = 0;
         for (int i = 0; i < x.length; i++) {
-            c += x[i] * shift[i];
+            if (x[i] != 0) {
+                c += x[i] * shift[i].c(t);
+            }
         }
         return c;
+    }
+
+    /** d c(T, x)/dT of a composition, m3/(mol K); zero for a constant translation. */
+    public double volumeShiftSlope(double t, double[] x) {
+        if (shift == null || !shiftVaries) {
+            return 0.0;
+        }
+        double d = 0;
+        for (int i = 0; i < x.length; i++) {
+            if (x[i] != 0) {
+                d += x[i] * shift[i].dcdT(t);
+            }
+        }
+        return d;
+    }
+
+    /** Whether the translation changes with temperature. */
+    public boolean volumeShiftVaries() {
+        return shiftVaries;
+    }
+
+    /**
+     * What the translation adds to the molar enthalpy at (T, P, x), J/mol:
+     * -P (c - T dc/dT), from G = G_cubic - P c(T) (see {@link VolumeTranslation}); zero without
+     * a translation.
+     */
+    public double translatedEnthalpyShift(double t, double p, double[] x) {
+        if (shift == null) {
+            return 0.0;
+        }
+        return -p * (volumeShift(t, x) - t * volumeShiftSlope(t, x));
     }
 
     /** Ideal-gas Cp of a composition at T, J/(mol K). */
@@ -649,7 +758,7 @@ public final class CubicModel {
      */
     public FluidProperties properties(double t, double p, double[] x0, PhaseRequest request, DensityBasis basis) {
         double[] x = checkState(t, p, x0);
-        List<String> warnings = new ArrayList<>();
+        List<String> warnings = new ArrayList<>(notes(x));
         MixParams m = mix(t, x);
         RootSelection sel = select(m, p, request);
         if (sel.requestedMissing()) {
@@ -664,7 +773,7 @@ public final class CubicModel {
         double v = vCubic;
         if (basis == DensityBasis.TRANSLATED) {
             if (hasVolumeShift()) {
-                v = vCubic - volumeShift(x);
+                v = vCubic - volumeShift(t, x);
                 if (!(v > 0)) {
                     warnings.add("The volume-shifted molar volume is not positive; the cubic volume is used.");
                     v = vCubic;
@@ -731,7 +840,7 @@ public final class CubicModel {
         double pcm = 0;
         for (int i = 0; i < x.length; i++) {
             tcm += x[i] * tc[i];
-            pcm += x[i] * components.get(i).pcPa();
+            pcm += x[i] * pc[i];
         }
         if (t >= tcm) {
             return p >= pcm ? PhaseLabel.SUPERCRITICAL : PhaseLabel.VAPOR;

@@ -45,7 +45,27 @@ public enum EosVariant {
     /** Peng-Robinson with the 1978 m(omega) for heavy components (omega > 0.491). */
     PR78("Peng-Robinson 1978", 1.0 + Math.sqrt(2.0), 1.0 - Math.sqrt(2.0),
             c -> new AlphaFunction.Soave(MCorrelation.PENG_ROBINSON_1978.m(c.omega()), MCorrelation.PENG_ROBINSON_1978),
-            VolumeShift.PENELOUX_TYPE_PR, "D.B. Robinson, D.-Y. Peng, GPA Research Report RR-28 (1978)");
+            VolumeShift.PENELOUX_TYPE_PR, "D.B. Robinson, D.-Y. Peng, GPA Research Report RR-28 (1978)"),
+    /**
+     * Peng-Robinson with the Twu (1991) alpha function and the published tc-PR parameters
+     * (Pina-Martinez, Privat and Jaubert 2022), each set with its own Tc, Pc and omega, and a
+     * temperature-dependent volume translation anchored on a published saturated-liquid density
+     * correlation ({@link VolumeTranslation.Anchored}). The default for new cases: against the
+     * reference-equation saturation data in the tests it has the smallest deviations of the
+     * variants offered (docs/accuracy.md). A component without published Twu parameters falls back
+     * to the component's own constants and the PR78 Soave alpha; one without a density correlation
+     * keeps the set's constant translation; each with a warning naming the component.
+     */
+    PRTWU("Peng-Robinson, Twu alpha (tc-PR parameters)", 1.0 + Math.sqrt(2.0), 1.0 - Math.sqrt(2.0), null, null,
+            "D.-Y. Peng, D.B. Robinson, Ind. Eng. Chem. Fundam. 15 (1976) 59; alpha: C.H. Twu et al., Fluid Phase "
+                    + "Equilib. 69 (1991) 33; parameters: M. Pina-Martinez, R. Privat, J.-N. Jaubert, AIChE J. 68 (2022) "
+                    + "e17518");
+
+    /** The variant used where a case or command names none. */
+    public static final EosVariant DEFAULT = PRTWU;
+
+    /** The names accepted on input, for messages: every variant once, default first. */
+    public static final String ACCEPTED = "PR-Twu (default), PR78 (= PR), PR76, SRK, RK, vdW";
 
     private final String displayName;
     private final double sigma;
@@ -137,12 +157,98 @@ public enum EosVariant {
 
     /** The alpha function of this variant for one component. */
     public AlphaFunction alphaFor(Component c) {
-        return alphaFactory.apply(c);
+        return constants(c).alpha();
+    }
+
+    /**
+     * The constants this variant uses for one component: Tc, Pc and omega (the component's own,
+     * except where a published parameter set brings its own), the alpha function, where they come
+     * from, and a note when a published set was expected but is missing.
+     *
+     * @param note empty, or a warning naming the component (a fallback in use)
+     */
+    public record Constants(double tcK, double pcPa, double omega, AlphaFunction alpha, String source, String note) {
+    }
+
+    /** The constants of one component under this variant (see {@link Constants}). */
+    public Constants constants(Component c) {
+        if (this != PRTWU) {
+            return new Constants(c.tcK(), c.pcPa(), c.omega(), alphaFactory.apply(c), c.criticalSource(), "");
+        }
+        java.util.Optional<TwuParameters.Set> set = TwuParameters.find(c);
+        if (set.isPresent()) {
+            TwuParameters.Set s = set.get();
+            return new Constants(s.tcK(), s.pcPa(), s.omega(), s.alpha(), TwuParameters.CITATION, "");
+        }
+        return new Constants(c.tcK(), c.pcPa(), c.omega(),
+                new AlphaFunction.Soave(MCorrelation.PENG_ROBINSON_1978.m(c.omega()), MCorrelation.PENG_ROBINSON_1978),
+                c.criticalSource(), c.name() + ": no published Twu parameters; the " + displayName
+                        + " model uses its own Tc, Pc and the Soave alpha of PR78 (vapour pressure and density less accurate)");
+    }
+
+    /**
+     * The volume translation of one component, or {@code null} where the variant has none.
+     * For {@link #PRTWU} a translation anchored on the component's saturated-liquid density
+     * correlation (computed once per component and kept: a pure function of published constants),
+     * else the tc-PR set's constant c, else the PR78 Peneloux-type shift.
+     */
+    public VolumeTranslation translation(Component c) {
+        if (this != PRTWU) {
+            return volumeShift == null ? null : new VolumeTranslation.Constant(volumeShift.shift(c), volumeShift.citation);
+        }
+        return AnchorCache.get(this, c);
+    }
+
+    /** A note on a component's translation (fallback in use), or "". */
+    public String translationNote(Component c) {
+        if (this != PRTWU) {
+            return "";
+        }
+        VolumeTranslation t = translation(c);
+        if (t.temperatureDependent()) {
+            return "";
+        }
+        return c.name() + ": no published saturated-liquid density correlation; the " + displayName
+                + " model translates its volumes by a constant (" + t.describe() + ")";
+    }
+
+    /** Anchored translations, built once per (variant, component) on first use. */
+    private static final class AnchorCache {
+        private static final java.util.concurrent.ConcurrentHashMap<Component, VolumeTranslation> MAP =
+                new java.util.concurrent.ConcurrentHashMap<>();
+
+        static VolumeTranslation get(EosVariant v, Component c) {
+            VolumeTranslation t = MAP.get(c);
+            if (t == null) {
+                t = build(v, c);
+                VolumeTranslation prev = MAP.putIfAbsent(c, t);
+                if (prev != null) {
+                    t = prev;
+                }
+            }
+            return t;
+        }
+
+        private static VolumeTranslation build(EosVariant v, Component c) {
+            java.util.Optional<SaturatedLiquidDensity.Correlation> corr = SaturatedLiquidDensity.find(c);
+            if (corr.isPresent()) {
+                try {
+                    return VolumeTranslation.Anchored.build(CubicModel.untranslated(v, c), corr.get());
+                } catch (RuntimeException e) {
+                    // falls through to a constant translation (the note says so)
+                }
+            }
+            java.util.Optional<TwuParameters.Set> set = TwuParameters.find(c);
+            if (set.isPresent()) {
+                return new VolumeTranslation.Constant(set.get().c(), TwuParameters.CITATION);
+            }
+            return new VolumeTranslation.Constant(VolumeShift.PENELOUX_TYPE_PR.shift(c), VolumeShift.PENELOUX_TYPE_PR.citation);
+        }
     }
 
     /** Whether a published volume-shift correlation exists for this variant. */
     public boolean hasVolumeShift() {
-        return volumeShift != null;
+        return volumeShift != null || this == PRTWU;
     }
 
     /**
@@ -151,36 +257,42 @@ public enum EosVariant {
      * @throws IllegalStateException when the variant has no published shift
      */
     public double volumeShift(Component c) {
-        if (volumeShift == null) {
+        if (!hasVolumeShift()) {
             throw new IllegalStateException(displayName + " has no published volume shift");
         }
-        return volumeShift.shift(c);
+        return translation(c).c(c.tcK() * 0.7);
     }
 
     /** Citation of the volume-shift correlation, or "" where there is none. */
     public String volumeShiftCitation() {
+        if (this == PRTWU) {
+            return "temperature-dependent, anchored on published saturated-liquid densities (DIPPR eq. 105, Perry's "
+                    + "Handbook 8th ed. Table 2-32; water: IAPWS 1992 auxiliary equation)";
+        }
         return volumeShift == null ? "" : volumeShift.citation;
     }
 
     /** b of one component, m3/mol. */
     public double b(Component c) {
-        return omegaB * PhysicalConstants.R * c.tcK() / c.pcPa();
+        Constants k = constants(c);
+        return omegaB * PhysicalConstants.R * k.tcK() / k.pcPa();
     }
 
     /** a_c = a(Tc) of one component, Pa m6/mol2. */
     public double ac(Component c) {
-        double rt = PhysicalConstants.R * c.tcK();
-        return omegaA * rt * rt / c.pcPa();
+        Constants k = constants(c);
+        double rt = PhysicalConstants.R * k.tcK();
+        return omegaA * rt * rt / k.pcPa();
     }
 
     /**
-     * Parses a variant name as typed on the command line or in a case file: vdW, RK, SRK, PR76,
-     * PR78, and PR (taken as PR78, which equals PR76 for omega <= 0.491; the output always names
-     * the variant used).
+     * Parses a variant name as typed on the command line or in a case file: PR-Twu (also PRTWU),
+     * vdW, RK, SRK, PR76, PR78, and PR (taken as PR78, which equals PR76 for omega <= 0.491; the
+     * output always names the variant used).
      */
     public static EosVariant parse(String field, String text) {
         if (text == null) {
-            throw InvalidInputException.missing(field, "expected one of vdW, RK, SRK, PR76, PR78 (PR = PR78)");
+            throw InvalidInputException.missing(field, "expected one of " + ACCEPTED);
         }
         String t = text.trim().toUpperCase(Locale.ROOT).replace("-", "").replace(" ", "");
         switch (t) {
@@ -201,9 +313,18 @@ public enum EosVariant {
             case "PR1978":
             case "PENGROBINSON":
                 return PR78;
+            case "PRTWU":
+            case "TWU":
+            case "TCPR":
+                return PRTWU;
             default:
-                throw InvalidInputException.invalid(field, text, "expected one of vdW, RK, SRK, PR76, PR78 (PR = PR78)");
+                throw InvalidInputException.invalid(field, text, "expected one of " + ACCEPTED);
         }
+    }
+
+    /** The name printed for the variant (JSON "eos" values stay {@link #name()}). */
+    public String id() {
+        return this == PRTWU ? "PR-Twu" : this == VDW ? "vdW" : name();
     }
 
     /** Published volume-shift correlations in terms of the Rackett compressibility Z_RA. */

@@ -67,8 +67,8 @@ public final class PureSaturation {
     /** The full saturation state at pressure P (absolute, Pa). */
     public SaturationResult atPressure(double p, DensityBasis basis) {
         InvalidInputException.requireInRange("pressure", p, 1e-3, 1e10, "Pa");
-        double tc = component.tcK();
-        double pc = component.pcPa();
+        double tc = model.tc(0);
+        double pc = model.pc(0);
         if (p >= pc) {
             throw new NoSolutionException("pressure", String.format(Locale.US,
                     "%.6g Pa is at or above the critical pressure of %s (Pc = %.6g Pa): there is no saturation; "
@@ -132,8 +132,14 @@ public final class PureSaturation {
                         MixParams m, int iterations) {
     }
 
+    /** The cubic's own saturated-liquid molar volume at T, m3/mol (no translation). */
+    double liquidMolarVolumeCubic(double t) {
+        Psat s = solvePressure(t);
+        return s.zL * R * t / s.p;
+    }
+
     private Psat solvePressure(double t) {
-        double tc = component.tcK();
+        double tc = model.tc(0);
         double tr = t / tc;
         if (tr >= 1.0) {
             throw new NoSolutionException("temperature", String.format(Locale.US,
@@ -158,7 +164,7 @@ public final class PureSaturation {
         double lnLo = Math.log(pLo);
         double lnHi = Math.log(pHi);
         // Start from the acentric-factor estimate, clipped into the bracket.
-        double lnP = Math.log(component.pcPa()) + Math.log(10) * 7.0 / 3.0 * (1 + component.omega()) * (1 - 1 / tr);
+        double lnP = Math.log(model.pc(0)) + Math.log(10) * 7.0 / 3.0 * (1 + component.omega()) * (1 - 1 / tr);
         if (!(lnP > lnLo && lnP < lnHi)) {
             lnP = 0.5 * (lnLo + lnHi);
         }
@@ -260,7 +266,7 @@ public final class PureSaturation {
     }
 
     private SaturationResult result(double t, Psat s, int iterations, DensityBasis basis) {
-        List<String> warnings = new ArrayList<>();
+        List<String> warnings = new ArrayList<>(model.notes());
         double mw = component.molarMass();
         double rt = R * t;
         double vl = s.zL * rt / s.p;
@@ -269,14 +275,22 @@ public final class PureSaturation {
         double c = 0;
         if (basis == DensityBasis.TRANSLATED) {
             if (model.hasVolumeShift()) {
-                c = model.volumeShift(ONE);
+                c = model.volumeShift(t, ONE);
             } else {
                 used = DensityBasis.CUBIC;
                 warnings.add(model.variant().displayName()
                         + " has no published volume shift: densities are the raw cubic's.");
             }
         }
-        double tr = t / component.tcK();
+        double tr = t / model.tc(0);
+        if (tr > 0.9 && tr <= 0.95) {
+            warnings.add(String.format(Locale.US,
+                    "Tr = %.4f: above Tr 0.9 a cubic equation's vapour density and latent heat lose accuracy%s.", tr,
+                    model.variant() == EosVariant.PRTWU
+                            ? " (against reference equations at Tr 0.925: vapour density up to 4 % high, latent heat up "
+                                    + "to 4 % low; docs/accuracy.md)"
+                            : ""));
+        }
         if (tr > 0.95) {
             warnings.add(String.format(Locale.US,
                     "Tr = %.4f: near the critical point the latent heat is small and changes fast with temperature, "

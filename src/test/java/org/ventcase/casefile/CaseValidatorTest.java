@@ -210,7 +210,7 @@ class CaseValidatorTest {
 
     @Test
     void kijNamesMustBeComponentsOfTheFluid() {
-        String json = Fixtures.bulletWith("\"eos\": \"PR78\",", "\"eos\": \"PR78\", \"kij\": [ "
+        String json = Fixtures.bulletWith("\"eos\": \"PR-Twu\",", "\"eos\": \"PR-Twu\", \"kij\": [ "
                 + "{\"a\": \"propane\", \"b\": \"nC4\", \"value\": 0.003, \"source\": \"test value\"},"
                 + "{\"a\": \"propane\", \"b\": \"ethane\", \"value\": 0.001, \"source\": \"test value\"} ],");
         Problem p = only(check(json));
@@ -242,7 +242,7 @@ class CaseValidatorTest {
 
     @Test
     void validationReportHasNoCaseWhenThereAreProblems() {
-        ValidationReport r = check(Fixtures.bulletWith("\"eos\": \"PR78\"", "\"eos\": \"PR2000\""));
+        ValidationReport r = check(Fixtures.bulletWith("\"eos\": \"PR-Twu\"", "\"eos\": \"PR2000\""));
         assertFalse(r.ok());
         assertTrue(r.validated().isEmpty());
         assertEquals("$.fluid.eos", only(r).path());

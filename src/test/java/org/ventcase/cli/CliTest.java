@@ -122,7 +122,7 @@ class CliTest {
         for (String f : List.of("name", "Tc_K", "Pc_Pa", "omega", "molarMass_kg_kmol", "source")) {
             assertTrue(n.get("component").has(f), "missing component." + f);
         }
-        assertEquals("PR78", n.get("eos").asText());
+        assertEquals("PRTWU", n.get("eos").asText()); // the default model (EosVariant.DEFAULT)
         assertEquals(1e6, n.get("pressure_Pa").asDouble(), 1e-6);
         // Three real roots at 300 K, 10 bar for propane (below the vapour spinodal, above Psat):
         // liquid is stable (propane's vapour pressure at 300 K is about 0.998 MPa, NIST WebBook,

@@ -528,7 +528,7 @@ public final class PTFlash {
         DensityBasis used = basis;
         if (basis == DensityBasis.TRANSLATED) {
             if (model.hasVolumeShift()) {
-                v = vCubic - model.volumeShift(x);
+                v = vCubic - model.volumeShift(t, x);
                 if (!(v > 0)) {
                     warnings.add("the volume-shifted molar volume of the " + label.label()
                             + " is not positive; the cubic volume is used");

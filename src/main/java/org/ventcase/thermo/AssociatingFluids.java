@@ -1,0 +1,34 @@
+package org.ventcase.thermo;
+
+import java.util.Map;
+
+/**
+ * Built-in fluids whose molecules hydrogen-bond (associate) in the vapour: a two-parameter cubic
+ * equation of state has no term for it, so its saturated-vapour density comes out low and, through
+ * the Clapeyron equation, its latent heat high, whatever the alpha function. The figures are the
+ * largest deviations of the default model from the reference equations of state at Tr 0.5 to 0.9,
+ * measured by ReferenceSaturationTest (docs/accuracy.md); ethanol is not in that data and carries
+ * the methanol figure as an expectation, said as such.
+ */
+final class AssociatingFluids {
+
+    private static final Map<String, String> BY_CAS = Map.of(
+            "67-56-1", "vapour density up to 9 % low and latent heat up to 10 % high (measured)",
+            "64-17-5", "vapour density and latent heat likely off as for methanol, up to about 10 % (not measured)",
+            "7664-41-7", "vapour density up to 5 % low and latent heat up to 5 % high (measured)",
+            "7732-18-5", "vapour density up to 3 % low and latent heat up to 3.5 % high (measured)");
+
+    private AssociatingFluids() {
+    }
+
+    /** The warning for a component, or "" for a fluid not listed. */
+    static String note(Component c) {
+        String f = BY_CAS.get(c.cas());
+        if (f == null) {
+            return "";
+        }
+        return c.name() + ": a cubic equation of state does not describe hydrogen bonding in the vapour: against "
+                + "reference equations the default model gives " + f + " at Tr 0.65-0.9 (docs/accuracy.md); a fire "
+                + "relief load W = Q/L may be understated by as much: check the latent heat against measured data.";
+    }
+}

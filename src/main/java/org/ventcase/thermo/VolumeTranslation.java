@@ -1,0 +1,226 @@
+package org.ventcase.thermo;
+
+import java.util.Locale;
+
+/**
+ * A volume translation c(T) of one component: v = v_cubic - c(T), mixed linearly,
+ * c = sum x_i c_i(T). Because c depends on temperature only (never on density), both phases of a
+ * pure fluid, and every phase of a mixture through its ln phi_i, shift by the same c_i P/(R T):
+ * vapour pressure, K-values and every phase split are exactly those of the untranslated cubic.
+ *
+ * <p>What a temperature-dependent c does to the other properties (the translated Gibbs energy is
+ * G = G_cubic - P c(T) at given T and P): S = S_cubic + P dc/dT, H = H_cubic - P (c - T dc/dT),
+ * Cp = Cp_cubic + P T d2c/dT2. Ventcase applies the enthalpy term wherever a translated basis
+ * enters an energy balance ({@link CubicModel#translatedEnthalpyShift}); heat capacities, speed
+ * of sound and the Joule-Thomson coefficient stay on the cubic's own volume (the P T c'' term is
+ * below 0.1 % of Cp in the liquid at the pressures of relief work, bounded in
+ * VolumeTranslationTest). A pure fluid's latent heat is unchanged by any translation.
+ */
+public interface VolumeTranslation {
+
+    /** c at T, m3/mol. */
+    double c(double t);
+
+    /** dc/dT at T, m3/(mol K). */
+    double dcdT(double t);
+
+    /** d2c/dT2 at T, m3/(mol K2). */
+    double d2cdT2(double t);
+
+    /** Whether c changes with temperature. */
+    boolean temperatureDependent();
+
+    /** One line for the trace and the sheet: the form, and its source. */
+    String describe();
+
+    /**
+     * A constant translation.
+     *
+     * @param source where c comes from
+     */
+    record Constant(double c, String source) implements VolumeTranslation {
+        @Override
+        public double c(double t) {
+            return c;
+        }
+
+        @Override
+        public double dcdT(double t) {
+            return 0;
+        }
+
+        @Override
+        public double d2cdT2(double t) {
+            return 0;
+        }
+
+        @Override
+        public boolean temperatureDependent() {
+            return false;
+        }
+
+        @Override
+        public String describe() {
+            return String.format(Locale.US, "constant, c = %.4g cm3/mol (%s)", c * 1e6, source);
+        }
+    }
+
+    /**
+     * The translation that makes the cubic's saturated-liquid volume equal a published
+     * saturated-liquid density correlation: c(T) = v_L,cubic(T) - v_L,correlation(T), evaluated at
+     * uniformly spaced temperatures from max(T_min of the correlation, 0.3 Tc) to 0.95 Tc and
+     * joined by a natural cubic spline (continuous c, c' and c''). Outside that range c' goes
+     * linearly to zero over 0.05 Tc and c is constant beyond, so c and c' stay continuous for a
+     * supercritical component of a mixture and for cold states.
+     */
+    final class Anchored implements VolumeTranslation {
+        /** Number of anchor temperatures. */
+        static final int NODES = 66;
+        /** Highest anchor, as a fraction of Tc. */
+        static final double TR_HIGH = 0.95;
+        /** Lowest anchor, as a fraction of Tc, unless the correlation starts higher. */
+        static final double TR_LOW = 0.30;
+        /** Width of the taper outside the anchors, as a fraction of Tc. */
+        static final double TAPER = 0.05;
+
+        private final double lo;
+        private final double h;
+        private final double[] y;
+        private final double[] m2;
+        private final double w;
+        private final double slopeLo;
+        private final double slopeHi;
+        private final String source;
+
+        private Anchored(double lo, double h, double[] y, double[] m2, double w, String source) {
+            this.lo = lo;
+            this.h = h;
+            this.y = y;
+            this.m2 = m2;
+            this.w = w;
+            this.source = source;
+            this.slopeLo = splineSlope(0, 0.0);
+            this.slopeHi = splineSlope(y.length - 2, 1.0);
+        }
+
+        /**
+         * Builds the translation of one component from its untranslated one-component model.
+         *
+         * @throws org.ventcase.common.VentcaseException when a saturation point cannot be found
+         */
+        static Anchored build(CubicModel raw, SaturatedLiquidDensity.Correlation corr) {
+            double tc = raw.tc(0);
+            double mw = raw.components().get(0).molarMass();
+            double tLo = Math.max(corr.tMinK(), TR_LOW * tc);
+            double tHi = TR_HIGH * Math.min(tc, corr.tMaxK());
+            if (!(tHi > tLo)) {
+                throw new IllegalArgumentException("no anchor range for " + corr.component());
+            }
+            int n = NODES;
+            double h = (tHi - tLo) / (n - 1);
+            double[] y = new double[n];
+            PureSaturation sat = new PureSaturation(raw);
+            for (int i = 0; i < n; i++) {
+                double t = tLo + i * h;
+                double vl = sat.liquidMolarVolumeCubic(t);
+                y[i] = vl - corr.molarVolume(t, mw);
+            }
+            return new Anchored(tLo, h, y, naturalSecondDerivatives(y, h), TAPER * tc,
+                    "anchored on " + corr.source());
+        }
+
+        /** Second derivatives of the natural cubic spline through y on a uniform grid (Thomas algorithm). */
+        static double[] naturalSecondDerivatives(double[] y, double h) {
+            int n = y.length;
+            double[] m = new double[n];
+            if (n < 3) {
+                return m;
+            }
+            double[] cp = new double[n];
+            double[] dp = new double[n];
+            for (int i = 1; i < n - 1; i++) {
+                double rhs = 6.0 * (y[i + 1] - 2.0 * y[i] + y[i - 1]) / (h * h);
+                double denom = 4.0 - (i > 1 ? cp[i - 1] : 0.0);
+                cp[i] = 1.0 / denom;
+                dp[i] = (rhs - (i > 1 ? dp[i - 1] : 0.0)) / denom;
+            }
+            for (int i = n - 2; i >= 1; i--) {
+                m[i] = dp[i] - cp[i] * m[i + 1];
+            }
+            return m;
+        }
+
+        private double splineSlope(int i, double b) {
+            double a = 1.0 - b;
+            return (y[i + 1] - y[i]) / h - (3 * a * a - 1) / 6.0 * h * m2[i] + (3 * b * b - 1) / 6.0 * h * m2[i + 1];
+        }
+
+        private double hi() {
+            return lo + (y.length - 1) * h;
+        }
+
+        /** {c, c', c''} at t. */
+        private void eval(double t, double[] out) {
+            double tHi = hi();
+            if (t < lo) {
+                double d = Math.min(lo - t, w);
+                out[0] = y[0] - slopeLo * (d - d * d / (2 * w));
+                out[1] = slopeLo * (1 - d / w);
+                out[2] = lo - t < w ? slopeLo / w : 0.0;
+                return;
+            }
+            if (t > tHi) {
+                double d = Math.min(t - tHi, w);
+                int last = y.length - 1;
+                out[0] = y[last] + slopeHi * (d - d * d / (2 * w));
+                out[1] = slopeHi * (1 - d / w);
+                out[2] = t - tHi < w ? -slopeHi / w : 0.0;
+                return;
+            }
+            int i = Math.min((int) ((t - lo) / h), y.length - 2);
+            double b = (t - (lo + i * h)) / h;
+            double a = 1.0 - b;
+            out[0] = a * y[i] + b * y[i + 1] + ((a * a * a - a) * m2[i] + (b * b * b - b) * m2[i + 1]) * h * h / 6.0;
+            out[1] = (y[i + 1] - y[i]) / h - (3 * a * a - 1) / 6.0 * h * m2[i] + (3 * b * b - 1) / 6.0 * h * m2[i + 1];
+            out[2] = a * m2[i] + b * m2[i + 1];
+        }
+
+        @Override
+        public double c(double t) {
+            double[] o = new double[3];
+            eval(t, o);
+            return o[0];
+        }
+
+        @Override
+        public double dcdT(double t) {
+            double[] o = new double[3];
+            eval(t, o);
+            return o[1];
+        }
+
+        @Override
+        public double d2cdT2(double t) {
+            double[] o = new double[3];
+            eval(t, o);
+            return o[2];
+        }
+
+        @Override
+        public boolean temperatureDependent() {
+            return true;
+        }
+
+        /** The anchor range, K: {lowest, highest}. */
+        public double[] anchorRange() {
+            return new double[] {lo, hi()};
+        }
+
+        @Override
+        public String describe() {
+            return String.format(Locale.US,
+                    "temperature-dependent, c(T) = v_L,cubic - v_L,correlation at saturation, %.1f-%.1f K (%s)", lo,
+                    hi(), source);
+        }
+    }
+}
