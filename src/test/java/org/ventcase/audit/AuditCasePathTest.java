@@ -31,7 +31,8 @@ class AuditCasePathTest {
                 + "\"environmentFactor\": \"bare\"}";
         return "{\"schemaVersion\": 1, \"identity\": {\"title\": \"" + tag + "\", \"tag\": \"" + tag + "\", "
                 + "\"revision\": \"A\", \"preparer\": \"test\", \"checker\": \"\", \"date\": \"2026-01-15\"}, "
-                + "\"fluid\": {\"components\": [" + components + "], \"eos\": \"PR-Twu\", \"densityBasis\": \"translated\"}, "
+                + "\"fluid\": {\"components\": [" + components + "], \"eos\": \"" + (tag.equals("V-3001") ? "PR78" : "PR-Twu")
+                + "\", \"densityBasis\": \"translated\"}, "
                 + "\"vessel\": {" + vessel + "}, \"storage\": {" + storage + "}, \"scenarios\": [" + scenario + "], "
                 + "\"device\": {\"setPressure\": \"" + set + "\", \"mawp\": \"" + mawp + "\", \"deviceCount\": \"single\", "
                 + "\"backPressure\": {\"superimposed\": \"0 barg\", \"builtUp\": \"0 bar\"}, \"valveType\": \"conventional\"}, "

@@ -143,17 +143,21 @@ class ReviewTest {
     void liquidDensityWithoutVolumeTranslation() {
         ReviewResult r = review("propane-bullet-untranslated-density.json");
         ReviewResult.Row d = row(r, ReviewQuantity.LIQUID_DENSITY);
-        // PR78's shift for propane at 61 C is 6 %: inside the default 8 %, so the verdict agrees, with the hint
+        // The claim is the raw cubic's density at T1 = 61 C (Tr 0.9). There the untranslated
+        // Peng-Robinson happens to land within about 1.2 % of the default model's translated value
+        // (and of the reference equation, 424 kg/m3 interpolated from saturation-reference-eos.csv):
+        // inside the default 8 %, so the verdict agrees, with the basis hint.
         assertEquals(Verdict.AGREES, d.verdict());
         assertTrue(d.hasHint("density-basis"), d.hints().toString());
-        // with a 3 % tolerance the same claim disagrees (6 % > 2 x 3 %) and the hint is a cause
+        assertEquals(-0.012, d.relativeDifference().getAsDouble(), 0.003);
+        // with a 1 % tolerance the same claim is to be checked (1 % < 1.2 % <= 2 %) and the hint is a cause
         ReviewResult tight = review("propane-bullet-untranslated-density.json",
-                Tolerances.defaults().with("liquidDensity=3%"));
+                Tolerances.defaults().with("liquidDensity=1%"));
         ReviewResult.Row d3 = row(tight, ReviewQuantity.LIQUID_DENSITY);
-        assertEquals(Verdict.DISAGREES, d3.verdict());
+        assertEquals(Verdict.CHECK, d3.verdict());
         assertTrue(d3.hasHint("density-basis"), d3.hints().toString());
         assertFalse(d3.hints().get(0).text().startsWith("Within the tolerance"));
-        // the claimed value is the PR78 cubic-basis run's value: inside the model range
+        // the claimed value lies inside the range of the PR78/SRK runs on both bases
         assertTrue(d3.withinModelUncertainty());
         assertTrue(d3.hasHint("within-model-uncertainty"));
     }
@@ -197,9 +201,9 @@ class ReviewTest {
     @Test
     void temperatureIsComparedInKelvin() {
         CaseInput in = CaseInputs.from(propane);
-        // Hand calculation: T1 = 334.392 K (golden results); +1.5 K is between 1 K and 2 K -> check
+        // Hand calculation: T1 = 334.151 K (golden results); +1.5 K is between 1 K and 2 K -> check
         Map<ReviewQuantity, Double> v = new EnumMap<>(ReviewQuantity.class);
-        v.put(ReviewQuantity.RELIEVING_TEMPERATURE, 334.392 + 1.5);
+        v.put(ReviewQuantity.RELIEVING_TEMPERATURE, 334.151 + 1.5);
         ReviewResult r = Review.run(in, new ClaimedValues("", Optional.of("1"), v, Optional.empty(), Map.of()));
         ReviewResult.Row t = row(r, ReviewQuantity.RELIEVING_TEMPERATURE);
         assertEquals(Verdict.CHECK, t.verdict());
@@ -225,7 +229,8 @@ class ReviewTest {
     @Test
     void sensitivityRunsCoverBothEquationsAndBothBases() {
         ReviewResult r = review("propane-bullet-clean.json");
-        assertEquals(4, r.runs().size());
+        // the case's own run (PR-Twu, translated) and PR78 and SRK on both bases
+        assertEquals(5, r.runs().size());
         assertTrue(r.runs().get(0).ofCase());
         for (ReviewResult.ModelRun m : r.runs()) {
             assertTrue(m.failure().isEmpty(), m.label() + " " + m.failure());
