@@ -40,7 +40,7 @@ public class MixtureBench {
         for (String n : names) {
             cs.add(ComponentLibrary.builtIn().get(n));
         }
-        return new CubicModel(EosVariant.PR78, cs, KijTable.builtIn().matrix(cs, EosVariant.PR78).kij());
+        return new CubicModel(EosVariant.DEFAULT, cs, KijTable.builtIn().matrix(cs, EosVariant.DEFAULT).kij());
     }
 
     @Benchmark

@@ -8,6 +8,7 @@ import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Measurement;
 import org.openjdk.jmh.annotations.Mode;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
@@ -30,6 +31,10 @@ import org.ventcase.thermo.PureSaturation;
 @Fork(1)
 public class PureFluidBench {
 
+    /** The equation of state: the default (PR-Twu) and the classic PR78. */
+    @Param({"PRTWU", "PR78"})
+    public String eos;
+
     private CubicModel model;
     private PureSaturation sat;
     private double t = 300.0;
@@ -37,7 +42,7 @@ public class PureFluidBench {
 
     @Setup
     public void setUp() {
-        model = CubicModel.pure(org.ventcase.thermo.EosVariant.PR78, ComponentLibrary.builtIn().get("propane"));
+        model = CubicModel.pure(org.ventcase.thermo.EosVariant.valueOf(eos), ComponentLibrary.builtIn().get("propane"));
         sat = new PureSaturation(model);
     }
 

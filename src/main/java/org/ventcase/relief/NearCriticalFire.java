@@ -99,8 +99,8 @@ public final class NearCriticalFire {
             double dhdT;
             double excess;
             if (!s.twoPhase) {
-                double vMolCubic = s.props.molarVolumeCubic();
-                double dvdT = (s.props.jouleThomson() * s.props.cp() + vMolCubic) / temp; // m3/(mol K)
+                double vMol = s.props.molarVolume();
+                double dvdT = (s.props.jouleThomson() * s.props.cp() + vMol) / temp; // m3/(mol K), on the density basis
                 dvdh = dvdT / s.props.cp();
                 dhdT = s.props.cp() / (s.props.molarMass() * 1e-3);
                 excess = 0;

@@ -46,7 +46,7 @@ public final class ThermalRelief {
         LinkedHashSet<String> warnings = new LinkedHashSet<>(spec.kijWarnings());
         FluidProperties fp = model.properties(t, p, x, PhaseRequest.LIQUID, spec.densityBasis());
         warnings.addAll(fp.warnings());
-        double dvdT = (fp.jouleThomson() * fp.cp() + fp.molarVolumeCubic()) / t;
+        double dvdT = (fp.jouleThomson() * fp.cp() + fp.molarVolume()) / t; // on the density basis
         double alpha = dvdT / fp.molarVolume();
         double mkg = fp.molarMass() * 1e-3;
         double c = fp.cp() / mkg;

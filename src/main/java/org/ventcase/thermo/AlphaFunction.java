@@ -130,9 +130,11 @@ public interface AlphaFunction {
             }
         }
 
+        // One logarithm and two exponentials per evaluation: Tr^(M N) = exp(M N ln Tr).
         @Override
         public double alpha(double tr) {
-            return Math.exp(n * (m - 1.0) * Math.log(tr) + l * (1.0 - Math.pow(tr, m * n)));
+            double lt = Math.log(tr);
+            return Math.exp(n * (m - 1.0) * lt + l * (1.0 - Math.exp(m * n * lt)));
         }
 
         private double g(double tr, double trMn) {
@@ -141,16 +143,20 @@ public interface AlphaFunction {
 
         @Override
         public double dAlpha(double tr) {
-            double trMn = Math.pow(tr, m * n);
-            return alpha(tr) * g(tr, trMn);
+            double lt = Math.log(tr);
+            double trMn = Math.exp(m * n * lt);
+            double a = Math.exp(n * (m - 1.0) * lt + l * (1.0 - trMn));
+            return a * g(tr, trMn);
         }
 
         @Override
         public double d2Alpha(double tr) {
-            double trMn = Math.pow(tr, m * n);
+            double lt = Math.log(tr);
+            double trMn = Math.exp(m * n * lt);
+            double a = Math.exp(n * (m - 1.0) * lt + l * (1.0 - trMn));
             double g = g(tr, trMn);
             double g1 = -n * (m - 1.0) / (tr * tr) - l * m * n * (m * n - 1.0) * trMn / (tr * tr);
-            return alpha(tr) * (g * g + g1);
+            return a * (g * g + g1);
         }
 
         @Override

@@ -698,6 +698,20 @@ public final class CubicModel {
         return d;
     }
 
+    /** d2 c(T, x)/dT2 of a composition, m3/(mol K2); zero for a constant translation. */
+    public double volumeShiftCurvature(double t, double[] x) {
+        if (shift == null || !shiftVaries) {
+            return 0.0;
+        }
+        double d = 0;
+        for (int i = 0; i < x.length; i++) {
+            if (x[i] != 0) {
+                d += x[i] * shift[i].d2cdT2(t);
+            }
+        }
+        return d;
+    }
+
     /** Whether the translation changes with temperature. */
     public boolean volumeShiftVaries() {
         return shiftVaries;
@@ -804,12 +818,21 @@ public final class CubicModel {
         double cvIg = cpIg - R;
         double cv = cvIg + cvR;
         double cp = cv - t * dPdT * dPdT / dPdv;
+        double dvdT = -dPdT / dPdv;
+        if (used == DensityBasis.TRANSLATED && shiftVaries) {
+            // The translated equation P(T, v) = P_cubic(T, v + c(T)) with c = c(T) only: (dv/dP)_T
+            // is the cubic's, (dv/dT)_P loses c', Cp gains P T c'' (from H = H_cubic - P (c - T c'));
+            // Cv follows from Cp - Cv = -T (dv/dT)_P^2 (dP/dv)_T. A constant shift changes neither.
+            dvdT -= volumeShiftSlope(t, x);
+            cp += p * t * volumeShiftCurvature(t, x);
+            cv = cp + t * dvdT * dvdT * dPdv;
+        }
         double kIdeal = cpIg / cvIg;
         double kReal = cp / cv;
-        double isentropic = -vCubic / p * kReal * dPdv;
-        double sound2 = -kReal * vCubic * vCubic * dPdv / (mw * 1e-3);
-        double dvdT = -dPdT / dPdv;
-        double jt = (t * dvdT - vCubic) / cp;
+        // On the density basis in use: the translated volume where the basis is translated.
+        double isentropic = -v / p * kReal * dPdv;
+        double sound2 = -kReal * v * v * dPdv / (mw * 1e-3);
+        double jt = (t * dvdT - v) / cp;
         for (int i = 0; i < x.length; i++) {
             IdealGasCp c = components.get(i).cp();
             if (x[i] > 0 && !c.inRange(t)) {
@@ -819,6 +842,12 @@ public final class CubicModel {
             }
         }
         PhaseLabel label = label(t, p, x, sel);
+        if (dPdv < 0 && !(cv > 0 && cp > 0 && sound2 > 0)) {
+            warnings.add(String.format(Locale.US, "The heat capacities at this state are not physical on the %s basis "
+                    + "(Cp = %.4g, Cv = %.4g J/(mol K)): k, the isentropic exponent and the speed of sound are not "
+                    + "meaningful here%s.", used.label(), cp, cv, shiftVaries && used == DensityBasis.TRANSLATED
+                    ? " (the temperature-dependent volume translation dominates far from its anchors)" : ""));
+        }
         if (!(dPdv < 0)) {
             warnings.add("The chosen root is mechanically unstable ((dP/dv)_T >= 0); heat capacities and speed of "
                     + "sound are not meaningful there.");
