@@ -13,6 +13,7 @@ import org.ventcase.inventory.Inventory;
 import org.ventcase.inventory.LiquidFullCheck;
 import org.ventcase.inventory.PhaseInventory;
 import org.ventcase.thermo.Component;
+import org.ventcase.thermo.EosVariant;
 import org.ventcase.thermo.FluidProperties;
 import org.ventcase.thermo.SaturationResult;
 import org.ventcase.vessel.LevelState;
@@ -56,6 +57,32 @@ public final class JsonReports {
         return n;
     }
 
+    /** The component block with what the model uses for it ({@code model}: constants, alpha, translation). */
+    static ObjectNode component(Component c, EosVariant v) {
+        ObjectNode n = component(c);
+        n.set("model", componentModel(c, v));
+        return n;
+    }
+
+    /**
+     * What the equation of state uses for one component: {@code Tc_K}, {@code Pc_Pa},
+     * {@code omega} (the model's own, which a published parameter set may bring), {@code alpha},
+     * {@code translation} and {@code source} (of the constants), {@code notes} (fallbacks).
+     */
+    public static ObjectNode componentModel(Component c, EosVariant v) {
+        EosVariant.ComponentModel d = v.describe(c);
+        ObjectNode m = MAPPER.createObjectNode();
+        m.put("Tc_K", d.constants().tcK());
+        m.put("Pc_Pa", d.constants().pcPa());
+        m.put("omega", d.constants().omega());
+        m.put("alpha", d.alpha());
+        m.put("translation", d.translation());
+        m.put("source", d.constants().source());
+        ArrayNode notes = m.putArray("notes");
+        d.notes().forEach(notes::add);
+        return m;
+    }
+
     private static void number(ObjectNode n, String key, double v, List<String> warnings, String what) {
         if (Double.isFinite(v)) {
             n.put(key, v);
@@ -82,7 +109,7 @@ public final class JsonReports {
     }
 
     private static ObjectNode fill(ObjectNode n, FluidProperties p, Component c, List<String> warnings) {
-        n.set("component", component(c));
+        n.set("component", component(c, p.variant()));
         n.put("temperature_K", p.temperatureK());
         n.put("pressure_Pa", p.pressurePa());
         n.set("roots", array(p.roots().physical()));
@@ -127,7 +154,7 @@ public final class JsonReports {
         ObjectNode n = MAPPER.createObjectNode();
         n.put("eos", s.variant().name());
         n.put("eosName", s.variant().displayName());
-        n.set("component", component(s.component()));
+        n.set("component", component(s.component(), s.variant()));
         n.put("temperature_K", s.temperatureK());
         n.put("pressure_Pa", s.pressurePa());
         n.set("liquid", phase(s.liquid()));
@@ -194,7 +221,7 @@ public final class JsonReports {
         n.put("eosName", mm.model().variant().displayName());
         ArrayNode comps = MAPPER.createArrayNode();
         for (Component c : mm.model().components()) {
-            comps.add(component(c));
+            comps.add(component(c, mm.model().variant()));
         }
         n.set("components", comps);
         n.set("feed", fractions(mm.model().components(), feed));
@@ -320,7 +347,7 @@ public final class JsonReports {
         n.put("pressure_Pa", inv.pressurePa());
         n.set("composition", fractions(inv.fluid().composition().asMap()));
         ArrayNode comps = MAPPER.createArrayNode();
-        inv.fluid().components().forEach(c -> comps.add(component(c)));
+        inv.fluid().components().forEach(c -> comps.add(component(c, inv.fluid().variant())));
         n.set("components", comps);
         ArrayNode kij = MAPPER.createArrayNode();
         double[][] k = inv.fluid().kij().kij();

@@ -93,6 +93,7 @@ public final class ResultsJson {
         n.put("governingRule", r.governingRule());
         n.set("vessel", vessel(r.vessel()));
         n.set("inventory", inventory(r.inventory()));
+        n.set("model", model(r.inventory().fluid()));
         ArrayNode sc = n.putArray("scenarios");
         for (CaseResult.ScenarioResult s : r.scenarios()) {
             sc.add(scenario(s));
@@ -142,6 +143,31 @@ public final class ResultsJson {
         num(n, "wettedArea_m2", v.wettedArea());
         num(n, "fireWettedArea_m2", v.fire().area());
         n.put("fireAreaRule", v.fire().ruleApplied());
+        return n;
+    }
+
+    /**
+     * The equation of state as used: {@code eos} (id), {@code name}, {@code reference}, and per
+     * component the model's constants, alpha and translation with sources (JsonReports.componentModel).
+     */
+    private static ObjectNode model(org.ventcase.inventory.Fluid f) {
+        ObjectNode n = MAPPER.createObjectNode();
+        n.put("eos", f.variant().name());
+        n.put("name", f.variant().displayName());
+        n.put("reference", f.variant().citation());
+        ObjectNode comps = n.putObject("components");
+        for (org.ventcase.thermo.Component c : f.components()) {
+            ObjectNode m = JsonReports.componentModel(c, f.variant());
+            // numbers rounded like every other number of this contract
+            ObjectNode r = comps.putObject(c.name());
+            r.put("Tc_K", round(m.get("Tc_K").asDouble()));
+            r.put("Pc_Pa", round(m.get("Pc_Pa").asDouble()));
+            r.put("omega", round(m.get("omega").asDouble()));
+            r.set("alpha", m.get("alpha"));
+            r.set("translation", m.get("translation"));
+            r.set("source", m.get("source"));
+            r.set("notes", m.get("notes"));
+        }
         return n;
     }
 

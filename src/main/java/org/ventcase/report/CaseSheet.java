@@ -153,11 +153,14 @@ final class CaseSheet {
             if (vapour.isPresent()) {
                 cells.add(f("%.5f", vapour.get()[i]));
             }
-            cells.addAll(List.of(u.plain(Kind.TEMPERATURE, c.tcK()), u.plain(Kind.PRESSURE_ABS, c.pcPa()),
-                    f("%.4f", c.omega()), f("%.3f kg/kmol", c.molarMass())));
+            // The constants the equation of state uses (a published parameter set brings its own).
+            org.ventcase.thermo.EosVariant.Constants k = in.fluid().variant().constants(c);
+            cells.addAll(List.of(u.plain(Kind.TEMPERATURE, k.tcK()), u.plain(Kind.PRESSURE_ABS, k.pcPa()),
+                    f("%.4f", k.omega()), f("%.3f kg/kmol", c.molarMass())));
             rows.add(new Row(cells, false));
-            sources.append(sources.length() == 0 ? "" : " ").append(c.name()).append(": constants ")
-                    .append(c.criticalSource()).append("; ideal-gas Cp ").append(c.cp().source()).append('.');
+            sources.append(sources.length() == 0 ? "" : " ").append(c.name()).append(": Tc, Pc, omega ")
+                    .append(k.source()).append("; molar mass ").append(c.criticalSource()).append("; ideal-gas Cp ")
+                    .append(c.cp().source()).append('.');
         }
         t.add(new Table("Fluid and composition", cols, w, rows, "Sources. " + sources));
         List<Row> eos = new ArrayList<>();
@@ -165,6 +168,16 @@ final class CaseSheet {
         eos.add(Row.of("Reference", in.fluid().variant().citation()));
         eos.add(Row.of("Liquid-density basis", in.fluid().densityBasis().label()
                 + (in.fluid().variant().hasVolumeShift() ? " (" + in.fluid().variant().volumeShiftCitation() + ")" : "")));
+        for (Component c : cs) {
+            org.ventcase.thermo.EosVariant.ComponentModel d = in.fluid().variant().describe(c);
+            eos.add(Row.of("Alpha function, " + c.name(), d.alpha()));
+            if (in.fluid().densityBasis() == org.ventcase.thermo.DensityBasis.TRANSLATED) {
+                eos.add(Row.of("Volume translation, " + c.name(), d.translation()));
+            }
+            for (String note : d.notes()) {
+                eos.add(Row.of("Note, " + c.name(), note));
+            }
+        }
         KijTable.Matrix m = in.fluid().kij();
         double[][] k = m.kij();
         String[][] src = m.sources();

@@ -1,5 +1,6 @@
 package org.ventcase.thermo;
 
+import java.util.List;
 import java.util.Locale;
 import java.util.function.Function;
 
@@ -197,6 +198,32 @@ public enum EosVariant {
             return volumeShift == null ? null : new VolumeTranslation.Constant(volumeShift.shift(c), volumeShift.citation);
         }
         return AnchorCache.get(this, c);
+    }
+
+    /**
+     * What this variant does with one component, in words, for the sheet and the JSON outputs.
+     *
+     * @param constants   Tc, Pc, omega and alpha in use, with their source
+     * @param alpha       the alpha function with its parameters and source
+     * @param translation the volume translation with its source, or "none"
+     * @param notes       warnings about fallbacks for this component (may be empty)
+     */
+    public record ComponentModel(Constants constants, String alpha, String translation, List<String> notes) {
+    }
+
+    /** The description of one component under this variant (see {@link ComponentModel}). */
+    public ComponentModel describe(Component c) {
+        Constants k = constants(c);
+        VolumeTranslation t = hasVolumeShift() ? translation(c) : null;
+        List<String> notes = new java.util.ArrayList<>();
+        if (!k.note().isEmpty()) {
+            notes.add(k.note());
+        }
+        String tn = translationNote(c);
+        if (!tn.isEmpty()) {
+            notes.add(tn);
+        }
+        return new ComponentModel(k, k.alpha().describe(), t == null ? "none" : t.describe(), List.copyOf(notes));
     }
 
     /** A note on a component's translation (fallback in use), or "". */

@@ -26,7 +26,8 @@ public final class TwuParameters {
     public static final String RESOURCE = "/org/ventcase/thermo/twu-tcpr.csv";
 
     /** Citation printed beside the parameters. */
-    public static final String CITATION = "Pina-Martinez, Privat, Jaubert, AIChE J. 68 (2022) e17518 (tc-PR set)";
+    public static final String CITATION = "tc-PR set of Pina-Martinez, Privat, Jaubert, AIChE J. 68 (2022) e17518, "
+            + "as tabulated in the open-source Clapeyron.jl database";
 
     /**
      * One published set.
