@@ -90,9 +90,7 @@ final class PropsCommand implements Callable<Integer> {
         tx.row("Speed of sound", Double.isFinite(f.speedOfSound())
                 ? String.format(Locale.ROOT, "%.1f m/s", f.speedOfSound()) : "not defined (see warnings)");
         tx.row("Joule-Thomson coefficient", "%.4g K/bar", f.jouleThomson() * 1e5);
-        tx.row("Constants used", String.format(Locale.ROOT, "Tc %.2f K, Pc %.4g kPa, omega %.4f, M %.3f kg/kmol",
-                c.tcK(), c.pcPa() / 1e3, c.omega(), c.molarMass()));
-        tx.row("Source of constants", c.criticalSource());
+        Text.modelRows(tx, f.variant(), c);
         tx.warnings(f.warnings());
         return ExitCode.OK;
     }

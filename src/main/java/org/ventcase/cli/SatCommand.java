@@ -83,7 +83,7 @@ final class SatCommand implements Callable<Integer> {
                 c.molarMass() * 1e-3 / s.liquid().molarVolumeCubic(), s.rackettLiquidDensity());
         tx.row("Vapour density", "%.4g kg/m3 (%s)", s.vapor().density(), s.vapor().densityBasis().label());
         tx.row("Latent heat", "%.1f kJ/kg (%.1f J/mol)", s.latentHeatJkg() / 1e3, s.latentHeatJmol());
-        tx.row("Source of constants", c.criticalSource());
+        Text.modelRows(tx, s.variant(), c);
         tx.warnings(s.warnings());
         return ExitCode.OK;
     }

@@ -56,4 +56,16 @@ final class Text {
     static String temperature(double k) {
         return String.format(Locale.ROOT, "%.2f K (%.2f C)", k, k - 273.15);
     }
+
+    /** The constants, alpha function and volume translation the model uses for a component, with sources. */
+    static void modelRows(Text tx, org.ventcase.thermo.EosVariant v, org.ventcase.thermo.Component c) {
+        org.ventcase.thermo.EosVariant.ComponentModel d = v.describe(c);
+        tx.row("Constants used", String.format(java.util.Locale.ROOT,
+                "Tc %.2f K, Pc %.4g kPa, omega %.4f, M %.3f kg/kmol", d.constants().tcK(), d.constants().pcPa() / 1e3,
+                d.constants().omega(), c.molarMass()));
+        tx.row("Source of constants", d.constants().source()
+                + (d.constants().source().equals(c.criticalSource()) ? "" : "; molar mass " + c.criticalSource()));
+        tx.row("Alpha function", d.alpha());
+        tx.row("Volume translation", d.translation());
+    }
 }
