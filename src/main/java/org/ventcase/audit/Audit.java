@@ -22,7 +22,9 @@ import org.ventcase.inventory.Inventory;
 import org.ventcase.vessel.LevelState;
 
 /**
- * Runs an audit: every item through {@link CaseCalculation#run} (in parallel, one row a task,
+ * Runs an audit: every item through {@link CaseCalculation#run} with the screening options (the same
+ * code as the full case, without the load-against-level curve and the phase envelope, which the
+ * audit does not report; in parallel, one row a task,
  * results kept in input order), then the totals and threshold checks ({@link AuditResult#of}).
  * A row whose calculation throws is reported as an error row; it never stops the run.
  */
@@ -54,46 +56,113 @@ public final class Audit {
      * @param progress progress listener, called from the worker threads
      */
     public static AuditResult run(List<AuditItem> items, Thresholds thresholds, int threads, Progress progress) {
+        return run(items.size(), items::get, thresholds, threads, progress);
+    }
+
+    /**
+     * Runs the audit of a register, each row read into its case by the worker that computes it,
+     * so that no more than one case a thread is held at a time.
+     */
+    public static AuditResult run(Register register, Thresholds thresholds, int threads, Progress progress) {
+        RegisterCases rc = new RegisterCases(register.origin());
+        List<RegisterRow> rows = register.rows();
+        return run(rows.size(), i -> rc.item(rows.get(i)), thresholds, threads, progress);
+    }
+
+    /** Rows read, computed and reduced to their audit rows at a time by {@link #run(Register.Stream, int, Thresholds, int, Progress)}. */
+    public static final int CHUNK_ROWS = 2048;
+
+    /**
+     * Runs the audit of a register read in chunks of {@link #CHUNK_ROWS}: read, compute in parallel,
+     * keep only the per-vessel audit rows, read on. Only the register text, one chunk of rows and
+     * the audit rows stay in memory; the output order is the input order.
+     *
+     * @param total the number of rows, for progress (the count of the register's records after the header)
+     */
+    public static AuditResult run(Register.Stream register, int total, Thresholds thresholds, int threads,
+                                  Progress progress) {
         if (threads < 1) {
             throw InvalidInputException.invalid("threads", threads, "expected at least 1");
         }
-        int n = items.size();
-        VesselAudit[] out = new VesselAudit[n];
-        AtomicInteger next = new AtomicInteger();
+        RegisterCases rc = new RegisterCases(register.origin());
+        List<VesselAudit> all = new ArrayList<>();
         AtomicInteger done = new AtomicInteger();
-        Runnable worker = () -> {
-            for (int i = next.getAndIncrement(); i < n; i = next.getAndIncrement()) {
-                out[i] = audit(items.get(i));
-                progress.update(done.incrementAndGet(), n);
+        ExecutorService pool = threads > 1 ? pool(threads) : null;
+        try {
+            for (List<RegisterRow> chunk = register.next(CHUNK_ROWS); !chunk.isEmpty();
+                 chunk = register.next(CHUNK_ROWS)) {
+                List<RegisterRow> rows = chunk;
+                all.addAll(Arrays.asList(compute(rows.size(), i -> rc.item(rows.get(i)), pool, threads, done,
+                        Math.max(total, all.size() + rows.size()), progress)));
             }
-        };
-        int t = Math.min(threads, Math.max(1, n));
-        if (t == 1) {
-            worker.run();
-        } else {
-            ExecutorService pool = Executors.newFixedThreadPool(t, r -> {
-                Thread th = new Thread(r, "ventcase-audit");
-                th.setDaemon(true);
-                return th;
-            });
-            try {
-                List<Future<?>> fs = new ArrayList<>();
-                for (int k = 0; k < t; k++) {
-                    fs.add(pool.submit(worker));
-                }
-                for (Future<?> f : fs) {
-                    f.get();
-                }
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("audit interrupted", e);
-            } catch (ExecutionException e) {
-                throw new IllegalStateException("audit worker failed", e.getCause());
-            } finally {
+        } finally {
+            if (pool != null) {
                 pool.shutdownNow();
             }
         }
-        return AuditResult.of(Arrays.asList(out), thresholds);
+        return AuditResult.of(all, thresholds);
+    }
+
+    /**
+     * Runs the audit of n items, item i made by {@code item} on the worker thread that computes it.
+     *
+     * @param threads  worker threads, at least 1 (1 computes in the calling thread)
+     * @param progress progress listener, called from the worker threads
+     */
+    public static AuditResult run(int n, java.util.function.IntFunction<AuditItem> item, Thresholds thresholds,
+                                  int threads, Progress progress) {
+        if (threads < 1) {
+            throw InvalidInputException.invalid("threads", threads, "expected at least 1");
+        }
+        ExecutorService pool = threads > 1 && n > 1 ? pool(Math.min(threads, n)) : null;
+        try {
+            VesselAudit[] out = compute(n, item, pool, threads, new AtomicInteger(), n, progress);
+            return AuditResult.of(Arrays.asList(out), thresholds);
+        } finally {
+            if (pool != null) {
+                pool.shutdownNow();
+            }
+        }
+    }
+
+    private static ExecutorService pool(int threads) {
+        return Executors.newFixedThreadPool(threads, r -> {
+            Thread th = new Thread(r, "ventcase-audit");
+            th.setDaemon(true);
+            return th;
+        });
+    }
+
+    /** Computes n items on the pool (or in this thread without one), results in input order. */
+    private static VesselAudit[] compute(int n, java.util.function.IntFunction<AuditItem> item, ExecutorService pool,
+                                         int threads, AtomicInteger done, int total, Progress progress) {
+        VesselAudit[] out = new VesselAudit[n];
+        AtomicInteger next = new AtomicInteger();
+        Runnable worker = () -> {
+            for (int i = next.getAndIncrement(); i < n; i = next.getAndIncrement()) {
+                out[i] = audit(item.apply(i));
+                progress.update(done.incrementAndGet(), total);
+            }
+        };
+        if (pool == null) {
+            worker.run();
+            return out;
+        }
+        try {
+            List<Future<?>> fs = new ArrayList<>();
+            for (int k = 0; k < Math.min(threads, Math.max(1, n)); k++) {
+                fs.add(pool.submit(worker));
+            }
+            for (Future<?> f : fs) {
+                f.get();
+            }
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("audit interrupted", e);
+        } catch (ExecutionException e) {
+            throw new IllegalStateException("audit worker failed", e.getCause());
+        }
+        return out;
     }
 
     /** The audit of one item (the case path, then the checks). Never throws for a bad row. */
@@ -103,7 +172,7 @@ public final class Audit {
         }
         CaseResult r;
         try {
-            r = CaseCalculation.run(it.input().get());
+            r = CaseCalculation.run(it.input().get(), CaseCalculation.Options.SCREENING);
         } catch (InvalidInputException e) {
             String field = it.source().endsWith(".json") ? e.field() : RegisterCases.column(e.field());
             return error(it, new AuditError(field, e.value(), e.accepted()));

@@ -36,25 +36,58 @@ public final class Csv {
      */
     public static List<Record> parse(String text, String origin) {
         List<Record> out = new ArrayList<>();
-        String s = text.startsWith("\uFEFF") ? text.substring(1) : text;
-        int n = s.length();
-        int i = 0;
-        int line = 1;
-        while (i < n) {
-            char c = s.charAt(i);
-            if (c == '#') {
-                while (i < n && s.charAt(i) != '\n') {
+        Reader r = new Reader(text, origin);
+        for (Record rec = r.next(); rec != null; rec = r.next()) {
+            out.add(rec);
+        }
+        return out;
+    }
+
+    /**
+     * Reads records one at a time from CSV text (comments and blank lines left out), so that a long
+     * file can be processed in chunks without holding every record.
+     */
+    public static final class Reader {
+        private final String s;
+        private final String origin;
+        private final int n;
+        private int i;
+        private int line = 1;
+
+        public Reader(String text, String origin) {
+            this.s = text.startsWith("\uFEFF") ? text.substring(1) : text;
+            this.origin = origin;
+            this.n = s.length();
+        }
+
+        /**
+         * The next record, or {@code null} at the end of the text.
+         *
+         * @throws InvalidInputException for a quote left open at the end of the text
+         */
+        public Record next() {
+            while (i < n) {
+                char c = s.charAt(i);
+                if (c == '#') {
+                    while (i < n && s.charAt(i) != '\n') {
+                        i++;
+                    }
                     i++;
+                    line++;
+                    continue;
                 }
-                i++;
-                line++;
-                continue;
+                if (c == '\n' || c == '\r' && i + 1 < n && s.charAt(i + 1) == '\n') {
+                    i += c == '\r' ? 2 : 1;
+                    line++;
+                    continue;
+                }
+                return record();
             }
-            if (c == '\n' || c == '\r' && i + 1 < n && s.charAt(i + 1) == '\n') {
-                i += c == '\r' ? 2 : 1;
-                line++;
-                continue;
-            }
+            return null;
+        }
+
+        private Record record() {
+            char c;
             int start = line;
             List<String> fields = new ArrayList<>();
             StringBuilder f = new StringBuilder();
@@ -107,9 +140,8 @@ public final class Csv {
                         "expected every opening double quote of a field to be closed");
             }
             fields.add(wasQuoted ? f.toString() : f.toString().strip());
-            out.add(new Record(start, fields));
+            return new Record(start, fields);
         }
-        return out;
     }
 
     /**

@@ -55,12 +55,25 @@ public record Register(String origin, List<Optional<RegisterColumn>> columns, Li
 
     /** Parses register text. */
     public static Register parse(String text, String origin) {
-        List<Csv.Record> records = Csv.parse(text, origin);
-        if (records.isEmpty()) {
+        Stream st = stream(text, origin);
+        List<RegisterRow> rows = new ArrayList<>();
+        for (List<RegisterRow> chunk = st.next(Integer.MAX_VALUE); !chunk.isEmpty(); chunk = st.next(Integer.MAX_VALUE)) {
+            rows.addAll(chunk);
+        }
+        return new Register(origin, st.columns(), st.headerUnits(), st.ignoredColumns(), rows);
+    }
+
+    /**
+     * Opens register text for reading in chunks: the header is read and checked now, the vessel
+     * rows by {@link Stream#next}. The same rules and messages as {@link #parse}.
+     */
+    public static Stream stream(String text, String origin) {
+        Csv.Reader reader = new Csv.Reader(text, origin);
+        Csv.Record head = reader.next();
+        if (head == null) {
             throw InvalidInputException.missing(origin, "expected a header line naming the columns, then one vessel a "
                     + "line (docs/audit.md)");
         }
-        Csv.Record head = records.get(0);
         List<Optional<RegisterColumn>> cols = new ArrayList<>();
         List<String> units = new ArrayList<>();
         List<String> ignored = new ArrayList<>();
@@ -100,22 +113,78 @@ public record Register(String origin, List<Optional<RegisterColumn>> columns, Li
                         "expected a header with at least the columns " + requiredList() + " (docs/audit.md)");
             }
         }
-        List<RegisterRow> rows = new ArrayList<>();
-        for (int r = 1; r < records.size(); r++) {
-            Csv.Record rec = records.get(r);
-            Map<RegisterColumn, String> cells = new EnumMap<>(RegisterColumn.class);
-            for (int i = 0; i < Math.min(rec.fields().size(), cols.size()); i++) {
-                if (cols.get(i).isPresent()) {
-                    cells.put(cols.get(i).get(), withUnit(rec.fields().get(i), units.get(i)));
-                }
-            }
-            Optional<RegisterColumn> firstMissing = Optional.empty();
-            for (int i = rec.fields().size(); i < cols.size() && firstMissing.isEmpty(); i++) {
-                firstMissing = cols.get(i);
-            }
-            rows.add(new RegisterRow(rec.line(), cells, rec.fields().size(), cols.size(), firstMissing));
+        return new Stream(origin, List.copyOf(cols), List.copyOf(units), List.copyOf(ignored), reader);
+    }
+
+    /** The number of vessel rows of register text (records after the header), for progress reports. */
+    public static int countRows(String text, String origin) {
+        Csv.Reader r = new Csv.Reader(text, origin);
+        int n = -1;
+        while (r.next() != null) {
+            n++;
         }
-        return new Register(origin, cols, units, ignored, rows);
+        return Math.max(n, 0);
+    }
+
+    /** A register being read in chunks (see {@link #stream}). Not thread-safe: one reader. */
+    public static final class Stream {
+        private final String origin;
+        private final List<Optional<RegisterColumn>> columns;
+        private final List<String> headerUnits;
+        private final List<String> ignoredColumns;
+        private final Csv.Reader reader;
+
+        private Stream(String origin, List<Optional<RegisterColumn>> columns, List<String> headerUnits,
+                       List<String> ignoredColumns, Csv.Reader reader) {
+            this.origin = origin;
+            this.columns = columns;
+            this.headerUnits = headerUnits;
+            this.ignoredColumns = ignoredColumns;
+            this.reader = reader;
+        }
+
+        public String origin() {
+            return origin;
+        }
+
+        public List<Optional<RegisterColumn>> columns() {
+            return columns;
+        }
+
+        public List<String> headerUnits() {
+            return headerUnits;
+        }
+
+        public List<String> ignoredColumns() {
+            return ignoredColumns;
+        }
+
+        /** Up to {@code max} more vessel rows, in file order; empty at the end. */
+        public List<RegisterRow> next(int max) {
+            List<RegisterRow> rows = new ArrayList<>();
+            while (rows.size() < max) {
+                Csv.Record rec = reader.next();
+                if (rec == null) {
+                    break;
+                }
+                rows.add(row(rec, columns, headerUnits));
+            }
+            return rows;
+        }
+    }
+
+    private static RegisterRow row(Csv.Record rec, List<Optional<RegisterColumn>> cols, List<String> units) {
+        Map<RegisterColumn, String> cells = new EnumMap<>(RegisterColumn.class);
+        for (int i = 0; i < Math.min(rec.fields().size(), cols.size()); i++) {
+            if (cols.get(i).isPresent()) {
+                cells.put(cols.get(i).get(), withUnit(rec.fields().get(i), units.get(i)));
+            }
+        }
+        Optional<RegisterColumn> firstMissing = Optional.empty();
+        for (int i = rec.fields().size(); i < cols.size() && firstMissing.isEmpty(); i++) {
+            firstMissing = cols.get(i);
+        }
+        return new RegisterRow(rec.line(), cells, rec.fields().size(), cols.size(), firstMissing);
     }
 
     private static String requiredList() {

@@ -127,9 +127,33 @@ public final class CaseCalculation {
         }
     }
 
+    /**
+     * What a run computes beyond each scenario's own result.
+     *
+     * @param levelCurve the wetted fire's load against fill level (the scenario re-run over 19 levels)
+     * @param envelope   the phase envelope of a mixture
+     */
+    public record Options(boolean levelCurve, boolean envelope) {
+        /** Everything: what the sheet, the results JSON and the wizard show. */
+        public static final Options FULL = new Options(true, true);
+        /**
+         * The numbers of each scenario and of the inventory only, through the same code as
+         * {@link #FULL}, so they are identical (the audit's screening path).
+         */
+        public static final Options SCREENING = new Options(false, false);
+    }
+
+    /** Why the parts left out by {@link Options#SCREENING} are absent. */
+    public static final String NOT_COMPUTED = "not computed in a screening run";
+
     /** Runs every scenario of the case. */
     public static CaseResult run(CaseInput in) {
         return run(in, Monitor.NONE);
+    }
+
+    /** Runs every scenario of the case, computing what the options ask for. */
+    public static CaseResult run(CaseInput in, Options options) {
+        return run(in, Monitor.NONE, options);
     }
 
     /**
@@ -137,6 +161,11 @@ public final class CaseCalculation {
      * monitor asks ({@link Cancelled}).
      */
     public static CaseResult run(CaseInput in, Monitor monitor) {
+        return run(in, monitor, Options.FULL);
+    }
+
+    /** Runs every scenario of the case with the monitor and the options. */
+    public static CaseResult run(CaseInput in, Monitor monitor, Options options) {
         int n = in.scenarios().size();
         double steps = n + 2.0;
         monitor.progress(0, "Inventory at storage conditions");
@@ -150,7 +179,7 @@ public final class CaseCalculation {
             storage = new Storage.Saturated(sat.temperatureK(), OptionalDouble.of(maxP1));
         }
         Inventory inv = Inventories.compute(in.fluid(), storage, in.vessel(), in.level(), in.exposure());
-        Context ctx = new Context(in, inv);
+        Context ctx = new Context(in, inv, options);
         List<CaseResult.ScenarioResult> results = new ArrayList<>();
         for (CaseInput.Scenario s : in.scenarios()) {
             monitor.progress((results.size() + 1) / steps, "Scenario " + (results.size() + 1) + " of " + n + ": "
@@ -160,7 +189,8 @@ public final class CaseCalculation {
         }
         monitor.progress((n + 1) / steps, "Phase envelope");
         check(monitor);
-        CaseResult.Envelope envelope = envelope(in);
+        CaseResult.Envelope envelope = options.envelope() ? envelope(in)
+                : new CaseResult.Envelope(Optional.empty(), NOT_COMPUTED);
         OptionalInt gov = governing(results);
         List<CaseResult.ScenarioResult> marked = new ArrayList<>();
         for (int i = 0; i < results.size(); i++) {
@@ -268,9 +298,9 @@ public final class CaseCalculation {
 
     /** What every scenario needs: the case, the inventory, the fluid as the relief classes take it. */
     private record Context(CaseInput in, Inventory inv, MixtureSpec liquid, Optional<MixtureSpec> vapourSpace,
-                           LevelState level) {
-        Context(CaseInput in, Inventory inv) {
-            this(in, inv, spec(in.fluid(), in.fluid().composition()), vapourSpace(in), inv.vessel());
+                           LevelState level, Options options) {
+        Context(CaseInput in, Inventory inv, Options options) {
+            this(in, inv, spec(in.fluid(), in.fluid().composition()), vapourSpace(in), inv.vessel(), options);
         }
 
         static MixtureSpec spec(Fluid f, Composition x) {
@@ -406,6 +436,10 @@ public final class CaseCalculation {
             o.trace.add(factorStep(env, "the relieving temperature T1"));
         }
         o.warnings.addAll(r.warnings());
+        if (!c.options().levelCurve()) {
+            o.levelCurveNote = NOT_COMPUTED;
+            return;
+        }
         try {
             o.levelCurve = Optional.of(levelCurve(c, f, env));
         } catch (NoSolutionException | InvalidInputException | ConvergenceException e) {

@@ -120,7 +120,9 @@ final class AuditCommand implements Callable<Integer> {
             throw new java.nio.file.NoSuchFileException(input.toString());
         }
         MessageDigest hash = sha256();
-        List<AuditItem> items;
+        List<AuditItem> items = null;
+        Register.Stream register = null;
+        int registerRows = 0;
         String registerName = input.getFileName() == null ? input.toString() : input.getFileName().toString();
         if (Files.isDirectory(input)) {
             items = folder(input, hash);
@@ -131,7 +133,10 @@ final class AuditCommand implements Callable<Integer> {
                         "expected a register of at most " + Register.MAX_BYTES + " bytes");
             }
             hash.update(bytes);
-            items = RegisterCases.items(Register.parse(new String(bytes, StandardCharsets.UTF_8), registerName));
+            String text = new String(bytes, StandardCharsets.UTF_8);
+            bytes = null;
+            registerRows = Register.countRows(text, registerName);
+            register = Register.stream(text, registerName);
         }
         Thresholds th = Thresholds.none();
         if (thresholdsFile != null) {
@@ -141,7 +146,7 @@ final class AuditCommand implements Callable<Integer> {
         }
         boolean bar = progress || System.console() != null;
         ProgressBar pb = new ProgressBar(err, bar);
-        AuditResult r = Audit.run(items, th, n, pb);
+        AuditResult r = register != null ? Audit.run(register, registerRows, th, n, pb) : Audit.run(items, th, n, pb);
         pb.finish();
         if (csv != null) {
             AuditCsv.write(r, csv);

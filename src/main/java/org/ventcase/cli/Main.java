@@ -53,6 +53,13 @@ public final class Main implements Callable<Integer> {
         PrintWriter out = new PrintWriter(System.out, true);
         PrintWriter err = new PrintWriter(System.err, true);
         windowsAllowed = true;
+        if (BatchJvm.wanted(args, java.lang.management.ManagementFactory.getRuntimeMXBean().getInputArguments(),
+                System.getenv("VENTCASE_FORK"))) {
+            java.util.Optional<Integer> code = BatchJvm.run(args);
+            if (code.isPresent()) {
+                System.exit(code.get());
+            }
+        }
         if (args.length == 0) {
             if (displayAvailableHere()) {
                 org.ventcase.ui.WizardLauncher.launch();

@@ -86,6 +86,40 @@ class AuditCasePathTest {
         return out;
     }
 
+    /**
+     * The audit's screening path (no load-against-level curve, no envelope) against the full case
+     * calculation of the same row, for every row of the demo register: the reported numbers and the
+     * warnings must be identical (same code, so exact equality).
+     */
+    @Test
+    void screeningPathEqualsTheFullCalculationForEveryDemoRegisterRow() throws Exception {
+        Register reg = Register.read(java.nio.file.Path.of("demo-cases/register/kestrel-point-register.csv"));
+        RegisterCases rc = new RegisterCases(reg.origin());
+        int compared = 0;
+        for (RegisterRow row : reg.rows()) {
+            AuditItem it = rc.item(row);
+            if (it.input().isEmpty()) {
+                continue;
+            }
+            VesselAudit v = Audit.audit(it);
+            CaseResult full;
+            try {
+                full = CaseCalculation.run(it.input().get());
+            } catch (RuntimeException e) {
+                assertEquals(VesselAudit.Status.ERROR, v.status(), it.tag() + ": the full case failed: " + e);
+                continue;
+            }
+            VesselAudit w = Audit.from(it, full);
+            assertEquals(w.status(), v.status(), it.tag());
+            assertEquals(w.inventory(), v.inventory(), it.tag());
+            assertEquals(w.fire(), v.fire(), it.tag());
+            assertEquals(w.flags(), v.flags(), it.tag());
+            assertEquals(w.warnings(), v.warnings(), it.tag());
+            compared++;
+        }
+        assertTrue(compared > 200, "compared " + compared + " rows");
+    }
+
     @Test
     void everyRowGivesTheSameNumbersAsItsCaseFile() {
         AuditResult r = Audit.run(RegisterCases.items(Register.parse(AuditFixtures.SIX, "six.csv")),

@@ -140,8 +140,7 @@ public final class AuditRunner {
         MessageDigest hash = sha256();
         byte[] reg = register.bytes();
         hash.update(reg);
-        List<AuditItem> items = RegisterCases.items(Register.parse(new String(reg, StandardCharsets.UTF_8),
-                register.name()));
+        Register parsed = Register.parse(new String(reg, StandardCharsets.UTF_8), register.name());
         Thresholds th = Thresholds.none();
         if (thresholds.isPresent()) {
             byte[] t = thresholds.get().bytes();
@@ -149,10 +148,10 @@ public final class AuditRunner {
             th = Thresholds.parse(new String(t, StandardCharsets.UTF_8), thresholds.get().name());
         }
         check(cancelled);
-        progress.update(0, items.size());
+        progress.update(0, parsed.rows().size());
         AuditResult r;
         try {
-            r = Audit.run(items, th, Math.max(1, threads), (d, n) -> {
+            r = Audit.run(parsed, th, Math.max(1, threads), (d, n) -> {
                 check(cancelled);
                 progress.update(d, n);
             });
