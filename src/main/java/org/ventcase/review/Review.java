@@ -87,6 +87,15 @@ public final class Review {
 
     /** Runs the review. */
     public static ReviewResult run(CaseInput in, ClaimedValues claimed, Tolerances tol) {
+        return prepare(in, claimed).judge(tol);
+    }
+
+    /**
+     * Computes everything a review needs that does not depend on the tolerances: the case, the
+     * reviewed scenario, Ventcase's values and the model runs. {@link Prepared#judge} then gives
+     * the verdicts and hints for any tolerances without computing the case again.
+     */
+    public static Prepared prepare(CaseInput in, ClaimedValues claimed) {
         CaseResult base = CaseCalculation.run(in);
         String choice;
         int idx;
@@ -106,15 +115,50 @@ public final class Review {
         List<String> warnings = new ArrayList<>();
         Computed mine = computed(in, base, idx);
         List<ReviewResult.ModelRun> runs = sensitivity(in, base, idx, mine, warnings);
-        Hints hints = new Hints(in, base, s, mine, claimed, tol);
-        List<ReviewResult.Row> rows = new ArrayList<>();
-        for (ReviewQuantity q : ReviewQuantity.values()) {
-            if (claimed.has(q)) {
-                rows.add(row(q, claimed, mine, runs, tol, hints));
-            }
+        return new Prepared(in, claimed, base, idx, choice, mine, runs, List.copyOf(warnings));
+    }
+
+    /**
+     * A review computed once (see {@link #prepare}). Judging is cheap: the hints' alternative
+     * states (e.g. the bubble point at P1 read as gauge) are computed on first use and kept, so
+     * a second judgement with other tolerances computes nothing again. Thread-safe.
+     */
+    public static final class Prepared {
+        private final CaseInput in;
+        private final ClaimedValues claimed;
+        private final CaseResult base;
+        private final int idx;
+        private final String choice;
+        private final Computed mine;
+        private final List<ReviewResult.ModelRun> runs;
+        private final List<String> warnings;
+        private final Map<String, Optional<BoilingState>> states = new java.util.concurrent.ConcurrentHashMap<>();
+
+        Prepared(CaseInput in, ClaimedValues claimed, CaseResult base, int idx, String choice, Computed mine,
+                 List<ReviewResult.ModelRun> runs, List<String> warnings) {
+            this.in = in;
+            this.claimed = claimed;
+            this.base = base;
+            this.idx = idx;
+            this.choice = choice;
+            this.mine = mine;
+            this.runs = runs;
+            this.warnings = warnings;
         }
-        return new ReviewResult(base.title(), base.tag(), base.inputHash(), claimed.source(), idx, s.label(),
-                s.type().key(), choice, rows, runs, tol, base, warnings);
+
+        /** The verdicts, hints and model range for these tolerances. */
+        public ReviewResult judge(Tolerances tol) {
+            CaseResult.ScenarioResult s = base.scenarios().get(idx);
+            Hints hints = new Hints(in, base, s, mine, claimed, tol, states);
+            List<ReviewResult.Row> rows = new ArrayList<>();
+            for (ReviewQuantity q : ReviewQuantity.values()) {
+                if (claimed.has(q)) {
+                    rows.add(row(q, claimed, mine, runs, tol, hints));
+                }
+            }
+            return new ReviewResult(base.title(), base.tag(), base.inputHash(), claimed.source(), idx, s.label(),
+                    s.type().key(), choice, rows, runs, tol, base, new ArrayList<>(warnings));
+        }
     }
 
     // ------------------------------------------------------------------------------ scenario
@@ -226,7 +270,8 @@ public final class Review {
                 }
                 try {
                     CaseInput alt = withModel(in, v, b);
-                    CaseResult r = CaseCalculation.run(alt);
+                    // only the reviewed scenario's numbers are compared: no level curve, no envelope
+                    CaseResult r = CaseCalculation.run(alt, CaseCalculation.Options.SCREENING);
                     CaseResult.ScenarioResult s = r.scenarios().get(idx);
                     if (s.failure().isPresent()) {
                         runs.add(new ReviewResult.ModelRun(label(v, b), v, b, false, Map.of(), Optional.empty(),
@@ -363,10 +408,11 @@ public final class Review {
         private final Tolerances tol;
         private final MixtureSpec spec;
         private final double patm;
-        private final Map<String, Optional<BoilingState>> states = new HashMap<>();
+        private final Map<String, Optional<BoilingState>> states;
 
         Hints(CaseInput in, CaseResult result, CaseResult.ScenarioResult s, Computed mine, ClaimedValues claimed,
-              Tolerances tol) {
+              Tolerances tol, Map<String, Optional<BoilingState>> states) {
+            this.states = states;
             this.in = in;
             this.result = result;
             this.s = s;

@@ -29,8 +29,10 @@ import org.ventcase.ui.calc.ReviewRunner;
  * State and actions of the wizard's review mode: the claimed-value file chosen, the tolerance of
  * each quantity (editable, defaults with their reasons), the review of the last run and where it
  * stands. No calculation here: the {@link ReviewRunner} reads the file and runs the review, always
- * through the {@link LiveCalculation.Env}'s background; a tolerance edit re-runs it after the
- * debounce time, and a newer request supersedes a run in progress (its result is never shown).
+ * through the {@link LiveCalculation.Env}'s background; a tolerance edit re-judges the review
+ * already computed at once (no case is computed again), or, while the first run is still going,
+ * re-runs it after the debounce time; a newer request supersedes a run in progress (its result is
+ * never shown).
  * Usable without a window (tests build one with an inline environment).
  */
 public final class ReviewViewModel {
@@ -101,6 +103,8 @@ public final class ReviewViewModel {
     private final ReadOnlyStringWrapper exportMessage = new ReadOnlyStringWrapper(this, "exportMessage", "");
     private final Map<ReviewQuantity, ToleranceField> fields = new EnumMap<>(ReviewQuantity.class);
     private Tolerances tolerances = Tolerances.defaults();
+    /** The open case the review shown was computed with (a tolerance edit re-judges only while it is the same). */
+    private ReviewRunner.OpenCase lastOpen;
     private boolean resetting;
 
     private long generation;
@@ -215,6 +219,16 @@ public final class ReviewViewModel {
         if (source.get().isEmpty()) {
             return;
         }
+        Optional<ReviewRunner.Outcome> shown = outcome.get();
+        if (shown.isPresent() && state.get() != State.RUNNING && lastOpen == openCase.get()) {
+            // The case and the claimed values are unchanged: judge the computed review again with the
+            // new tolerances, here and now (no case is computed again; ReviewRunner.Outcome.withTolerances).
+            restart();
+            outcome.set(Optional.of(shown.get().withTolerances(tolerances)));
+            progress.set(1);
+            setState(State.CURRENT, "");
+            return;
+        }
         restart();
         long g = generation;
         setState(State.WAITING, Messages.get("review.state.waiting"));
@@ -254,6 +268,7 @@ public final class ReviewViewModel {
                 }), stop::get);
                 env.ui(() -> {
                     if (g == generation) {
+                        lastOpen = open;
                         outcome.set(Optional.of(o));
                         progress.set(1);
                         setState(State.CURRENT, "");

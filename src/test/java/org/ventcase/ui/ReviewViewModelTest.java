@@ -3,6 +3,7 @@ package org.ventcase.ui;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
@@ -113,7 +114,7 @@ class ReviewViewModelTest {
     }
 
     @Test
-    void changingAToleranceReEvaluatesTheVerdictsAfterThePause() {
+    void changingAToleranceReJudgesAtOnceWithoutComputingTheCaseAgain() {
         ReviewViewModel vm = vm();
         vm.openDemo("propane-bullet-latent-at-storage.json");
         ReviewResult before = result(vm);
@@ -124,18 +125,19 @@ class ReviewViewModelTest {
         String pct = ReviewViewModel.number(ReviewQuantity.LATENT_HEAT, Math.min(0.5, rel * 1.05));
         vm.tolerance(ReviewQuantity.LATENT_HEAT).text().set(pct);
         assertEquals("", vm.tolerance(ReviewQuantity.LATENT_HEAT).message().get());
-        assertEquals(ReviewViewModel.State.WAITING, vm.state().get());
-        assertFalse(vm.current(), "the old verdicts are not current while the new run is pending");
-        fire();
+        // judged again on the spot from the review already computed: current, nothing pending
+        assertEquals(ReviewViewModel.State.CURRENT, vm.state().get());
+        assertTrue(vm.current());
         ReviewResult after = result(vm);
+        assertSame(before.computed(), after.computed(), "the case was not computed again");
         ReviewResult.Row l1 = after.row(ReviewQuantity.LATENT_HEAT).orElseThrow();
         assertEquals(Verdict.AGREES, l1.verdict(), l1.toString());
         assertTrue(after.tolerances().changed(ReviewQuantity.LATENT_HEAT));
         assertTrue(ReviewTable.lines(after).stream().anyMatch(x -> x.quantity() == ReviewQuantity.LATENT_HEAT
                 && x.toleranceChanged()));
-        // back to the defaults: disagrees again
+        // back to the defaults: disagrees again, at once
         vm.resetTolerances();
-        fire();
+        assertEquals(ReviewViewModel.State.CURRENT, vm.state().get());
         assertEquals(Verdict.DISAGREES, result(vm).row(ReviewQuantity.LATENT_HEAT).orElseThrow().verdict());
         assertEquals("5", vm.tolerance(ReviewQuantity.LATENT_HEAT).text().get());
     }
@@ -215,10 +217,13 @@ class ReviewViewModelTest {
         try (Stream<Path> s = Files.list(json.getParent())) {
             assertEquals(2, s.count());
         }
-        // while a re-run is pending, nothing is written
+        // a tolerance edit re-judges at once, so the export is of the new tolerances
         vm.tolerance(ReviewQuantity.Z).text().set("4");
+        vm.writeJson(tmp.resolve("out/rejudged.json"));
+        assertTrue(Files.exists(tmp.resolve("out/rejudged.json")), vm.exportMessage().get());
+        // while a run is pending (the file opened again), nothing is written
+        vm.rerun();
         vm.writeJson(tmp.resolve("out/stale.json"));
-        assertFalse(Files.exists(tmp.resolve("out/stale.json")));
         assertNotEquals("", vm.exportMessage().get());
     }
 

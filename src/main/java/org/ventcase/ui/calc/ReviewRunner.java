@@ -83,7 +83,14 @@ public final class ReviewRunner {
      * @param claimedName the claimed-value file's name
      */
     public record Outcome(ReviewResult result, ValidatedCase kase, String caseName, String caseOrigin,
-                          String claimedName) {
+                          String claimedName, Review.Prepared prepared) {
+        /**
+         * The same review judged with other tolerances: no case is computed again (fast enough
+         * for the application thread).
+         */
+        public Outcome withTolerances(Tolerances tolerances) {
+            return new Outcome(prepared.judge(tolerances), kase, caseName, caseOrigin, claimedName, prepared);
+        }
     }
 
     /**
@@ -117,11 +124,13 @@ public final class ReviewRunner {
         }
         check(cancelled);
         ClaimedValues values = claimed.values(kase.site().atmosphericPa());
-        progress.update(0.2, "computing the case, then again with PR78 and SRK on both density bases");
-        ReviewResult r = Review.run(CaseInputs.from(kase), values, tolerances);
+        progress.update(0.2, "computing the case, then again with PR78 and SRK on both density bases (once: a "
+                + "tolerance change only judges again)");
+        Review.Prepared prepared = Review.prepare(CaseInputs.from(kase), values);
         check(cancelled);
+        ReviewResult r = prepared.judge(tolerances);
         progress.update(1.0, "done");
-        return new Outcome(r, kase, caseName, origin, source.name());
+        return new Outcome(r, kase, caseName, origin, source.name(), prepared);
     }
 
     private static void check(BooleanSupplier cancelled) {
