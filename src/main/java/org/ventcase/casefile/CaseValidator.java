@@ -244,9 +244,9 @@ public final class CaseValidator {
         Optional<String> tag = text("$.identity.tag", id.tag(), true, "expected the equipment tag, e.g. V-2101");
         Optional<String> rev = text("$.identity.revision", id.revision(), true, "expected a revision mark, e.g. A");
         Optional<String> prep = text("$.identity.preparer", id.preparer(), true, "expected who prepared the case");
-        if (id.checker() == null) {
-            missing("$.identity.checker", "expected who checked the case, or \"\" while unchecked");
-        }
+        // An unchecked case is the normal state of a first-pass basis: a missing or empty checker
+        // means unchecked, and the sheet's sign-off block shows it so.
+        String checker = id.checker() == null ? "" : id.checker().strip();
         Optional<LocalDate> date = Optional.empty();
         if (id.date() == null) {
             missing("$.identity.date", "expected an ISO date yyyy-mm-dd");
@@ -260,11 +260,10 @@ public final class CaseValidator {
                 problem("$.identity.date", id.date(), "expected an ISO date yyyy-mm-dd, e.g. 2026-03-14");
             }
         }
-        if (title.isEmpty() || tag.isEmpty() || rev.isEmpty() || prep.isEmpty() || date.isEmpty()
-                || id.checker() == null) {
+        if (title.isEmpty() || tag.isEmpty() || rev.isEmpty() || prep.isEmpty() || date.isEmpty()) {
             return Optional.empty();
         }
-        return Optional.of(new ValidatedCase.Identity(title.get(), tag.get(), rev.get(), prep.get(), id.checker(),
+        return Optional.of(new ValidatedCase.Identity(title.get(), tag.get(), rev.get(), prep.get(), checker,
                 date.get(), Optional.ofNullable(id.notes()).filter(n -> !n.isBlank())));
     }
 

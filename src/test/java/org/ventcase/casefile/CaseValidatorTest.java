@@ -247,4 +247,15 @@ class CaseValidatorTest {
         assertTrue(r.validated().isEmpty());
         assertEquals("$.fluid.eos", only(r).path());
     }
+
+    @Test
+    void aMissingOrEmptyCheckerMeansUnchecked() {
+        // an unchecked case is the normal state of a first-pass basis (common practice, no source)
+        for (String checker : new String[] {"\"checker\": \"\",", ""}) {
+            String json = Fixtures.bulletWith("\"checker\": \"\",", checker);
+            ValidationReport r = check(json);
+            assertTrue(r.problems().stream().noneMatch(p -> p.path().startsWith("$.identity")), r.problems().toString());
+            assertEquals("", r.validated().orElseThrow().identity().checker());
+        }
+    }
 }
