@@ -83,21 +83,49 @@ public final class PureSaturation {
                             + "pressure liquid and vapour are not distinct enough to compute; treat the fluid as near-critical",
                     p, MAX_TR, top.p, 100 * (pc - p) / pc));
         }
-        Psat bottom = solvePressure(MIN_TR * tc);
-        if (p < bottom.p) {
-            throw new NoSolutionException("pressure", String.format(Locale.US,
-                    "%.6g Pa is below the saturation pressure at Tr = %.2f (%.6g Pa), the lowest temperature "
-                            + "the equation of state is used for", p, MIN_TR, bottom.p));
-        }
         double lnP = Math.log(p);
         // Initial estimate from the acentric-factor definition: log10 Pr = 7/3 (1 + omega)(1 - 1/Tr).
         double x = (1.0 - Math.log10(p / pc) / (7.0 / 3.0 * (1.0 + component.omega()))) / tc;
         if (!(x > xLo && x < xHi)) {
             x = 0.5 * (xLo + xHi);
         }
-        int total = top.iterations + bottom.iterations;
+        // The cold end of the bracket: step down from the estimate until Psat < p. Starting at
+        // Tr = 0.2 itself fails for fluids whose vapour pressure there is ~1e-11 Pa (methanol,
+        // ethanol, n-decane): the equal-fugacity solve cannot resolve such pressures, and no
+        // relief state needs them.
+        int total = top.iterations;
+        double tCold = Math.min(1.0 / x, MAX_TR * tc * 0.999);
+        double hi = Double.NaN;
+        for (int k = 0; k < 80; k++) {
+            Psat s;
+            try {
+                s = solvePressure(tCold);
+            } catch (ConvergenceException e) {
+                throw new NoSolutionException("pressure", String.format(Locale.US,
+                        "%.6g Pa is a vapour pressure too low to resolve for %s (the saturation at %.2f K, Tr = %.3f, "
+                                + "does not converge)", p, component.name(), tCold, tCold / tc));
+            }
+            total += s.iterations;
+            if (s.p < p) {
+                hi = 1.0 / tCold;
+                break;
+            }
+            if (tCold <= MIN_TR * tc * (1 + 1e-12)) {
+                throw new NoSolutionException("pressure", String.format(Locale.US,
+                        "%.6g Pa is below the saturation pressure at Tr = %.2f (%.6g Pa), the lowest temperature "
+                                + "the equation of state is used for", p, MIN_TR, s.p));
+            }
+            tCold = Math.max(MIN_TR * tc, 0.9 * tCold);
+        }
+        if (Double.isNaN(hi)) {
+            throw new NoSolutionException("pressure", String.format(Locale.US,
+                    "no saturation temperature found for %.6g Pa above Tr = %.2f", p, MIN_TR));
+        }
+        if (!(x > xLo && x <= hi)) {
+            x = 0.5 * (xLo + hi);
+        }
         double lo = xLo; // f(lo) > 0: Psat above p
-        double hi = xHi; // f(hi) < 0
+        // hi: f(hi) < 0
         for (int it = 0; it < MAX_ITER; it++) {
             double t = 1.0 / x;
             Psat s = solvePressure(t);
