@@ -63,8 +63,9 @@ final class Text {
         tx.row("Constants used", String.format(java.util.Locale.ROOT,
                 "Tc %.2f K, Pc %.4g kPa, omega %.4f, M %.3f kg/kmol", d.constants().tcK(), d.constants().pcPa() / 1e3,
                 d.constants().omega(), c.molarMass()));
+        boolean own = d.constants().source().equals(org.ventcase.thermo.Citations.constants(c));
         tx.row("Source of constants", d.constants().source()
-                + (d.constants().source().equals(c.criticalSource()) ? "" : "; molar mass " + c.criticalSource()));
+                + (own ? "" : "; molar mass " + org.ventcase.thermo.Citations.constants(c)));
         tx.row("Alpha function", d.alpha());
         tx.row("Volume translation", d.translation());
     }

@@ -58,8 +58,10 @@ public final class GasSizing {
     /** Critical ratio at k = 5/3, used as the critical-flow limit when k is unknown (program's rule). */
     public static final double UNKNOWN_K_CRITICAL_RATIO = Math.pow(0.75, 2.5);
 
-    static final String SOURCE = "API Std 520 Part I 9th ed. 2014 / 10th ed. 2020, 5.6.3 (critical) and 5.6.4 "
-            + "(subcritical) gas/vapour sizing (clause numbers from memory); REFERENCES.md section 3 [S]";
+    // Clauses 5.6.3 (critical) and 5.6.4 (subcritical), 9th ed. 2014 / 10th ed. 2020, from memory,
+    // not verified; REFERENCES.md section 3 [S].
+    static final String SOURCE = "API Std 520 Part I: sizing of pressure-relief valves for gas or vapour, critical "
+            + "and subcritical flow";
 
     /** Below this distance from 1, k is treated as 1 and the limit forms are used. */
     private static final double K_ONE = 1e-7;

@@ -50,8 +50,9 @@ public final class LiquidSizing {
     public static final double RE_SI_SSU = 85_220.0;
 
     private static final int MAX_ITERATIONS = 50;
-    static final String SOURCE = "API Std 520 Part I 9th ed. 2014 / 10th ed. 2020, 5.8 liquid sizing, certified "
-            + "valves (clause numbers from memory); REFERENCES.md section 4 [S]";
+    // Clause 5.8 (9th ed. 2014 / 10th ed. 2020) from memory, not verified; REFERENCES.md section 4 [S].
+    static final String SOURCE = "API Std 520 Part I: sizing of pressure-relief valves for liquid service "
+            + "(certified valves)";
 
     private LiquidSizing() {
     }

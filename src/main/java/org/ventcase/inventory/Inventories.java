@@ -146,7 +146,7 @@ public final class Inventories {
             double[][] k = fluid.kij().kij();
             String[][] src = fluid.kij().sources();
             for (int i = 0; i < cs.size(); i++) {
-                b.note(cs.get(i).name() + ": " + cs.get(i).criticalSource());
+                b.note(cs.get(i).name() + ": " + org.ventcase.thermo.Citations.constants(cs.get(i)));
                 for (int j = i + 1; j < cs.size(); j++) {
                     b.in("k_ij " + cs.get(i).name() + " / " + cs.get(j).name(),
                             String.format(Locale.US, "%.4f (%s)", k[i][j], src[i][j]));
@@ -211,7 +211,7 @@ public final class Inventories {
                 rackett = OptionalDouble.of(sr.rackettLiquidDensity());
                 st.equation("ln phi_L(T, Psat) = ln phi_V(T, Psat) (equal fugacity of the pure fluid)")
                         .source("Ventcase PureSaturation (Michelsen and Mollerup 2007, ch. 12); Rackett: Spencer and "
-                                + "Danner, J. Chem. Eng. Data 17 (1972) 236, Z_RA from " + c.rackettSource())
+                                + "Danner, J. Chem. Eng. Data 17 (1972) 236, Z_RA from " + org.ventcase.thermo.Citations.rackett(c))
                         .out("Saturation pressure", kpa(p))
                         .out("Liquid density", dens(rhoL, bL))
                         .out("Vapour density", dens(rhoV, bV))
@@ -536,7 +536,7 @@ public final class Inventories {
             if (Math.abs(dev) > PureSaturation.RACKETT_WARNING) {
                 warnings.add(String.format(Locale.US, "The %s liquid density (%.4g kg/m3) differs from the Rackett "
                         + "correlation (%.4g kg/m3, saturated liquid, Z_RA from %s) by %+.1f %%: the liquid inventory "
-                        + "on this basis may be %s.", used.label(), rho, r, c.rackettSource(), 100 * dev,
+                        + "on this basis may be %s.", used.label(), rho, r, org.ventcase.thermo.Citations.rackett(c), 100 * dev,
                         dev < 0 ? "understated" : "overstated"));
             }
         }

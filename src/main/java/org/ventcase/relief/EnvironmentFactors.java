@@ -38,8 +38,10 @@ public final class EnvironmentFactors {
     public static final double FIRE_TEMPERATURE_C = 904.0;
     /** SI denominator of the insulation formula, W/m2 [M]. */
     public static final double HEAT_FLUX_W_PER_M2 = 66_570.0;
-    static final String FORMULA_WARNING = "Insulation environment factor F = (k/t)(904 - Tf)/66,570 is from memory "
-            + "[M]; confirm against the standard. Insulation must resist fire-hose streams to take credit.";
+    // The formula is from memory [M] (REFERENCES.md section 1): the warning says it is unverified.
+    static final String FORMULA_WARNING = "The insulation environment factor F = (k/t)(904 - Tf)/66,570 has not been "
+            + "verified against the current edition of API Std 521: confirm it against the standard before relying on "
+            + "it. Insulation must resist fire-hose streams to take credit.";
 
     private static final String RESOURCE = "environment_factors.csv";
     private static final Map<String, EnvironmentFactor> TABLE = load();
@@ -82,7 +84,7 @@ public final class EnvironmentFactors {
         return new EnvironmentFactor("insulation_formula", String.format(Locale.US,
                 "Insulated; F = (k/t)(904 - Tf)/66,570 with k/t = %.4g W/(m2 K), Tf = %.4g C", conductance,
                 contentsTempC), OptionalDouble.of(conductance), f, "M",
-                "API Std 521 5th ed. 2007 / ISO 23251:2006 environment factor clause [M, from memory]",
+                "API Std 521 / ISO 23251: environment factor of an insulated vessel (formula not verified, see the warning)",
                 Optional.of(FORMULA_WARNING));
     }
 

@@ -36,10 +36,15 @@ public final class FireHeatInput {
     /** Exponent on the wetted area. */
     public static final double AREA_EXPONENT = 0.82;
 
-    static final String SOURCE_521 = "API Std 521 5th ed. 2007 / ISO 23251:2006, 5.15.2.2.1, Eq. (3)/(4) "
-            + "(clause numbers from memory); REFERENCES.md section 1";
+    // Printed on the sheet: the standard and the method, no clause number. The clause (5.15.2.2.1,
+    // Eq. (3)/(4) of the 5th ed. 2007 / ISO 23251:2006) is from memory and could not be verified
+    // against the current edition (API Std 521 7th ed. 2020); the constants are the project's
+    // REFERENCES.md section 1 [D]/[S].
+    static final String SOURCE_521 = "API Std 521 / ISO 23251: heat absorbed by a liquid-wetted vessel in an open pool "
+            + "fire, Q = C F A^0.82";
+    // REFERENCES.md section 8 [D, table reproduced].
     static final String SOURCE_2000 = "NFPA 30 / API Std 2000 heat input table for atmospheric and low-pressure "
-            + "storage; REFERENCES.md section 8 [D, table reproduced]";
+            + "storage";
 
     private FireHeatInput() {
     }

@@ -100,7 +100,7 @@ public final class GasFilledFire {
         trace.add(ScenarioSupport.sizingStep(gs));
         trace.add(TraceStep.of("Cross-check by the F' area form").equation("A = F' A' / sqrt(P1), "
                 + "F' = 0.2772 / (C Kd) (Tw - T1)^1.25 / T1^0.6506 (SI; ideal gas, critical flow)")
-                .source("API Std 521 / ISO 23251 unwetted-vessel area form (REFERENCES.md section 2)")
+                .source("API Std 521 / ISO 23251: gas-filled vessel in a pool fire, area form (F' factor)")
                 .out("F'", String.format(Locale.US, "%.5g", fPrime))
                 .out("A from F'", String.format(Locale.US, "%.1f mm2", aFPrimeMm2))
                 .out("Ratio to the EOS-based area", String.format(Locale.US, "%.4f", ratio))

@@ -110,7 +110,7 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
         for (int i = 0; i < x.length; i++) {
             if (x[i] > 0) {
                 sb.append(sb.length() == 0 ? "" : "; ").append(spec.components().get(i).name()).append(": ")
-                        .append(spec.components().get(i).cp().source());
+                        .append(org.ventcase.thermo.Citations.cp(spec.components().get(i)));
             }
         }
         return sb.toString();

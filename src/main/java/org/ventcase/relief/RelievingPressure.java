@@ -50,8 +50,9 @@ public final class RelievingPressure {
     /** Fire: fraction of MAWP. */
     public static final double FIRE_FRACTION = 0.21;
 
-    static final String SOURCE = "ASME BPVC Section VIII Division 1 (overpressure limits) and API Std 520 Part I "
-            + "(9th ed. 2014 / 10th ed. 2020), set pressure and accumulation; project REFERENCES.md section 6 [S]";
+    // REFERENCES.md section 6 [S].
+    static final String SOURCE = "ASME BPVC Section VIII Division 1 (overpressure limits) and API Std 520 Part I: "
+            + "set pressure and allowable accumulation";
 
     private RelievingPressure() {
     }

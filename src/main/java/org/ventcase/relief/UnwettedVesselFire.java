@@ -45,8 +45,10 @@ public final class UnwettedVesselFire {
             + "vessel (consider depressuring, water application or fire-resistant insulation). The method "
             + "assumes an ideal gas, air-like properties and no wall heat capacity.";
 
-    static final String SOURCE = "API Std 521 5th ed. 2007 / ISO 23251:2006, 5.15.2.2.3, gas-filled vessels "
-            + "(clause and equation numbers from memory); REFERENCES.md section 2";
+    // Clause 5.15.2.2.3 of the 5th ed. 2007 / ISO 23251:2006 from memory, not verified against the
+    // current edition; constants: REFERENCES.md section 2 [D]/[S].
+    static final String SOURCE = "API Std 521 / ISO 23251: relief of a gas-filled (unwetted) vessel exposed to an "
+            + "open pool fire";
 
     private UnwettedVesselFire() {
     }

@@ -160,7 +160,7 @@ public final class WettedFire {
                 in.densityBasis());
         trace.add(TraceStep.of("Relieved vapour at relieving conditions")
                 .equation("cubic EOS, vapour (largest) root at T1, P1; k = Cp_ig/Cv_ig per API 520")
-                .source(in.eos().displayName() + "; ideal-gas Cp: " + c.cp().source())
+                .source(in.eos().displayName() + "; ideal-gas Cp: " + org.ventcase.thermo.Citations.cp(c))
                 .in("T1", kelvinC(rel.temperatureK())).in("P1", kpa(p1) + " abs")
                 .out("Roots Z", joinRoots(vap.roots().physical()) + " (" + vap.roots().rootCase().words() + ")")
                 .out("Z (vapour root)", String.format(Locale.US, "%.4f", vap.z()))

@@ -159,8 +159,9 @@ final class CaseSheet {
                     f("%.4f", k.omega()), f("%.3f kg/kmol", c.molarMass())));
             rows.add(new Row(cells, false));
             sources.append(sources.length() == 0 ? "" : " ").append(c.name()).append(": Tc, Pc, omega ")
-                    .append(k.source()).append("; molar mass ").append(c.criticalSource()).append("; ideal-gas Cp ")
-                    .append(c.cp().source()).append('.');
+                    .append(k.source())
+                    .append("; molar mass ").append(org.ventcase.thermo.Citations.constants(c)).append("; ideal-gas Cp ")
+                    .append(org.ventcase.thermo.Citations.cp(c)).append('.');
         }
         t.add(new Table("Fluid and composition", cols, w, rows, "Sources. " + sources));
         List<Row> eos = new ArrayList<>();

@@ -111,7 +111,7 @@ public final class SheetModels {
                         u.plain(Kind.TEMPERATURE, c.tcK()), u.plain(Kind.PRESSURE_ABS, c.pcPa()),
                         String.format(Locale.ROOT, "%.4f", c.omega()),
                         String.format(Locale.ROOT, "%.3f kg/kmol", c.molarMass()))),
-                "Constants: " + c.criticalSource() + ". Ideal-gas Cp: " + c.cp().source() + "."));
+                "Constants: " + org.ventcase.thermo.Citations.constants(c) + ". Ideal-gas Cp: " + org.ventcase.thermo.Citations.cp(c) + "."));
         t.add(Table.keyValue("Equation of state and density basis", List.of(
                 Row.of("Equation of state", in.eos().displayName()),
                 Row.of("Reference", in.eos().citation()),

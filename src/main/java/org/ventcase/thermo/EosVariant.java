@@ -174,7 +174,7 @@ public enum EosVariant {
     /** The constants of one component under this variant (see {@link Constants}). */
     public Constants constants(Component c) {
         if (this != PRTWU) {
-            return new Constants(c.tcK(), c.pcPa(), c.omega(), alphaFactory.apply(c), c.criticalSource(), "");
+            return new Constants(c.tcK(), c.pcPa(), c.omega(), alphaFactory.apply(c), Citations.constants(c), "");
         }
         java.util.Optional<TwuParameters.Set> set = TwuParameters.find(c);
         if (set.isPresent()) {
@@ -183,7 +183,7 @@ public enum EosVariant {
         }
         return new Constants(c.tcK(), c.pcPa(), c.omega(),
                 new AlphaFunction.Soave(MCorrelation.PENG_ROBINSON_1978.m(c.omega()), MCorrelation.PENG_ROBINSON_1978),
-                c.criticalSource(), c.name() + ": no published Twu parameters; the " + displayName
+                Citations.constants(c), c.name() + ": no published Twu parameters; the " + displayName
                         + " model uses its own Tc, Pc and the Soave alpha of PR78 (vapour pressure and density less accurate)");
     }
 
@@ -369,7 +369,7 @@ public enum EosVariant {
          * liquid densities of light hydrocarbons 2-4 % low at Tr 0.6-0.85 (see the saturation
          * data test), against 5-10 % high for the untranslated PR.
          */
-        PENELOUX_TYPE_PR(0.50033, 0.25969, "Peneloux-type shift for PR as given by Pedersen & Christensen, Phase Behavior of Petroleum Reservoir Fluids (2007), from memory");
+        PENELOUX_TYPE_PR(0.50033, 0.25969, "Peneloux-type shift for PR (K.S. Pedersen, P.L. Christensen, Phase Behavior of Petroleum Reservoir Fluids, 2007)");
 
         private final double k1;
         private final double k2;

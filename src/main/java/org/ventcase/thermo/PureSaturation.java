@@ -338,7 +338,7 @@ public final class PureSaturation {
             warnings.add(String.format(Locale.US,
                     "The %s liquid density (%.4g kg/m3) differs from the Rackett correlation (%.4g kg/m3, Z_RA from "
                             + "%s) by %+.1f %%: a liquid inventory on this basis may be %s; compare the bases before "
-                            + "relying on it.", used.label(), liq.density(), rackett, component.rackettSource(), 100 * dev,
+                            + "relying on it.", used.label(), liq.density(), rackett, Citations.rackett(component), 100 * dev,
                     dev < 0 ? "understated" : "overstated"));
         }
         double dh = s.hV - s.hL;

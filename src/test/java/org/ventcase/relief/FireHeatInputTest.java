@@ -67,7 +67,7 @@ class FireHeatInputTest {
         EnvironmentFactor f = EnvironmentFactors.insulation(22.71 * 0.05, 0.05, 33);
         assertEquals(0.30, f.f(), 0.004);
         assertEquals("M", f.status());
-        assertTrue(f.warning().orElseThrow().contains("from memory"));
+        assertTrue(f.warning().orElseThrow().contains("not been verified"));
     }
 
     @Test

@@ -59,6 +59,14 @@ class CaseSheetTest {
     private static final Pattern NUMBER = Pattern.compile("(?<![\\w.])(-?\\d+(?:\\.\\d+)?)");
     private static final Pattern FORBIDDEN = Pattern.compile("\\b(NaN|null|Infinity)\\b");
 
+    /**
+     * What a sheet a reviewer signs must not print: a source recalled rather than read, the project's
+     * working notes, their status tags, or the component table's internal source keys (the verified
+     * citation is printed instead, thermo.Citations).
+     */
+    private static final Pattern UNVERIFIED = Pattern.compile(
+            "(?i)from memory|REFERENCES\\.md|\\[[SMD](, [^\\]]*)?\\]|Poling2001-|Perry8-T2|RPP1987-|YamadaGunn1973|SpencerDanner1972");
+
     static Stream<Path> demoCases() throws IOException {
         try (Stream<Path> s = Files.list(Path.of("demo-cases"))) {
             return s.filter(p -> p.toString().endsWith(".json")).sorted().toList().stream();
@@ -96,6 +104,9 @@ class CaseSheetTest {
                 checkValues(json, text, new DisplayUnits(system), where);
                 checkText(text, vc, where);
                 checkPages(doc, size, where);
+                java.util.regex.Matcher um = UNVERIFIED.matcher(text);
+                assertFalse(um.find(), where + ": prints an unverified source marker: ..."
+                        + (um.hitEnd() ? "" : text.substring(Math.max(0, um.start() - 80), Math.min(text.length(), um.end() + 40))));
             }
         }
     }
