@@ -218,7 +218,16 @@ public final class PTFlash {
                 beta = finishBySubstitution(at, p, z, lnK, x, y, s);
             } else {
                 compositions(z, k, beta, x, y);
-                beta = newton(at, p, z, beta, x, y, s);
+                double[] lnKBeforeNewton = lnK.clone();
+                try {
+                    beta = newton(at, p, z, beta, x, y, s);
+                } catch (ConvergenceException e) {
+                    // Newton on vapour moles can stall near its solution when G is flat to round-off
+                    // (seen: a trace of ethylbenzene in nitrogen with isobutylene, |g| stuck near 1e-6).
+                    // Substitution from the K-values before Newton converges there, linearly but surely.
+                    System.arraycopy(lnKBeforeNewton, 0, lnK, 0, n);
+                    beta = finishBySubstitution(at, p, z, lnK, x, y, s);
+                }
             }
             if (Double.isNaN(beta)) {
                 return null;
