@@ -29,20 +29,41 @@ import org.ventcase.report.UnitSystem;
  */
 public final class PipelineCaseRunner implements CaseRunner {
 
+    /** The last result computed, with the input hash of its case (the export reuses it). */
+    private record Last(String inputHash, CaseResult result) {
+    }
+
+    private volatile Last last;
+
     @Override
     public CaseSummary run(ValidatedCase kase, Progress progress, BooleanSupplier cancelled) {
         if (cancelled.getAsBoolean()) {
             throw new Cancelled();
         }
         CaseResult r = calculate(kase, progress, cancelled);
+        last = new Last(kase.inputHash(), r);
         return summary(r);
+    }
+
+    /**
+     * The result of this case: the one the live calculation made for the same inputs (same input
+     * hash: the normalised case), else computed now.
+     */
+    CaseResult resultOf(ValidatedCase kase, CaseInput in) {
+        Last l = last;
+        if (l != null && l.inputHash().equals(kase.inputHash())) {
+            return l.result();
+        }
+        CaseResult r = CaseCalculation.run(in);
+        last = new Last(kase.inputHash(), r);
+        return r;
     }
 
     @Override
     public SheetOutcome sheet(ValidatedCase kase, UnitSystem units, String toolVersion) {
         try {
             CaseInput in = CaseInputs.from(kase);
-            CaseResult r = CaseCalculation.run(in);
+            CaseResult r = resultOf(kase, in);
             ValidatedCase.Identity id = kase.identity();
             SheetIdentity sid = new SheetIdentity(id.title(), id.tag(), id.revision(), id.date(), id.preparer(),
                     id.checker(), "Ventcase", toolVersion, kase.inputHash());

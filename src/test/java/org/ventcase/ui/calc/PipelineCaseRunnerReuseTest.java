@@ -1,0 +1,26 @@
+package org.ventcase.ui.calc;
+
+import static org.junit.jupiter.api.Assertions.assertNotSame;
+import static org.junit.jupiter.api.Assertions.assertSame;
+
+import java.nio.file.Path;
+
+import org.junit.jupiter.api.Test;
+import org.ventcase.casefile.CaseFiles;
+import org.ventcase.casefile.CaseInputs;
+import org.ventcase.casefile.ValidatedCase;
+
+/** The wizard's PDF export uses the live result of the same inputs instead of computing the case again. */
+class PipelineCaseRunnerReuseTest {
+
+    @Test
+    void exportReusesTheLiveResultOfTheSameInputs() {
+        PipelineCaseRunner runner = new PipelineCaseRunner();
+        ValidatedCase kase = CaseFiles.load(Path.of("demo-cases/propane-bullet-fire.json"));
+        runner.run(kase, (f, m) -> { }, () -> false);
+        var first = runner.resultOf(kase, CaseInputs.from(kase));
+        assertSame(first, runner.resultOf(kase, CaseInputs.from(kase)), "same inputs: the same result");
+        ValidatedCase other = CaseFiles.load(Path.of("demo-cases/hexane-drum.json"));
+        assertNotSame(first, runner.resultOf(other, CaseInputs.from(other)), "other inputs: computed anew");
+    }
+}
