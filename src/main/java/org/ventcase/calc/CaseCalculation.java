@@ -452,11 +452,11 @@ public final class CaseCalculation {
         o.warnings.addAll(h.warnings());
         env.warning().ifPresent(o.warnings::add);
         o.trace.add(TraceStep.of("Fire heat input").equation(h.equation()).source(h.source())
-                .in("Fire-exposed wetted area A", String.format(Locale.US, "%.3f m2 at the storage level",
-                        c.level().fire().area()))
-                .in("Environment factor F", String.format(Locale.US, "%.4g (%s)", env.f(), env.description()))
+                .in("Fire-exposed wetted area A", "%.3f m2 at the storage level",
+                        c.level().fire().area())
+                .in("Environment factor F", "%.4g (%s)", env.f(), env.description())
                 .in("Drainage and fire-fighting", ff == FireFighting.INADEQUATE ? "inadequate" : "adequate")
-                .out("Q", String.format(Locale.US, "%.1f kW", h.heatW() / 1e3))
+                .out("Q", "%.1f kW", h.heatW() / 1e3)
                 .note(c.level().fire().ruleApplied()).build());
         o.q = OptionalDouble.of(h.heatW());
         return h;
@@ -585,14 +585,14 @@ public final class CaseCalculation {
         TraceStep.Builder b = TraceStep.of("Required effective area (liquid)")
                 .equation("A = 11.78 Q / (Kd Kw Kc Kv) sqrt(G / (P1 - P2)); A mm2, Q L/min, P kPa")
                 .source(ls.source())
-                .in("Q", String.format(Locale.US, "%.4g m3/h", r.volumetricRateM3PerS() * 3600))
-                .in("G = rho / 999.0 kg/m3", String.format(Locale.US, "%.4f", g))
-                .in("Blocked-in volume", String.format(Locale.US, "%.3f m3 (does not enter q, which depends on "
-                        + "the heat input only)", f.blockedInVolumeM3()));
+                .in("Q", "%.4g m3/h", r.volumetricRateM3PerS() * 3600)
+                .in("G = rho / 999.0 kg/m3", "%.4f", g)
+                .in("Blocked-in volume", "%.3f m3 (does not enter q, which depends on "
+                        + "the heat input only)", f.blockedInVolumeM3());
         for (String line : ls.trace()) {
             b.note(line);
         }
-        o.trace.add(b.out("Required area", String.format(Locale.US, "%.2f mm2", ls.areaMm2())).build());
+        o.trace.add(b.out("Required area", "%.2f mm2", ls.areaMm2()).build());
         o.area = OptionalDouble.of(ls.areaM2());
         o.sizing = "API 520 Part I liquid equation";
         o.orifice = Optional.of(ls.selection());
@@ -608,22 +608,22 @@ public final class CaseCalculation {
     private static TraceStep orificeStep(OrificeSelection os) {
         return TraceStep.of("Standard orifice").equation("smallest API 526 effective area >= required area")
                 .source("API Std 526 effective orifice areas (used with the API 520 Part I equations)")
-                .in("Required area", String.format(Locale.US, "%.1f mm2", os.requiredAreaM2() * 1e6))
+                .in("Required area", "%.1f mm2", os.requiredAreaM2() * 1e6)
                 .out("Orifice", os.designation())
-                .out("Selected effective area", String.format(Locale.US, "%.1f mm2", os.selectedAreaMm2()))
-                .out("Margin", String.format(Locale.US, "%.1f %%", os.marginPercent()))
+                .out("Selected effective area", "%.1f mm2", os.selectedAreaMm2())
+                .out("Margin", "%.1f %%", os.marginPercent())
                 .note(os.ruleApplied()).build();
     }
 
     private static TraceStep relievingStep(org.ventcase.relief.RelievingPressureInput in, RelievingPressureResult rp) {
         return TraceStep.of("Relieving pressure").equation("P1 = set pressure + allowable overpressure + P_atm")
                 .source(rp.source())
-                .in("Set pressure", String.format(Locale.US, "%.1f kPa gauge", in.setPressureGaugePa() / 1e3))
-                .in("MAWP", String.format(Locale.US, "%.1f kPa gauge", in.mawpGaugePa() / 1e3))
-                .in("Atmospheric pressure", String.format(Locale.US, "%.3f kPa abs", in.atmosphericPa() / 1e3))
-                .out("Overpressure above set", String.format(Locale.US, "%.1f kPa (%.1f %% of set)",
-                        rp.overpressurePa() / 1e3, rp.overpressurePercentOfSet()))
-                .out("P1", String.format(Locale.US, "%.1f kPa abs", rp.relievingPressurePa() / 1e3))
+                .in("Set pressure", "%.1f kPa gauge", in.setPressureGaugePa() / 1e3)
+                .in("MAWP", "%.1f kPa gauge", in.mawpGaugePa() / 1e3)
+                .in("Atmospheric pressure", "%.3f kPa abs", in.atmosphericPa() / 1e3)
+                .out("Overpressure above set", "%.1f kPa (%.1f %% of set)",
+                        rp.overpressurePa() / 1e3, rp.overpressurePercentOfSet())
+                .out("P1", "%.1f kPa abs", rp.relievingPressurePa() / 1e3)
                 .note(rp.ruleApplied()).build();
     }
 
@@ -632,7 +632,7 @@ public final class CaseCalculation {
                 .equation("F = (k/t)(904 - T)/66,570 (SI; k W/(m K), t m, T C)")
                 .source(env.source())
                 .in("Temperature used", at)
-                .out("F", String.format(Locale.US, "%.4g", env.f()))
+                .out("F", "%.4g", env.f())
                 .note(env.description()).build();
     }
 }

@@ -159,13 +159,13 @@ public final class Inventories {
         void vesselStep() {
             trace.add(TraceStep.of("Vessel at level").equation("V_L = V(h), V_V = V_total - V_L (exact head and shell "
                     + "geometry)").source("vessel geometry (see the vessel command)")
-                    .in("Vessel", vs.vessel().describe())
-                    .in("Liquid level", String.format(Locale.US, "%.4f m (%.2f %% of height, %.2f %% of volume)",
-                            vs.levelM(), vs.levelPercentHeight(), vs.levelPercentVolume()))
+                    .in("Vessel", vs.vessel()::describe)
+                    .in("Liquid level", "%.4f m (%.2f %% of height, %.2f %% of volume)",
+                            vs.levelM(), vs.levelPercentHeight(), vs.levelPercentVolume())
                     .out("Total volume", m3(vs.totalVolume()))
                     .out("Liquid volume", m3(vs.liquidVolume()))
                     .out("Vapour volume", m3(vs.vapourVolume()))
-                    .out("Fire-exposed wetted area", String.format(Locale.US, "%.4f m2", vs.fire().area()))
+                    .out("Fire-exposed wetted area", "%.4f m2", vs.fire().area())
                     .note(vs.fire().ruleApplied()).build());
         }
 
@@ -215,8 +215,8 @@ public final class Inventories {
                         .out("Saturation pressure", kpa(p))
                         .out("Liquid density", dens(rhoL, bL))
                         .out("Vapour density", dens(rhoV, bV))
-                        .out("Rackett liquid density (cross-check)", String.format(Locale.US, "%.2f kg/m3 (%+.1f %%)",
-                                sr.rackettLiquidDensity(), 100 * (rhoL / sr.rackettLiquidDensity() - 1)));
+                        .out("Rackett liquid density (cross-check)", "%.2f kg/m3 (%+.1f %%)",
+                                sr.rackettLiquidDensity(), 100 * (rhoL / sr.rackettLiquidDensity() - 1));
             } else {
                 double tpc = x.pseudoCriticalTemperatureK();
                 double[] xa = x.fractions();
@@ -259,7 +259,7 @@ public final class Inventories {
                         .out("Liquid density", dens(rhoL, bL) + String.format(Locale.US, ", Z = %.5f", zL))
                         .out("Vapour density", dens(rhoV, bV) + String.format(Locale.US, ", Z = %.5f", zV))
                         .note("Rackett cross-check not made: the liquid is a mixture.")
-                        .note(String.format(Locale.US, "%d bubble-point iterations", bp.iterations()));
+                        .note("%d bubble-point iterations", bp.iterations());
             }
             trace.add(st.build());
             PhaseInventory liq = PhaseInventory.of("liquid", vs.liquidVolume(), rhoL, bL, zL, x);
@@ -312,11 +312,11 @@ public final class Inventories {
                                 + "density from " + fluid.variant().displayName() + " on the " + used.label()
                                 + " basis")
                         .in("Relieving pressure P1", kpa(p1))
-                        .in("Liquid mass m_L", String.format(Locale.US, "%.2f kg", m))
+                        .in("Liquid mass m_L", "%.2f kg", m)
                         .in("Vessel volume V", m3(v))
                         .out("Bubble temperature at P1, T1", kelvinC(t1))
                         .out("rho_L,sat(T1)", dens(rho1, used))
-                        .out("V_L(T1)", String.format(Locale.US, "%.4f m3 (%.2f %% of V)", vol1, 100 * vol1 / v))
+                        .out("V_L(T1)", "%.4f m3 (%.2f %% of V)", vol1, 100 * vol1 / v)
                         .note("Method: " + CHECK_METHOD + ".");
                 if (fills) {
                     double lo = t;
@@ -472,8 +472,8 @@ public final class Inventories {
             if (present.length == 1) {
                 Component c = y.components().get(present[0]);
                 if (t >= c.tcK()) {
-                    st.note(String.format(Locale.US, "The %s (%s) is above its critical temperature: it cannot "
-                            + "condense.", what, c.name()));
+                    st.note("The %s (%s) is above its critical temperature: it cannot "
+                            + "condense.", what, c.name());
                     return;
                 }
                 try {
@@ -531,8 +531,7 @@ public final class Inventories {
             double r = PureSaturation.rackettDensity(c, t);
             rackett = OptionalDouble.of(r);
             double dev = rho / r - 1;
-            st.out("Rackett saturated-liquid density at T (cross-check)",
-                    String.format(Locale.US, "%.2f kg/m3 (%+.1f %%)", r, 100 * dev));
+            st.out("Rackett saturated-liquid density at T (cross-check)", "%.2f kg/m3 (%+.1f %%)", r, 100 * dev);
             if (Math.abs(dev) > PureSaturation.RACKETT_WARNING) {
                 warnings.add(String.format(Locale.US, "The %s liquid density (%.4g kg/m3) differs from the Rackett "
                         + "correlation (%.4g kg/m3, saturated liquid, Z_RA from %s) by %+.1f %%: the liquid inventory "
@@ -554,8 +553,8 @@ public final class Inventories {
             trace.add(phaseStep(vap));
             TraceStep.Builder tot = TraceStep.of("Total inventory").equation("m = m_L + m_V; m_i = m_L,i + m_V,i")
                     .source(MASS_SOURCE)
-                    .out("Total mass", String.format(Locale.US, "%.3f kg", mass))
-                    .out("Total amount", String.format(Locale.US, "%.4g mol", moles));
+                    .out("Total mass", "%.3f kg", mass)
+                    .out("Total amount", "%.4g mol", moles);
             per.forEach((k, v) -> tot.out("Mass of " + k, String.format(Locale.US, "%.3f kg", v)));
             trace.add(tot.build());
             return new Inventory(storage.mode(), fluid, vs, exposure, t, p, liq, vap, mass, moles, per, rackett, full,
@@ -568,9 +567,9 @@ public final class Inventories {
                     .source(MASS_SOURCE)
                     .in("Volume V", m3(ph.volumeM3()))
                     .in("Density rho", dens(ph.densityKgM3(), ph.densityBasis()))
-                    .out("Mass m", String.format(Locale.US, "%.3f kg", ph.massKg()))
-                    .out("Molar mass M", String.format(Locale.US, "%.4f kg/kmol", ph.molarMassKgKmol()))
-                    .out("Amount n", String.format(Locale.US, "%.4g mol", ph.moles()));
+                    .out("Mass m", "%.3f kg", ph.massKg())
+                    .out("Molar mass M", "%.4f kg/kmol", ph.molarMassKgKmol())
+                    .out("Amount n", "%.4g mol", ph.moles());
             ph.massPerComponentKg().forEach((k, v) -> b.out("Mass of " + k, String.format(Locale.US, "%.3f kg", v)));
             return b.build();
         }

@@ -100,14 +100,14 @@ public final class BlockedOutlet {
             TraceStep.Builder lsz = TraceStep.of("Required effective area (liquid)")
                     .equation("A = 11.78 Q / (Kd Kw Kc Kv) sqrt(G / (P1 - P2)); A mm2, Q L/min, P kPa")
                     .source(ls.source())
-                    .in("Q at relieving conditions", String.format(Locale.US, "%.4g m3/h", q * 3600))
-                    .in("G = rho / 999.0 kg/m3", String.format(Locale.US, "%.4f", g));
+                    .in("Q at relieving conditions", "%.4g m3/h", q * 3600)
+                    .in("G = rho / 999.0 kg/m3", "%.4f", g);
             for (String line : ls.trace()) {
                 lsz.note(line);
             }
-            trace.add(lsz.out("Kv", String.format(Locale.US, "%.4f", ls.kv()))
-                    .out("Required area", String.format(Locale.US, "%.1f mm2 (%.4f in2)", ls.areaMm2(),
-                            ls.areaMm2() / 645.16)).build());
+            trace.add(lsz.out("Kv", "%.4f", ls.kv())
+                    .out("Required area", "%.1f mm2 (%.4f in2)", ls.areaMm2(),
+                            ls.areaMm2() / 645.16).build());
             trace.add(ScenarioSupport.expansionStep(ex));
             return new BlockedOutletResult(in, w, basis, rf, Optional.empty(), Optional.of(ls), OptionalDouble.of(q),
                     OptionalDouble.of(g), ex, trace, new ArrayList<>(warnings));
@@ -154,7 +154,7 @@ public final class BlockedOutlet {
                         ? String.format(Locale.US, "%.1f kg/h", in.inflow().value() * 3600)
                         : String.format(Locale.US, "%.1f m3/h at reference conditions", in.inflow().value() * 3600))
                 .in("Relieved phase", in.phase().label())
-                .out("W", String.format(Locale.US, "%.1f kg/h", w * 3600)).note(basis).build();
+                .out("W", "%.1f kg/h", w * 3600).note(basis).build();
     }
 
     static double dewTemperature(CubicModel model, double p, double[] z) {

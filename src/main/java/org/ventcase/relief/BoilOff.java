@@ -300,12 +300,12 @@ public final class BoilOff {
                 .source(spec.eos().displayName() + " (" + spec.eos().citation() + "); " + b.method())
                 .in("P1", ScenarioSupport.kpa(in.relievingPressurePa()) + " abs")
                 .in("Liquid composition x", ScenarioSupport.fractions(b.liquid()))
-                .in("Liquid volume at opening", String.format(Locale.US, "%.3f m3 of %.3f m3", vl0, vTot))
+                .in("Liquid volume at opening", "%.3f m3 of %.3f m3", vl0, vTot)
                 .out("Bubble temperature", ScenarioSupport.kelvinC(b.temperatureK()))
                 .out("Incipient vapour y", ScenarioSupport.fractions(b.vapour()))
-                .out("Liquid moles", String.format(Locale.US, "%.1f kmol", nL0 / 1e3))
-                .out("Latent heat (EOS)", String.format(Locale.US, "%.2f kJ/kg", initial.latent().computedJPerKg() / 1e3))
-                .out("Opening load Q/L (1 - rho_V/rho_L)", String.format(Locale.US, "%.1f kg/h", initial.w() * 3600))
+                .out("Liquid moles", "%.1f kmol", nL0 / 1e3)
+                .out("Latent heat (EOS)", "%.2f kJ/kg", initial.latent().computedJPerKg() / 1e3)
+                .out("Opening load Q/L (1 - rho_V/rho_L)", "%.1f kg/h", initial.w() * 3600)
                 .build());
         BoilOffPoint last = curve.get(curve.size() - 1);
         trace.add(TraceStep.of("Boil-off at constant P1 in the fixed vessel volume")
@@ -313,7 +313,7 @@ public final class BoilOff {
                         + "moles, trapezoid-mean vented composition and enthalpy")
                 .source("open-system mass and energy balances (Smith, Van Ness, Abbott, 7th ed., 2005, section "
                         + "2.12); boil-off curves for wide-boiling mixtures: common practice")
-                .in("Heat input Q", String.format(Locale.US, "%.1f kW (constant)", in.heatW() / 1e3))
+                .in("Heat input Q", "%.1f kW (constant)", in.heatW() / 1e3)
                 .in("Steps", Integer.toString(in.steps()))
                 .in("Stop at liquid fraction", in.stopLiquidFraction() == 0
                         ? String.format(Locale.US, "exhausted (%.1f %% left)", 100 * EXHAUSTED_FRACTION)
@@ -324,18 +324,18 @@ public final class BoilOff {
                 .out("Run ended", reason.name().toLowerCase(Locale.ROOT).replace('_', ' ')
                         + String.format(Locale.US, " at %.0f s (%.2f h)", last.timeS(), last.timeS() / 3600))
                 .out("Liquid temperature at the end", ScenarioSupport.kelvinC(last.temperatureK()))
-                .out("Liquid left", String.format(Locale.US, "%.0f kg", last.liquidMassKg()))
-                .out("Vented mass", String.format(Locale.US, "%.0f kg", bal.ventedMassKg())).build());
+                .out("Liquid left", "%.0f kg", last.liquidMassKg())
+                .out("Vented mass", "%.0f kg", bal.ventedMassKg()).build());
         BoilOffPoint p = curve.get(peak);
         trace.add(TraceStep.of("Sizing point: largest required area on the load curve")
                 .equation("A(t) = API 520 gas area at W(t) and the vapour's T, Z, M, k at t; size for max A(t)")
                 .source("API Std 520 Part I gas sizing at each point; governing point by largest area")
-                .out("Opening: W, A", String.format(Locale.US, "%.1f kg/h, %.1f mm2", curve.get(0).massFlowKgPerS()
-                        * 3600, curve.get(0).requiredAreaM2() * 1e6))
-                .out("Peak: time", String.format(Locale.US, "%.0f s (point %d of %d)", p.timeS(), peak, curve.size() - 1))
+                .out("Opening: W, A", "%.1f kg/h, %.1f mm2", curve.get(0).massFlowKgPerS()
+                        * 3600, curve.get(0).requiredAreaM2() * 1e6)
+                .out("Peak: time", "%.0f s (point %d of %d)", p.timeS(), peak, curve.size() - 1)
                 .out("Peak: liquid temperature", ScenarioSupport.kelvinC(p.temperatureK()))
-                .out("Peak: W, A", String.format(Locale.US, "%.1f kg/h, %.1f mm2", p.massFlowKgPerS() * 3600,
-                        p.requiredAreaM2() * 1e6)).build());
+                .out("Peak: W, A", "%.1f kg/h, %.1f mm2", p.massFlowKgPerS() * 3600,
+                        p.requiredAreaM2() * 1e6).build());
         trace.add(TraceStep.of("Balances over the run")
                 .equation("mass: m_0 - m_end - m_vented = 0; energy: Q t - (U_end - U_0) - H_vented = 0")
                 .source("the simulated states (checked, not assumed)")

@@ -84,26 +84,26 @@ public final class GasFilledFire {
         List<TraceStep> trace = new ArrayList<>();
         trace.add(TraceStep.of("Exposed surface A'").equation("A' = inside surface exposed to the fire")
                 .source("API Std 521 / ISO 23251 unwetted-vessel method; which surface: stated here")
-                .in("Vessel", v.describe())
-                .in("Bottom elevation, fire height", String.format(Locale.US, "%.2f m, %.2f m above grade",
-                        in.exposure().bottomElevation(), in.exposure().fireHeight()))
-                .out("A'", String.format(Locale.US, "%.3f m2", area)).note(rule).build());
+                .in("Vessel", v::describe)
+                .in("Bottom elevation, fire height", "%.2f m, %.2f m above grade",
+                        in.exposure().bottomElevation(), in.exposure().fireHeight())
+                .out("A'", "%.3f m2", area).note(rule).build());
         trace.add(TraceStep.of("Relief load of the gas-filled vessel").equation(load.equation()).source(load.source())
                 .in("P1", ScenarioSupport.kpa(in.relievingPressurePa()) + " abs")
                 .in("Normal operating Pn, Tn", ScenarioSupport.kpa(in.normalPressurePa()) + " abs, "
                         + ScenarioSupport.kelvinC(in.normalTemperatureK()))
                 .in("Wall temperature Tw", ScenarioSupport.kelvinC(in.wallTemperatureK()))
-                .in("M (EOS)", String.format(Locale.US, "%.3f kg/kmol", fp.molarMass()))
+                .in("M (EOS)", "%.3f kg/kmol", fp.molarMass())
                 .out("T1 = (P1/Pn) Tn", ScenarioSupport.kelvinC(t1))
-                .out("W", String.format(Locale.US, "%.1f kg/h", load.massFlowKgPerH())).build());
+                .out("W", "%.1f kg/h", load.massFlowKgPerH()).build());
         trace.add(ScenarioSupport.fluidStep("Relieved gas at relieving conditions", gas));
         trace.add(ScenarioSupport.sizingStep(gs));
         trace.add(TraceStep.of("Cross-check by the F' area form").equation("A = F' A' / sqrt(P1), "
                 + "F' = 0.2772 / (C Kd) (Tw - T1)^1.25 / T1^0.6506 (SI; ideal gas, critical flow)")
                 .source("API Std 521 / ISO 23251: gas-filled vessel in a pool fire, area form (F' factor)")
-                .out("F'", String.format(Locale.US, "%.5g", fPrime))
-                .out("A from F'", String.format(Locale.US, "%.1f mm2", aFPrimeMm2))
-                .out("Ratio to the EOS-based area", String.format(Locale.US, "%.4f", ratio))
+                .out("F'", "%.5g", fPrime)
+                .out("A from F'", "%.1f mm2", aFPrimeMm2)
+                .out("Ratio to the EOS-based area", "%.4f", ratio)
                 .note("in critical flow with Kb = Kc = 1 the ratio is 1/sqrt(Z): what the ideal-gas form leaves out")
                 .build());
         trace.add(ScenarioSupport.expansionStep(ex));

@@ -70,26 +70,26 @@ public final class MixtureFire {
         double p1 = rp.relievingPressurePa();
         trace.add(TraceStep.of("Relieving pressure").equation("P1 = MAWP + allowable accumulation + P_atm")
                 .source(rp.source())
-                .in("Set pressure", String.format(Locale.US, "%.1f kPa gauge", in.relieving().setPressureGaugePa() / 1e3))
-                .in("MAWP", String.format(Locale.US, "%.1f kPa gauge", in.relieving().mawpGaugePa() / 1e3))
-                .in("Atmospheric pressure", String.format(Locale.US, "%.3f kPa abs", in.relieving().atmosphericPa() / 1e3))
-                .out("Accumulation", String.format(Locale.US, "%.1f kPa", rp.accumulationPa() / 1e3))
+                .in("Set pressure", "%.1f kPa gauge", in.relieving().setPressureGaugePa() / 1e3)
+                .in("MAWP", "%.1f kPa gauge", in.relieving().mawpGaugePa() / 1e3)
+                .in("Atmospheric pressure", "%.3f kPa abs", in.relieving().atmosphericPa() / 1e3)
+                .out("Accumulation", "%.1f kPa", rp.accumulationPa() / 1e3)
                 .out("P1", ScenarioSupport.kpa(p1) + " abs").note(rp.ruleApplied()).build());
 
         LevelState vs = LevelState.of(in.vessel(), in.level(), in.exposure());
         trace.add(TraceStep.of("Vessel and fire-exposed wetted area")
                 .equation("A_wetted = wetted inside area below min(liquid level, fire height - elevation)")
                 .source("API Std 521 / ISO 23251: wetted surface within 7.6 m (25 ft) of the base of the fire")
-                .in("Vessel", in.vessel().describe())
-                .out("Liquid volume", String.format(Locale.US, "%.3f m3", vs.liquidVolume()))
-                .out("Fire-exposed wetted area", String.format(Locale.US, "%.3f m2", vs.fire().area()))
+                .in("Vessel", in.vessel()::describe)
+                .out("Liquid volume", "%.3f m3", vs.liquidVolume())
+                .out("Fire-exposed wetted area", "%.3f m2", vs.fire().area())
                 .note(vs.fire().ruleApplied()).build());
 
         HeatInputResult heat = FireHeatInput.wettedVessel(vs.fire().area(), in.environment().f(), in.fireFighting());
         warnings.addAll(heat.warnings());
         in.environment().warning().ifPresent(warnings::add);
         trace.add(TraceStep.of("Fire heat input").equation(heat.equation()).source(heat.source())
-                .out("Q", String.format(Locale.US, "%.1f kW", heat.heatW() / 1e3)).build());
+                .out("Q", "%.1f kW", heat.heatW() / 1e3).build());
 
         Load ld = load(model, spec, p1, heat.heatW(), in.subtractDisplacedVapour());
         BoilingState b = ld.state();
@@ -115,20 +115,20 @@ public final class MixtureFire {
                 .in("Liquid composition x", ScenarioSupport.fractions(x))
                 .out("Relieving temperature T1", ScenarioSupport.kelvinC(b.temperatureK()))
                 .out("Incipient vapour y", ScenarioSupport.fractions(b.vapour()))
-                .out("H_L, H_V", String.format(Locale.US, "%.1f, %.1f J/mol", b.hLiquidJmol(), b.hVapourJmol()))
-                .out("Liquid density", String.format(Locale.US, "%.2f kg/m3 (%s)", b.liquidProps().density(),
-                        b.liquidProps().densityBasis().label()))
-                .out("Vapour density", String.format(Locale.US, "%.3f kg/m3", b.vapourProps().density()))
-                .out("Latent heat (EOS)", String.format(Locale.US, "%.2f kJ/kg", ld.latent().computedJPerKg() / 1e3))
-                .out("Latent heat used", String.format(Locale.US, "%.2f kJ/kg", ld.latent().usedJPerKg() / 1e3))
-                .out("Liquid inventory at P1", String.format(Locale.US, "%.0f kg", liquidMass)).build());
+                .out("H_L, H_V", "%.1f, %.1f J/mol", b.hLiquidJmol(), b.hVapourJmol())
+                .out("Liquid density", "%.2f kg/m3 (%s)", b.liquidProps().density(),
+                        b.liquidProps().densityBasis().label())
+                .out("Vapour density", "%.3f kg/m3", b.vapourProps().density())
+                .out("Latent heat (EOS)", "%.2f kJ/kg", ld.latent().computedJPerKg() / 1e3)
+                .out("Latent heat used", "%.2f kJ/kg", ld.latent().usedJPerKg() / 1e3)
+                .out("Liquid inventory at P1", "%.0f kg", liquidMass).build());
         trace.add(TraceStep.of("Relief load")
                 .equation(in.subtractDisplacedVapour() ? "W = Q / L x (1 - rho_V / rho_L)" : "W = Q / L")
                 .source("API Std 521 / ISO 23251 relief rate from heat input"
                         + (in.subtractDisplacedVapour() ? ", with the vapour-displacement refinement" : ""))
-                .in("1 - rho_V/rho_L", String.format(Locale.US, "%.4f%s", ld.displacement(),
-                        in.subtractDisplacedVapour() ? "" : " (not applied)"))
-                .out("W", String.format(Locale.US, "%.1f kg/h", ld.w() * 3600)).build());
+                .in("1 - rho_V/rho_L", "%.4f%s", ld.displacement(),
+                        in.subtractDisplacedVapour() ? "" : " (not applied)")
+                .out("W", "%.1f kg/h", ld.w() * 3600).build());
 
         RelievedFluid vap = RelievedFluid.of(RelievedFluid.Phase.VAPOUR, spec, b.vapourProps(),
                 OptionalDouble.of(ld.latent().usedJPerKg()), LATENT_HEAT_DEFINITION, OptionalDouble.empty(), "");

@@ -174,10 +174,10 @@ public final class NearCriticalFire {
                 .in("Initial state T0, P0", ScenarioSupport.kelvinC(in.initialTemperatureK()) + ", "
                         + ScenarioSupport.kpa(in.initialPressurePa()) + " abs")
                 .in("Composition", ScenarioSupport.fractions(z))
-                .in("Vessel volume V", String.format(Locale.US, "%.3f m3", in.vesselVolumeM3()))
+                .in("Vessel volume V", "%.3f m3", in.vesselVolumeM3())
                 .in("P1", ScenarioSupport.kpa(p1) + " abs")
-                .out("Specific volume v0", String.format(Locale.US, "%.5g m3/kg", v0))
-                .out("Contents' mass", String.format(Locale.US, "%.0f kg", m0))
+                .out("Specific volume v0", "%.5g m3/kg", v0)
+                .out("Contents' mass", "%.0f kg", m0)
                 .out("Opening temperature", ScenarioSupport.kelvinC(tOpen)).build());
         NearCriticalFireResult.Point gp = curve.get(gov);
         NearCriticalFireResult.Point mp = curve.get(maxW);
@@ -186,15 +186,15 @@ public final class NearCriticalFire {
                         + "dt = V dh [v + (dv/dh)_P (h_out - h)] / (v^2 Q)")
                 .source("API Std 521 / ISO 23251: relief of supercritical fluids from the change of specific volume "
                         + "with heat input; balance derived in DEVELOPERS.md")
-                .in("Heat input Q", String.format(Locale.US, "%.1f kW (constant)", in.heatW() / 1e3))
+                .in("Heat input Q", "%.1f kW (constant)", in.heatW() / 1e3)
                 .in("Temperature range", ScenarioSupport.kelvinC(tOpen) + " to "
                         + ScenarioSupport.kelvinC(in.finalTemperatureK()))
                 .in("Steps", Integer.toString(in.steps()))
-                .out("Largest mass rate", String.format(Locale.US, "%.1f kg/h at %.2f K", mp.massFlowKgPerS() * 3600,
-                        mp.temperatureK()))
-                .out("Largest required area (sizing point)", String.format(Locale.US, "%.1f mm2 at %.2f K, "
+                .out("Largest mass rate", "%.1f kg/h at %.2f K", mp.massFlowKgPerS() * 3600,
+                        mp.temperatureK())
+                .out("Largest required area (sizing point)", "%.1f mm2 at %.2f K, "
                         + "%.1f kg/h, %.0f s after opening", gp.requiredAreaM2() * 1e6, gp.temperatureK(),
-                        gp.massFlowKgPerS() * 3600, gp.timeS()))
+                        gp.massFlowKgPerS() * 3600, gp.timeS())
                 .out("Two-phase steps", anyTwoPhase ? "yes (vapour taken to leave)" : "none").build());
         trace.add(ScenarioSupport.fluidStep("Relieved fluid at the sizing point", gf));
         trace.add(ScenarioSupport.sizingStep(gs));

@@ -26,8 +26,8 @@ final class ScenarioSupport {
             sz.note(line);
         }
         return sz.out("Flow regime", gs.regime().name().toLowerCase(Locale.ROOT))
-                .out("Required area", String.format(Locale.US, "%.1f mm2 (%.4f in2)", gs.areaMm2(),
-                        gs.areaMm2() / 645.16)).build();
+                .out("Required area", "%.1f mm2 (%.4f in2)", gs.areaMm2(),
+                        gs.areaMm2() / 645.16).build();
     }
 
     static TraceStep fluidStep(String title, RelievedFluid f) {
@@ -48,7 +48,7 @@ final class ScenarioSupport {
         return TraceStep.of("Temperature after expansion to the back pressure").equation(e.equation())
                 .source("first law, steady adiabatic flow without work: isenthalpic (common practice)")
                 .out("T2", kelvinC(e.downstreamTemperatureK()))
-                .out("Vapour fraction after expansion", String.format(Locale.US, "%.4f", e.vapourFraction()))
+                .out("Vapour fraction after expansion", "%.4f", e.vapourFraction())
                 .out("Minimum design metal temperature", e.minimumDesignMetalTemperatureK().isPresent()
                         ? kelvinC(e.minimumDesignMetalTemperatureK().getAsDouble()) : "not given (no check)")
                 .build();

@@ -85,15 +85,15 @@ public final class ThermalRelief {
                 .equation("alpha_v = (1/v)(dv/dT)_P with (dv/dT)_P = (mu_JT Cp + v_cubic)/T; c = Cp / M; liquid root")
                 .source(spec.eos().displayName() + " (" + spec.eos().citation() + ")")
                 .in("T", ScenarioSupport.kelvinC(t)).in("P1", ScenarioSupport.kpa(p) + " abs")
-                .out("alpha_v", String.format(Locale.US, "%.4g 1/K", alpha))
-                .out("c", String.format(Locale.US, "%.1f J/(kg K)", c))
-                .out("rho", String.format(Locale.US, "%.2f kg/m3 (%s)", rho, fp.densityBasis().label())).build());
+                .out("alpha_v", "%.4g 1/K", alpha)
+                .out("c", "%.1f J/(kg K)", c)
+                .out("rho", "%.2f kg/m3 (%s)", rho, fp.densityBasis().label()).build());
         trace.add(TraceStep.of("Thermal relief rate").equation("q = alpha_v phi / (rho c); W = rho q")
                 .source("API Std 521 / ISO 23251 hydraulic expansion, q = alpha_v phi / (1000 d c) with 1000 d = rho")
-                .in("Heat transfer rate phi", String.format(Locale.US, "%.2f kW", in.heatW() / 1e3))
-                .out("q", String.format(Locale.US, "%.4g m3/h", q * 3600))
-                .out("W", String.format(Locale.US, "%.2f kg/h", q * rho * 3600))
-                .out("Check by the standard's form", String.format(Locale.US, "%.4g m3/h", check * 3600)).build());
+                .in("Heat transfer rate phi", "%.2f kW", in.heatW() / 1e3)
+                .out("q", "%.4g m3/h", q * 3600)
+                .out("W", "%.2f kg/h", q * rho * 3600)
+                .out("Check by the standard's form", "%.4g m3/h", check * 3600).build());
         trace.add(TraceStep.of("Does the liquid stay liquid at P1?")
                 .equation("bubble (vapour) pressure at T compared with P1")
                 .source(spec.eos().displayName())

@@ -55,9 +55,9 @@ public final class WettedFire {
                 .in("Set pressure", kpag(in.relieving().setPressureGaugePa()))
                 .in("MAWP", kpag(in.relieving().mawpGaugePa()))
                 .in("Atmospheric pressure", kpa(in.relieving().atmosphericPa()) + " abs")
-                .out("Accumulation", String.format(Locale.US, "%.1f kPa", rp.accumulationPa() / 1e3))
-                .out("Overpressure above set", String.format(Locale.US, "%.1f kPa (%.1f %% of set)",
-                        rp.overpressurePa() / 1e3, rp.overpressurePercentOfSet()))
+                .out("Accumulation", "%.1f kPa", rp.accumulationPa() / 1e3)
+                .out("Overpressure above set", "%.1f kPa (%.1f %% of set)",
+                        rp.overpressurePa() / 1e3, rp.overpressurePercentOfSet())
                 .out("P1", kpa(p1) + " abs").note(rp.ruleApplied()).build());
 
         // 2. Vessel at level
@@ -65,15 +65,15 @@ public final class WettedFire {
         trace.add(TraceStep.of("Vessel and fire-exposed wetted area")
                 .equation("A_wetted = wetted inside area below min(liquid level, fire height - elevation)")
                 .source("API Std 521 / ISO 23251: wetted surface within 7.6 m (25 ft) of the base of the fire")
-                .in("Vessel", in.vessel().describe())
-                .in("Liquid level", String.format(Locale.US, "%.3f m (%.1f %% of height, %.1f %% of volume)",
-                        vs.levelM(), vs.levelPercentHeight(), vs.levelPercentVolume()))
-                .in("Bottom elevation above grade", String.format(Locale.US, "%.2f m", in.exposure().bottomElevation()))
-                .in("Fire height above grade", String.format(Locale.US, "%.2f m", in.exposure().fireHeight()))
-                .out("Total volume", String.format(Locale.US, "%.3f m3", vs.totalVolume()))
-                .out("Liquid volume", String.format(Locale.US, "%.3f m3", vs.liquidVolume()))
-                .out("Wetted area", String.format(Locale.US, "%.3f m2", vs.wettedArea()))
-                .out("Fire-exposed wetted area", String.format(Locale.US, "%.3f m2", vs.fire().area()))
+                .in("Vessel", in.vessel()::describe)
+                .in("Liquid level", "%.3f m (%.1f %% of height, %.1f %% of volume)",
+                        vs.levelM(), vs.levelPercentHeight(), vs.levelPercentVolume())
+                .in("Bottom elevation above grade", "%.2f m", in.exposure().bottomElevation())
+                .in("Fire height above grade", "%.2f m", in.exposure().fireHeight())
+                .out("Total volume", "%.3f m3", vs.totalVolume())
+                .out("Liquid volume", "%.3f m3", vs.liquidVolume())
+                .out("Wetted area", "%.3f m2", vs.wettedArea())
+                .out("Fire-exposed wetted area", "%.3f m2", vs.fire().area())
                 .note(vs.fire().ruleApplied()).build());
         if (vs.levelPercentVolume() > 95.0) {
             warnings.add(String.format(Locale.US, "The liquid fills %.1f %% of the vessel: less than the usual 5 %% "
@@ -85,11 +85,11 @@ public final class WettedFire {
         warnings.addAll(heat.warnings());
         in.environment().warning().ifPresent(warnings::add);
         trace.add(TraceStep.of("Fire heat input").equation(heat.equation()).source(heat.source())
-                .in("Fire-exposed wetted area A", String.format(Locale.US, "%.3f m2", vs.fire().area()))
-                .in("Environment factor F", String.format(Locale.US, "%.4g (%s)", in.environment().f(),
-                        in.environment().description()))
+                .in("Fire-exposed wetted area A", "%.3f m2", vs.fire().area())
+                .in("Environment factor F", "%.4g (%s)", in.environment().f(),
+                        in.environment().description())
                 .in("Drainage and fire-fighting", in.fireFighting() == FireFighting.INADEQUATE ? "inadequate" : "adequate")
-                .out("Q", String.format(Locale.US, "%.1f kW", heat.heatW() / 1e3)).build());
+                .out("Q", "%.1f kW", heat.heatW() / 1e3).build());
 
         // 4. Inventory at storage
         SaturationResult storage = sat.atTemperature(in.storageTemperatureK(), in.densityBasis());
@@ -102,12 +102,12 @@ public final class WettedFire {
                         + storage.liquid().densityBasis().label())
                 .in("Storage temperature", kelvinC(in.storageTemperatureK()))
                 .out("Storage pressure (saturation)", kpa(storage.pressurePa()) + " abs")
-                .out("Liquid density", String.format(Locale.US, "%.2f kg/m3 (%s; Rackett %.2f)",
+                .out("Liquid density", "%.2f kg/m3 (%s; Rackett %.2f)",
                         storage.liquid().density(), storage.liquid().densityBasis().label(),
-                        storage.rackettLiquidDensity()))
-                .out("Vapour density", String.format(Locale.US, "%.3f kg/m3", storage.vapor().density()))
-                .out("Liquid mass", String.format(Locale.US, "%.0f kg", mL))
-                .out("Vapour mass", String.format(Locale.US, "%.0f kg", mV)).build());
+                        storage.rackettLiquidDensity())
+                .out("Vapour density", "%.3f kg/m3", storage.vapor().density())
+                .out("Liquid mass", "%.0f kg", mL)
+                .out("Vapour mass", "%.0f kg", mV).build());
 
         // 5. Relieving temperature and latent heat
         if (p1 >= c.pcPa()) {
@@ -137,23 +137,23 @@ public final class WettedFire {
                 .source(in.eos().displayName() + " (" + in.eos().citation() + ")")
                 .in("P1", kpa(p1) + " abs")
                 .out("Relieving temperature T1", kelvinC(rel.temperatureK()))
-                .out("Liquid density at T1", String.format(Locale.US, "%.2f kg/m3 (%s)", rel.liquid().density(),
-                        rel.liquid().densityBasis().label()))
-                .out("Vapour density at T1", String.format(Locale.US, "%.3f kg/m3", rel.vapor().density()))
-                .out("Latent heat (EOS)", String.format(Locale.US, "%.2f kJ/kg", lh.computedJPerKg() / 1e3))
-                .out("Latent heat used", String.format(Locale.US, "%.2f kJ/kg%s", l / 1e3,
-                        lh.minimumApplied() ? " (published minimum for hydrocarbons)" : "")).build());
+                .out("Liquid density at T1", "%.2f kg/m3 (%s)", rel.liquid().density(),
+                        rel.liquid().densityBasis().label())
+                .out("Vapour density at T1", "%.3f kg/m3", rel.vapor().density())
+                .out("Latent heat (EOS)", "%.2f kJ/kg", lh.computedJPerKg() / 1e3)
+                .out("Latent heat used", "%.2f kJ/kg%s", l / 1e3,
+                        lh.minimumApplied() ? " (published minimum for hydrocarbons)" : "").build());
         trace.add(TraceStep.of("Relief load")
                 .equation(in.subtractDisplacedVapour() ? "W = Q / L x (1 - rho_V / rho_L)" : "W = Q / L")
                 .source(in.subtractDisplacedVapour()
                         ? "API Std 521 relief rate from heat input, with the vapour-displacement refinement "
                                 + "(mass and energy balance at constant P1)"
                         : "API Std 521 / ISO 23251: relief rate = heat absorbed / latent heat at relieving conditions")
-                .in("Q", String.format(Locale.US, "%.1f kW", heat.heatW() / 1e3))
-                .in("L", String.format(Locale.US, "%.2f kJ/kg", l / 1e3))
-                .in("1 - rho_V/rho_L", String.format(Locale.US, "%.4f%s", displacement,
-                        in.subtractDisplacedVapour() ? "" : " (not applied)"))
-                .out("W", String.format(Locale.US, "%.1f kg/h", w * 3600)).build());
+                .in("Q", "%.1f kW", heat.heatW() / 1e3)
+                .in("L", "%.2f kJ/kg", l / 1e3)
+                .in("1 - rho_V/rho_L", "%.4f%s", displacement,
+                        in.subtractDisplacedVapour() ? "" : " (not applied)")
+                .out("W", "%.1f kg/h", w * 3600).build());
 
         // 6. Relieved vapour properties
         FluidProperties vap = model.properties(rel.temperatureK(), p1, new double[] {1}, PhaseRequest.VAPOR,
@@ -163,11 +163,11 @@ public final class WettedFire {
                 .source(in.eos().displayName() + "; ideal-gas Cp: " + org.ventcase.thermo.Citations.cp(c))
                 .in("T1", kelvinC(rel.temperatureK())).in("P1", kpa(p1) + " abs")
                 .out("Roots Z", joinRoots(vap.roots().physical()) + " (" + vap.roots().rootCase().words() + ")")
-                .out("Z (vapour root)", String.format(Locale.US, "%.4f", vap.z()))
-                .out("Molar mass M", String.format(Locale.US, "%.3f kg/kmol", vap.molarMass()))
-                .out("k = Cp/Cv ideal gas", String.format(Locale.US, "%.4f", vap.kIdeal()))
-                .out("Real-gas isentropic exponent", String.format(Locale.US, "%.4f", vap.isentropicExponent()))
-                .out("Density", String.format(Locale.US, "%.3f kg/m3", vap.density()))
+                .out("Z (vapour root)", "%.4f", vap.z())
+                .out("Molar mass M", "%.3f kg/kmol", vap.molarMass())
+                .out("k = Cp/Cv ideal gas", "%.4f", vap.kIdeal())
+                .out("Real-gas isentropic exponent", "%.4f", vap.isentropicExponent())
+                .out("Density", "%.3f kg/m3", vap.density())
                 .note(vap.rootReason()).build());
 
         // 7. Sizing
@@ -179,17 +179,17 @@ public final class WettedFire {
             sz.note(line);
         }
         sz.out("Flow regime", gs.regime().name().toLowerCase(Locale.ROOT))
-                .out("Required area", String.format(Locale.US, "%.1f mm2 (%.4f in2)", gs.areaMm2(),
-                        gs.areaMm2() / 645.16));
+                .out("Required area", "%.1f mm2 (%.4f in2)", gs.areaMm2(),
+                        gs.areaMm2() / 645.16);
         trace.add(sz.build());
         OrificeSelection os = OrificeTable.select(gs.areaM2(), w);
         trace.add(TraceStep.of("Standard orifice").equation("smallest API 526 effective area >= required area")
                 .source("API Std 526 effective orifice areas (used with the API 520 Part I equations)")
-                .in("Required area", String.format(Locale.US, "%.1f mm2", gs.areaMm2()))
+                .in("Required area", "%.1f mm2", gs.areaMm2())
                 .out("Orifice", os.designation())
-                .out("Selected effective area", String.format(Locale.US, "%.1f mm2", os.selectedAreaM2() * 1e6))
-                .out("Rated capacity", String.format(Locale.US, "%.1f kg/h", os.ratedCapacityKgPerS() * 3600))
-                .out("Margin", String.format(Locale.US, "%.1f %%", os.marginPercent()))
+                .out("Selected effective area", "%.1f mm2", os.selectedAreaM2() * 1e6)
+                .out("Rated capacity", "%.1f kg/h", os.ratedCapacityKgPerS() * 3600)
+                .out("Margin", "%.1f %%", os.marginPercent())
                 .note(os.ruleApplied()).build());
         warnings.addAll(vap.warnings());
         return new WettedFireResult(in, rp, vs, heat, storage, rel, lh, w, vap, gs, os, mL, mV, trace,
