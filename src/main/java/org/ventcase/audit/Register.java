@@ -46,11 +46,10 @@ public record Register(String origin, List<Optional<RegisterColumn>> columns, Li
 
     /** Reads a register file (UTF-8). */
     public static Register read(Path file) throws IOException {
-        if (Files.size(file) > MAX_BYTES) {
-            throw InvalidInputException.invalid(file.toString(), Files.size(file) + " bytes",
-                    "expected a register of at most " + MAX_BYTES + " bytes");
-        }
-        return parse(Files.readString(file, StandardCharsets.UTF_8), file.getFileName().toString());
+        byte[] b = org.ventcase.common.BoundedRead.bytes(file, MAX_BYTES).orElseThrow(() ->
+                InvalidInputException.invalid(file.toString(), "more than " + MAX_BYTES + " bytes",
+                        "expected a register of at most " + MAX_BYTES + " bytes"));
+        return parse(new String(b, StandardCharsets.UTF_8), file.getFileName().toString());
     }
 
     /** Parses register text. */

@@ -142,18 +142,17 @@ public final class CaseFiles {
 
     private static String readText(Path file) {
         try {
-            long size = Files.size(file);
-            if (size > MAX_BYTES) {
-                throw tooLarge(file.toString(), size);
-            }
-            return Files.readString(file, StandardCharsets.UTF_8);
+            byte[] b = org.ventcase.common.BoundedRead.bytes(file, MAX_BYTES)
+                    .orElseThrow(() -> tooLarge(file.toString(), MAX_BYTES + 1));
+            return new String(b, StandardCharsets.UTF_8);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read case file " + file + ": " + e.getMessage(), e);
         }
     }
 
     private static CaseValidationException tooLarge(String origin, long size) {
-        return new CaseValidationException(origin, List.of(Problem.of("$", size + " bytes",
+        return new CaseValidationException(origin, List.of(Problem.of("$", (size > MAX_BYTES ? "more than " + MAX_BYTES
+                : String.valueOf(size)) + " bytes",
                 "a case file may be at most " + MAX_BYTES + " bytes (2 MiB); this does not look like a case file")));
     }
 
@@ -299,7 +298,7 @@ public final class CaseFiles {
         try {
             org.ventcase.common.AtomicFiles.writeText(text, target);
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot write " + target + ": " + e, e);
+            throw new UncheckedIOException("cannot write " + target + ": " + e.getMessage(), e);
         }
     }
 

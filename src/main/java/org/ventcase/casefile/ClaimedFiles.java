@@ -126,12 +126,10 @@ public final class ClaimedFiles {
 
     static String readText(Path file) {
         try {
-            long size = Files.size(file);
-            if (size > MAX_BYTES) {
-                throw InvalidInputException.invalid(file.toString(), size + " bytes",
-                        "expected a claimed-value file of at most " + MAX_BYTES + " bytes");
-            }
-            return Files.readString(file, StandardCharsets.UTF_8);
+            byte[] b = org.ventcase.common.BoundedRead.bytes(file, MAX_BYTES).orElseThrow(() ->
+                    InvalidInputException.invalid(file.toString(), "more than " + MAX_BYTES + " bytes",
+                            "expected a claimed-value file of at most " + MAX_BYTES + " bytes"));
+            return new String(b, StandardCharsets.UTF_8);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read " + file + ": " + e.getMessage(), e);
         }

@@ -127,11 +127,9 @@ final class AuditCommand implements Callable<Integer> {
         if (Files.isDirectory(input)) {
             items = folder(input, hash);
         } else {
-            byte[] bytes = Files.readAllBytes(input);
-            if (bytes.length > Register.MAX_BYTES) {
-                throw InvalidInputException.invalid(input.toString(), bytes.length + " bytes",
-                        "expected a register of at most " + Register.MAX_BYTES + " bytes");
-            }
+            byte[] bytes = org.ventcase.common.BoundedRead.bytes(input, Register.MAX_BYTES).orElseThrow(() ->
+                    InvalidInputException.invalid(input.toString(), "more than " + Register.MAX_BYTES + " bytes",
+                            "expected a register of at most " + Register.MAX_BYTES + " bytes"));
             hash.update(bytes);
             String text = new String(bytes, StandardCharsets.UTF_8);
             bytes = null;
@@ -140,7 +138,9 @@ final class AuditCommand implements Callable<Integer> {
         }
         Thresholds th = Thresholds.none();
         if (thresholdsFile != null) {
-            byte[] bytes = Files.readAllBytes(thresholdsFile);
+            byte[] bytes = org.ventcase.common.BoundedRead.bytes(thresholdsFile, Register.MAX_BYTES).orElseThrow(() ->
+                    InvalidInputException.invalid("--thresholds", "more than " + Register.MAX_BYTES + " bytes",
+                            "expected a thresholds file of at most " + Register.MAX_BYTES + " bytes"));
             hash.update(bytes);
             th = Thresholds.parse(new String(bytes, StandardCharsets.UTF_8), thresholdsFile.getFileName().toString());
         }

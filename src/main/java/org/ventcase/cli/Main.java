@@ -98,6 +98,32 @@ public final class Main implements Callable<Integer> {
         return display != null && !display.isBlank() || wayland != null && !wayland.isBlank();
     }
 
+    /**
+     * A file error in the user's terms: the file and what is wrong with it, without exception class
+     * names ("no such file", "permission denied", "is a symbolic link: ...").
+     */
+    static String fileError(Throwable ex) {
+        Throwable t = ex instanceof UncheckedIOException u && u.getCause() != null ? u.getCause() : ex;
+        String stem = ex instanceof UncheckedIOException && ex.getMessage() != null
+                ? ex.getMessage().replaceFirst(": .*$", "") : "";
+        if (t instanceof java.nio.file.FileSystemException f) {
+            String what;
+            if (t instanceof java.nio.file.NoSuchFileException) {
+                what = "no such file or folder" + (f.getReason() != null ? " (" + f.getReason() + ")" : "");
+            } else if (t instanceof java.nio.file.AccessDeniedException) {
+                what = "permission denied";
+            } else {
+                what = f.getReason() != null ? f.getReason() : "cannot be used";
+            }
+            String file = f.getFile() == null ? "" : f.getFile();
+            if (stem.isEmpty()) {
+                return file + ": " + what;
+            }
+            return stem.endsWith(file) ? stem + ": " + what : stem + ": " + file + ": " + what;
+        }
+        return ex.getMessage() == null ? "cannot read or write a file" : ex.getMessage();
+    }
+
     /** Runs the command line with the given writers; returns the exit code. */
     public static int run(PrintWriter out, PrintWriter err, String... args) {
         CommandLine cl = new CommandLine(new Main());
@@ -120,7 +146,7 @@ public final class Main implements Callable<Integer> {
                 return ExitCode.NO_CONVERGENCE;
             }
             if (ex instanceof IOException || ex instanceof UncheckedIOException) {
-                e.println("ventcase: file error: " + ex.getMessage());
+                e.println("ventcase: file error: " + fileError(ex));
                 return ExitCode.IO;
             }
             e.println("ventcase: internal error (please report with the command line used): " + ex);

@@ -46,6 +46,13 @@ public final class AtomicFiles {
             throw new java.nio.file.NoSuchFileException(dir.toString(), null,
                     "the folder does not exist (create it first; a mistyped folder is not created)");
         }
+        if (Files.exists(abs, java.nio.file.LinkOption.NOFOLLOW_LINKS)
+                && !Files.isRegularFile(abs, java.nio.file.LinkOption.NOFOLLOW_LINKS)) {
+            throw new java.nio.file.FileSystemException(abs.toString(), null, Files.isSymbolicLink(abs)
+                    ? "is a symbolic link: Ventcase writes an output through a temporary file moved into place, which "
+                            + "would replace the link and leave its target as it was; name the target file itself"
+                    : "is not a regular file (a device, a pipe or a folder): name a regular file to write to");
+        }
         Path tmp = null;
         try {
             tmp = newTemp(dir, abs.getFileName().toString());

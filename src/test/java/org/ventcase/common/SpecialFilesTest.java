@@ -1,0 +1,55 @@
+package org.ventcase.common;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.FileSystemException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.condition.EnabledOnOs;
+import org.junit.jupiter.api.condition.OS;
+import org.junit.jupiter.api.io.TempDir;
+
+/** Outputs only to regular files; inputs read with their size limit enforced while reading. */
+class SpecialFilesTest {
+
+    @TempDir
+    Path dir;
+
+    @Test
+    void aSymbolicLinkIsRefusedAndItsTargetLeftAlone() throws Exception {
+        Path target = dir.resolve("real.json");
+        Files.writeString(target, "old");
+        Path link = Files.createSymbolicLink(dir.resolve("link.json"), target);
+        FileSystemException e = assertThrows(FileSystemException.class, () -> AtomicFiles.writeText("new", link));
+        assertTrue(e.getReason().contains("symbolic link"), e.getReason());
+        assertTrue(Files.isSymbolicLink(link), "the link is still a link");
+        assertEquals("old", Files.readString(target));
+        try (var s = Files.list(dir)) {
+            assertEquals(2, s.count(), "no temporary file left");
+        }
+    }
+
+    @Test
+    @EnabledOnOs(OS.LINUX)
+    void aDeviceIsRefusedNotReplaced() {
+        Path dev = Path.of("/dev/null");
+        FileSystemException e = assertThrows(FileSystemException.class, () -> AtomicFiles.writeText("x", dev));
+        assertTrue(e.getReason().contains("not a regular file"), e.getReason());
+        assertTrue(Files.exists(dev) && !Files.isRegularFile(dev), "still the device");
+    }
+
+    @Test
+    @EnabledOnOs(OS.LINUX)
+    void anEndlessStreamStopsAtTheLimit() throws Exception {
+        // /dev/zero reports size 0 and never ends: the limit must hold while reading
+        assertTrue(BoundedRead.bytes(Path.of("/dev/zero"), 1000).isEmpty());
+        Path f = dir.resolve("small.txt");
+        Files.writeString(f, "0123456789");
+        assertEquals(10, BoundedRead.bytes(f, 10).orElseThrow().length);
+        assertTrue(BoundedRead.bytes(f, 9).isEmpty());
+    }
+}
