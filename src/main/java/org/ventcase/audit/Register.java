@@ -86,6 +86,12 @@ public record Register(String origin, List<Optional<RegisterColumn>> columns, Li
             String where = origin + " line " + head.line() + ", column " + (i + 1);
             if (col.isEmpty()) {
                 if (!name.isBlank()) {
+                    Optional<RegisterColumn> near = nearest(name);
+                    if (near.isPresent()) {
+                        // a misspelt column would silently drop its data (e.g. 'orifise': no orifice check)
+                        throw InvalidInputException.invalid(where, cell, "not a register column; did you mean '"
+                                + near.get().header() + "'? (the columns: docs/audit.md)");
+                    }
                     ignored.add(cell);
                 }
             } else {
@@ -184,6 +190,40 @@ public record Register(String origin, List<Optional<RegisterColumn>> columns, Li
             firstMissing = cols.get(i);
         }
         return new RegisterRow(rec.line(), cells, rec.fields().size(), cols.size(), firstMissing);
+    }
+
+    /** A register column whose name is within two edits of {@code name}, if any. */
+    static Optional<RegisterColumn> nearest(String name) {
+        String n = name.strip().toLowerCase(java.util.Locale.ROOT);
+        RegisterColumn best = null;
+        int bestD = 3;
+        for (RegisterColumn c : RegisterColumn.values()) {
+            int d = edits(n, c.header().toLowerCase(java.util.Locale.ROOT));
+            if (d < bestD) {
+                bestD = d;
+                best = c;
+            }
+        }
+        return Optional.ofNullable(best);
+    }
+
+    private static int edits(String a, String b) {
+        int[] prev = new int[b.length() + 1];
+        int[] cur = new int[b.length() + 1];
+        for (int j = 0; j <= b.length(); j++) {
+            prev[j] = j;
+        }
+        for (int i = 1; i <= a.length(); i++) {
+            cur[0] = i;
+            for (int j = 1; j <= b.length(); j++) {
+                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
+                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + cost);
+            }
+            int[] t = prev;
+            prev = cur;
+            cur = t;
+        }
+        return prev[b.length()];
     }
 
     private static String requiredList() {

@@ -269,6 +269,9 @@ public final class RegisterCases {
         String shape = required(row, RegisterColumn.SHAPE, "expected horizontal, vertical or sphere")
                 .strip().toLowerCase(Locale.ROOT);
         double d = length(row, RegisterColumn.DIAMETER);
+        // range first, so that a bad diameter is reported under its own column, not under heads
+        InvalidInputException.requireInRange(RegisterColumn.DIAMETER.header(), d, Vessel.PLAUSIBLE_DIAMETER_M[0],
+                Vessel.PLAUSIBLE_DIAMETER_M[1], "m");
         try {
             if (shape.equals("sphere")) {
                 for (RegisterColumn c : List.of(RegisterColumn.LENGTH, RegisterColumn.HEADS)) {
@@ -284,6 +287,8 @@ public final class RegisterCases {
                         "expected horizontal, vertical or sphere");
             }
             double l = length(row, RegisterColumn.LENGTH);
+            InvalidInputException.requireInRange(RegisterColumn.LENGTH.header(), l, Vessel.PLAUSIBLE_LENGTH_M[0],
+                    Vessel.PLAUSIBLE_LENGTH_M[1], "m");
             Head h = Specs.head(RegisterColumn.HEADS.header(), required(row, RegisterColumn.HEADS,
                     "expected one of " + Specs.HEAD_FORMS), d);
             return shape.equals("horizontal") ? Vessel.horizontal(d, l, h, h) : Vessel.vertical(d, l, h, h);

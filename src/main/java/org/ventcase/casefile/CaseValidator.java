@@ -132,6 +132,20 @@ public final class CaseValidator {
         return attempt(path, () -> Units.parsePressure(path, text, atmPa));
     }
 
+    /**
+     * Plausible sizes of a process or storage vessel (common practice, no source): a dimension
+     * outside them is a typing error, refused with the range before anything is derived from it.
+     */
+    static final double[] DIAMETER_RANGE_M = Vessel.PLAUSIBLE_DIAMETER_M;
+    static final double[] LENGTH_RANGE_M = Vessel.PLAUSIBLE_LENGTH_M;
+    static final double[] WALL_RANGE_M = Vessel.PLAUSIBLE_WALL_M;
+    static final double[] ELEVATION_RANGE_M = Vessel.PLAUSIBLE_ELEVATION_M;
+
+    private Optional<Double> inRange(String path, Optional<Double> v, double[] range, String unit) {
+        return v.flatMap(x -> attempt(path, () -> InvalidInputException.requireInRange(path, x, range[0], range[1],
+                unit)));
+    }
+
     private Optional<Double> positive(String path, Optional<Double> v, String unit) {
         return v.flatMap(x -> attempt(path, () -> InvalidInputException.requirePositive(path, x, unit)));
     }
@@ -488,11 +502,13 @@ public final class CaseValidator {
         Optional<Vessel.Shape> shape = choice("$.vessel.shape", v.shape(), options("horizontal",
                 Vessel.Shape.HORIZONTAL_CYLINDER, "vertical", Vessel.Shape.VERTICAL_CYLINDER, "sphere",
                 Vessel.Shape.SPHERE), true);
-        Optional<Double> d = positive("$.vessel.insideDiameter",
-                quantity("$.vessel.insideDiameter", v.insideDiameter(), Dimension.LENGTH, true), "m");
-        Optional<Double> wall = positive("$.vessel.wallThickness",
-                quantity("$.vessel.wallThickness", v.wallThickness(), Dimension.LENGTH, false), "m");
-        Optional<Double> z = quantity("$.vessel.bottomElevation", v.bottomElevation(), Dimension.LENGTH, true);
+        Optional<Double> d = inRange("$.vessel.insideDiameter",
+                quantity("$.vessel.insideDiameter", v.insideDiameter(), Dimension.LENGTH, true), DIAMETER_RANGE_M, "m");
+        Optional<Double> wall = inRange("$.vessel.wallThickness",
+                quantity("$.vessel.wallThickness", v.wallThickness(), Dimension.LENGTH, false), WALL_RANGE_M, "m");
+        Optional<Double> z = inRange("$.vessel.bottomElevation",
+                quantity("$.vessel.bottomElevation", v.bottomElevation(), Dimension.LENGTH, true), ELEVATION_RANGE_M,
+                "m");
         boolean skirt = Boolean.TRUE.equals(v.skirtExcludesBottomHead());
         Optional<ValidatedCase.InsulationSpec> insulation = insulation(v.insulation());
         Optional<Vessel> vessel = Optional.empty();
@@ -509,8 +525,9 @@ public final class CaseValidator {
                     vessel = attempt("$.vessel.insideDiameter", () -> Vessel.sphere(d.get()));
                 }
             } else {
-                Optional<Double> l = positive("$.vessel.tangentLength",
-                        quantity("$.vessel.tangentLength", v.tangentLength(), Dimension.LENGTH, true), "m");
+                Optional<Double> l = inRange("$.vessel.tangentLength",
+                        quantity("$.vessel.tangentLength", v.tangentLength(), Dimension.LENGTH, true), LENGTH_RANGE_M,
+                        "m");
                 if (v.heads() == null) {
                     missing("$.vessel.heads", "expected one of " + Specs.HEAD_FORMS);
                 }

@@ -146,6 +146,10 @@ final class AuditCommand implements Callable<Integer> {
         }
         boolean bar = progress || System.console() != null;
         ProgressBar pb = new ProgressBar(err, bar);
+        if (register != null && !register.ignoredColumns().isEmpty()) {
+            err.println("ventcase: columns not used (not register columns, docs/audit.md): "
+                    + String.join(", ", register.ignoredColumns()));
+        }
         AuditResult r = register != null ? Audit.run(register, registerRows, th, n, pb) : Audit.run(items, th, n, pb);
         pb.finish();
         if (csv != null) {

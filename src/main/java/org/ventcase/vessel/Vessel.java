@@ -43,6 +43,18 @@ import org.ventcase.common.InvalidInputException;
  */
 public final class Vessel {
 
+    /**
+     * Plausible sizes of a process or storage vessel, m (common practice, no source): a dimension
+     * outside them is a typing error, refused with the range before anything is derived from it.
+     */
+    public static final double[] PLAUSIBLE_DIAMETER_M = {0.05, 40.0};
+    /** Plausible tangent-to-tangent length, m. */
+    public static final double[] PLAUSIBLE_LENGTH_M = {0.05, 200.0};
+    /** Plausible wall thickness, m. */
+    public static final double[] PLAUSIBLE_WALL_M = {0.0005, 0.5};
+    /** Plausible bottom elevation above grade, m (negative: below grade). */
+    public static final double[] PLAUSIBLE_ELEVATION_M = {-50.0, 200.0};
+
     /** The three supported arrangements. */
     public enum Shape {
         HORIZONTAL_CYLINDER, VERTICAL_CYLINDER, SPHERE

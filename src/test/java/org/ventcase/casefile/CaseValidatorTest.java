@@ -258,4 +258,13 @@ class CaseValidatorTest {
             assertEquals("", r.validated().orElseThrow().identity().checker());
         }
     }
+
+    @Test
+    void implausibleVesselSizesAreRefusedWithTheirRangeBeforeAnythingIsDerived() {
+        // plausible vessel sizes (common practice, no source): Vessel.PLAUSIBLE_*
+        ValidationReport big = check(Fixtures.bulletWith("\"insideDiameter\": \"3.2 m\"", "\"insideDiameter\": \"1e300 m\""));
+        assertTrue(big.problems().stream().anyMatch(p -> p.path().equals("$.vessel.insideDiameter")
+                && p.accepted().contains("0.05 to 40 m")), big.problems().toString());
+        assertTrue(big.problems().stream().noneMatch(p -> p.path().startsWith("$.storage")), big.problems().toString());
+    }
 }
