@@ -18,7 +18,7 @@ import picocli.CommandLine.Spec;
 /** {@code ventcase new}: writes a starter case file from a template. */
 @Command(name = "new", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         header = "Write a starter case file from a template.",
-        description = {"Templates: ${COMPLETION-CANDIDATES}.",
+        description = {"The templates are listed under --template below.",
                 "The file is written atomically; an existing file is kept unless --force is given.",
                 "Example: ventcase new --template horizontal-bullet v2101.json"},
         footer = ExitCode.HELP_LIST)

@@ -66,7 +66,7 @@ final class ReviewCommand implements Callable<Integer> {
     Path pdf;
 
     @Option(names = "--tolerance", paramLabel = "NAME=VALUE",
-            description = "Change a tolerance, e.g. k=0.05, latentHeat=8%, relievingTemperature=2K (repeatable).")
+            description = "Change a tolerance, e.g. k=0.05, latentHeat=8%%, relievingTemperature=2K (repeatable).")
     List<String> tolerances = new ArrayList<>();
 
     @Option(names = "--page", paramLabel = "SIZE", defaultValue = "a4",

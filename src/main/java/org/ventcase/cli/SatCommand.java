@@ -21,7 +21,7 @@ import picocli.CommandLine.Spec;
 
 /** {@code ventcase sat}: saturation state of a pure fluid at T or at P. */
 @Command(name = "sat", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
-        header = "Saturation pressure or temperature of a pure fluid, with phase densities and latent heat.",
+        header = "Saturation of a pure fluid (pressure or temperature, phase densities, latent heat), or the bubble or dew point of a mixture.",
         description = {"Equal-fugacity solution of the cubic equation of state; the liquid density is also "
                 + "given by the Rackett equation as an independent cross-check.",
                 "Example: ventcase sat --fluid propane --pressure \"17.2 barg\""},
