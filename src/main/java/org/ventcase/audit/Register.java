@@ -49,7 +49,7 @@ public record Register(String origin, List<Optional<RegisterColumn>> columns, Li
         byte[] b = org.ventcase.common.BoundedRead.bytes(file, MAX_BYTES).orElseThrow(() ->
                 InvalidInputException.invalid(file.toString(), "more than " + MAX_BYTES + " bytes",
                         "expected a register of at most " + MAX_BYTES + " bytes"));
-        return parse(new String(b, StandardCharsets.UTF_8), file.getFileName().toString());
+        return parse(org.ventcase.common.Utf8.decode(b, file.getFileName().toString()), file.getFileName().toString());
     }
 
     /** Parses register text. */

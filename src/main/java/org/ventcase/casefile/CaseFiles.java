@@ -144,7 +144,7 @@ public final class CaseFiles {
         try {
             byte[] b = org.ventcase.common.BoundedRead.bytes(file, MAX_BYTES)
                     .orElseThrow(() -> tooLarge(file.toString(), MAX_BYTES + 1));
-            return new String(b, StandardCharsets.UTF_8);
+            return org.ventcase.common.Utf8.decode(b, file.toString());
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read case file " + file + ": " + e.getMessage(), e);
         }

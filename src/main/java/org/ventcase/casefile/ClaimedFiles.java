@@ -129,7 +129,7 @@ public final class ClaimedFiles {
             byte[] b = org.ventcase.common.BoundedRead.bytes(file, MAX_BYTES).orElseThrow(() ->
                     InvalidInputException.invalid(file.toString(), "more than " + MAX_BYTES + " bytes",
                             "expected a claimed-value file of at most " + MAX_BYTES + " bytes"));
-            return new String(b, StandardCharsets.UTF_8);
+            return org.ventcase.common.Utf8.decode(b, file.toString());
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read " + file + ": " + e.getMessage(), e);
         }

@@ -131,7 +131,7 @@ final class AuditCommand implements Callable<Integer> {
                     InvalidInputException.invalid(input.toString(), "more than " + Register.MAX_BYTES + " bytes",
                             "expected a register of at most " + Register.MAX_BYTES + " bytes"));
             hash.update(bytes);
-            String text = new String(bytes, StandardCharsets.UTF_8);
+            String text = org.ventcase.common.Utf8.decode(bytes, registerName);
             bytes = null;
             registerRows = Register.countRows(text, registerName);
             register = Register.stream(text, registerName);
@@ -142,7 +142,8 @@ final class AuditCommand implements Callable<Integer> {
                     InvalidInputException.invalid("--thresholds", "more than " + Register.MAX_BYTES + " bytes",
                             "expected a thresholds file of at most " + Register.MAX_BYTES + " bytes"));
             hash.update(bytes);
-            th = Thresholds.parse(new String(bytes, StandardCharsets.UTF_8), thresholdsFile.getFileName().toString());
+            th = Thresholds.parse(org.ventcase.common.Utf8.decode(bytes, thresholdsFile.getFileName().toString()),
+                    thresholdsFile.getFileName().toString());
         }
         boolean bar = progress || System.console() != null;
         ProgressBar pb = new ProgressBar(err, bar);
