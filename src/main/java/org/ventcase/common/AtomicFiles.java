@@ -53,6 +53,7 @@ public final class AtomicFiles {
                             + "would replace the link and leave its target as it was; name the target file itself"
                     : "is not a regular file (a device, a pipe or a folder): name a regular file to write to");
         }
+        removeStaleTemps(dir, abs.getFileName().toString());
         Path tmp = null;
         try {
             tmp = newTemp(dir, abs.getFileName().toString());
@@ -76,6 +77,37 @@ public final class AtomicFiles {
                     // the write has already failed; that error is the one reported
                 }
             }
+        }
+    }
+
+    /** A temporary file of ours older than this is left over from a killed run. */
+    static final long STALE_AFTER_MS = 10 * 60 * 1000L;
+
+    /**
+     * Deletes the temporary files a killed run of ours left beside this target (".NAME.HEX.tmp",
+     * older than {@link #STALE_AFTER_MS}: a younger one may belong to a write still going on).
+     * Best effort: a file that cannot be deleted is left.
+     */
+    static void removeStaleTemps(Path dir, String name) {
+        String prefix = "." + name + ".";
+        long now = System.currentTimeMillis();
+        try (java.nio.file.DirectoryStream<Path> ds = Files.newDirectoryStream(dir, p -> {
+            String f = p.getFileName().toString();
+            return f.startsWith(prefix) && f.endsWith(".tmp")
+                    && f.substring(prefix.length(), f.length() - 4).matches("-?[0-9a-f]{1,16}");
+        })) {
+            for (Path p : ds) {
+                try {
+                    if (Files.isRegularFile(p, java.nio.file.LinkOption.NOFOLLOW_LINKS)
+                            && now - Files.getLastModifiedTime(p).toMillis() > STALE_AFTER_MS) {
+                        Files.deleteIfExists(p);
+                    }
+                } catch (IOException ignored) {
+                    // left for the next write
+                }
+            }
+        } catch (IOException ignored) {
+            // the folder cannot be listed: nothing to clean, the write itself will report
         }
     }
 

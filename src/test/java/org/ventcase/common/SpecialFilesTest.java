@@ -52,4 +52,24 @@ class SpecialFilesTest {
         assertEquals(10, BoundedRead.bytes(f, 10).orElseThrow().length);
         assertTrue(BoundedRead.bytes(f, 9).isEmpty());
     }
+
+    @Test
+    void aStaleTemporaryFileOfAKilledRunIsRemovedAtTheNextWrite() throws Exception {
+        Path target = dir.resolve("out.json");
+        Path stale = dir.resolve(".out.json.1a2b3c4d5e6f7081.tmp");
+        Path fresh = dir.resolve(".out.json.00ff00ff00ff00ff.tmp");
+        Path other = dir.resolve(".other.json.1a2b3c4d5e6f7081.tmp");
+        for (Path p : new Path[] {stale, fresh, other}) {
+            Files.writeString(p, "partial");
+        }
+        java.nio.file.attribute.FileTime old = java.nio.file.attribute.FileTime.fromMillis(
+                System.currentTimeMillis() - 2 * AtomicFiles.STALE_AFTER_MS);
+        Files.setLastModifiedTime(stale, old);
+        Files.setLastModifiedTime(other, old);
+        AtomicFiles.writeText("{}", target);
+        assertTrue(Files.notExists(stale), "the stale temporary file of this target is removed");
+        assertTrue(Files.exists(fresh), "a young one may be a write in progress: kept");
+        assertTrue(Files.exists(other), "another target's file is not ours to remove");
+        assertEquals("{}", Files.readString(target));
+    }
 }
