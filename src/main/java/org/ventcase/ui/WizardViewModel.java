@@ -114,6 +114,9 @@ public final class WizardViewModel {
         d.setText("$.identity.date", LocalDate.now().toString());
         d.setText("$.identity.revision", "A");
         d.setText("$.identity.checker", "");
+        // the defaults a new case starts from (the ones a case file must name explicitly)
+        d.setText("$.fluid.eos", org.ventcase.thermo.EosVariant.DEFAULT.id());
+        d.setText("$.fluid.densityBasis", org.ventcase.thermo.DensityBasis.TRANSLATED.label());
         load(d, null);
     }
 

@@ -38,6 +38,22 @@ class WizardViewModelTest {
     }
 
     @Test
+    void aNewCaseLeavesTheFirstStepOnceItsRequiredFieldsAreFilled() {
+        // seen: the empty checker of a new case was refused ("expected who checked the case, or \"\""),
+        // so Next stayed grey; and the equation of state and density basis started blank
+        WizardViewModel vm = vm();
+        vm.newCase();
+        vm.text("$.identity.title").text().set("Test drum");
+        vm.text("$.identity.tag").text().set("D-1");
+        vm.text("$.identity.preparer").text().set("A. Engineer");
+        assertTrue(vm.stepProblems(Step.IDENTITY).isEmpty(), vm.stepProblems(Step.IDENTITY).toString());
+        assertTrue(vm.canAdvance().get());
+        assertTrue(vm.next());
+        assertEquals("PR-Twu", vm.choice("$.fluid.eos", java.util.List.of()).text().get());
+        assertEquals("translated", vm.choice("$.fluid.densityBasis", java.util.List.of()).text().get());
+    }
+
+    @Test
     void nextIsBlockedOnlyByProblemsOfTheCurrentStep() {
         WizardViewModel vm = vm();
         vm.newFromTemplate("horizontal-bullet");
