@@ -477,9 +477,21 @@ public final class CaseCalculation {
         if (!at.isEmpty()) {
             o.trace.add(factorStep(env, at));
         }
-        BoilOffResult r = BoilOff.run(new BoilOffInput(c.liquid(), c.in().vessel(), c.in().level(), h.heatW(), p1,
+        BoilOffInput bi = new BoilOffInput(c.liquid(), c.in().vessel(), c.in().level(), h.heatW(), p1,
                 f.stopAtLiquidFraction(), f.durationS().orElse(NO_TIME_LIMIT_S), BoilOffInput.DEFAULT_STEPS,
-                c.in().device().gas()));
+                c.in().device().gas());
+        if (c.in().storage() instanceof Storage.Saturated) {
+            // start from what is stored (moles per component of liquid and vapour), not from the
+            // stored liquid's volume re-read at P1
+            java.util.List<org.ventcase.thermo.Component> cs = c.liquid().components();
+            double[] moles = new double[cs.size()];
+            for (int i = 0; i < cs.size(); i++) {
+                Double kg = c.inv().massPerComponentKg().get(cs.get(i).name());
+                moles[i] = kg == null ? 0.0 : kg / (cs.get(i).molarMass() * 1e-3);
+            }
+            bi = bi.withStoredMoles(moles);
+        }
+        BoilOffResult r = BoilOff.run(bi);
         BoilOffPoint peak = r.peak();
         o.t1 = OptionalDouble.of(peak.temperatureK());
         o.latent = r.peakVapour().latentHeatJPerKg();

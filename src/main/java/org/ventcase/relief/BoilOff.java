@@ -42,8 +42,11 @@ import org.ventcase.thermo.mix.SaturationPoints;
  *
  * <p>Assumptions (stated on the result): thermodynamic equilibrium between the phases at every
  * instant, no liquid carry-over (vapour-only relief), constant P1 (the valve holds the pressure),
- * constant Q, and the opening state taken as the stored liquid composition at its bubble point at
- * P1 (flashing or condensation during the pressure rise before opening is not followed).
+ * constant Q, and the opening state: where the stored contents are known
+ * ({@link BoilOffInput#storedMoles}), the same moles per component in the same vessel volume,
+ * split into liquid and vapour in equilibrium at P1 (the heat-up to P1 in the closed vessel; its
+ * path is not followed); otherwise the stored liquid composition at its bubble point at P1 filling
+ * the liquid volume at the level.
  * Enthalpies on the density basis (see {@link BoilingState}).
  *
  * <p>Source: the balances are the standard open-system mass and energy balances (e.g. J.M. Smith,
@@ -85,6 +88,17 @@ public final class BoilOff {
         warnings.addAll(b.warnings());
         double nL = vl0 / b.liquidMolarVolume();
         double nG = (vTot - vl0) / b.vapourMolarVolume();
+        if (in.storedMoles().isPresent()) {
+            // The stored contents, heated in the closed vessel to P1: the same moles per component
+            // in the same volume, split into liquid and vapour at P1 (issue: the stored liquid's
+            // volume re-read at P1 lost a sixth of an LPG sphere's mass).
+            Start st = start(model, basis, spec, in.storedMoles().get(), vTot, p1, b, warnings);
+            MixtureSpec atStart = spec.withComposition(st.state.liquid());
+            initial = MixtureFire.load(model, atStart, p1, q, true);
+            b = initial.state();
+            nL = st.nL;
+            nG = st.nG;
+        }
         double nL0 = nL;
         double[] liq = b.liquid();
         double[] lMoles = new double[n];
@@ -279,7 +293,10 @@ public final class BoilOff {
             warnings.add(initial.latent().warning());
         }
         warnings.add("Boil-off model: equilibrium between liquid and vapour, vapour-only relief (no liquid "
-                + "carry-over), constant P1 and Q; the opening state is the stored liquid at its bubble point at P1.");
+                + "carry-over), constant P1 and Q; " + (in.storedMoles().isPresent()
+                ? "the opening state is the stored contents (every component's moles) heated in the closed vessel "
+                        + "to P1."
+                : "the opening state is the stored liquid at its bubble point at P1."));
         double a0 = curve.get(0).requiredAreaM2();
         double w0 = curve.get(0).massFlowKgPerS();
         List<TraceStep> trace = trace(in, initial, nL0, vl0, vTot, curve, peak, reason, bal, peakVapour, peakSizing);
@@ -295,12 +312,15 @@ public final class BoilOff {
         List<TraceStep> trace = new ArrayList<>();
         BoilingState b = initial.state();
         MixtureSpec spec = in.fluid();
-        trace.add(TraceStep.of("Opening state: liquid at its bubble point at P1")
-                .equation("T_b(x, P1) by equal fugacities; n_L = V_L / v_L, n_G = (V - V_L) / v_V")
+        boolean stored = in.storedMoles().isPresent();
+        trace.add(TraceStep.of(stored ? "Opening state: the stored contents at P1" : "Opening state: liquid at its "
+                        + "bubble point at P1")
+                .equation(stored ? "N_i stored; x_i = N_i / (n_L + n_G K_i), T = T_b(x, P1); n_L v_L + n_G v_V = V, "
+                        + "n_L + n_G = N" : "T_b(x, P1) by equal fugacities; n_L = V_L / v_L, n_G = (V - V_L) / v_V")
                 .source(spec.eos().displayName() + " (" + spec.eos().citation() + "); " + b.method())
                 .in("P1", ScenarioSupport.kpa(in.relievingPressurePa()) + " abs")
                 .in("Liquid composition x", ScenarioSupport.fractions(b.liquid()))
-                .in("Liquid volume at opening", "%.3f m3 of %.3f m3", vl0, vTot)
+                .in("Liquid volume at opening", "%.3f m3 of %.3f m3", stored ? nL0 * b.liquidMolarVolume() : vl0, vTot)
                 .out("Bubble temperature", ScenarioSupport.kelvinC(b.temperatureK()))
                 .out("Incipient vapour y", ScenarioSupport.fractions(b.vapour()))
                 .out("Liquid moles", "%.1f kmol", nL0 / 1e3)
@@ -347,6 +367,88 @@ public final class BoilOff {
     }
 
     /** Bubble point and phase volumes only: the inner loop's evaluation (no full property sets). */
+    /** The state at P1 the boil-off starts from (see {@link #start}). */
+    private record Start(BoilingState state, double nL, double nG, double ventedLiquidKg) {
+    }
+
+    /**
+     * The stored moles N_i in the vessel volume V at P1: the liquid moles n_L are found so that
+     * n_L v_L + n_G v_V = V with n_G = N - n_L, where for each n_L the liquid and vapour are in
+     * equilibrium at P1 (x_i = N_i/(n_L + n_G K_i), T the bubble temperature of x). The volume
+     * residual falls with n_L at the rate v_V - v_L, so Newton on n_L converges in a few steps. Where
+     * even all the contents as liquid would more than fill the vessel, the vessel is taken full of
+     * liquid and the excess is reported as liquid that must leave before boil-off can begin.
+     */
+    private static Start start(CubicModel model, DensityBasis basis, MixtureSpec spec, double[] moles, double vTot,
+                               double p1, BoilingState guess, LinkedHashSet<String> warnings) {
+        int n = moles.length;
+        double nTot = 0;
+        for (double m : moles) {
+            nTot += m;
+        }
+        double[] z = new double[n];
+        for (int i = 0; i < n; i++) {
+            z[i] = moles[i] / nTot;
+        }
+        // all liquid: the bubble point of the whole contents
+        BoilingState bz = BoilingState.bubblePoint(spec.withComposition(z), p1);
+        if (nTot * bz.liquidMolarVolume() >= vTot) {
+            double nL = vTot / bz.liquidMolarVolume();
+            double excessKg = (nTot - nL) * bz.liquidProps().molarMass() * 1e-3;
+            warnings.add(String.format(Locale.US, "Heated to the relieving pressure, the stored contents would more "
+                    + "than fill the vessel as liquid (%.0f kg too much at %.1f C): liquid relief comes first; the "
+                    + "boil-off is computed from a vessel full of liquid at P1, and the excess is not in the vented "
+                    + "vapour.", excessKg, bz.temperatureK() - 273.15));
+            return new Start(bz, nL, 0.0, excessKg);
+        }
+        double[] lnK = guess.lnK().clone();
+        double t = guess.temperatureK();
+        double nL = nTot * 0.99;
+        double[] x = new double[n];
+        Light lb = null;
+        for (int outer = 0; outer < 60; outer++) {
+            double nG = nTot - nL;
+            for (int it = 0; it < INNER_MAX; it++) {
+                double s = 0;
+                for (int i = 0; i < n; i++) {
+                    x[i] = moles[i] > 0 ? moles[i] / (nL + nG * Math.exp(lnK[i])) : 0.0;
+                    s += x[i];
+                }
+                double change = 0;
+                for (int i = 0; i < n; i++) {
+                    x[i] /= s;
+                }
+                lb = light(model, basis, p1, x, t, lnK);
+                for (int i = 0; i < n; i++) {
+                    change = Math.max(change, Math.abs(lb.lnK[i] - lnK[i]));
+                }
+                t = lb.t;
+                lnK = lb.lnK;
+                if (change < 1e-12 && Math.abs(s - 1) < 1e-12) {
+                    break;
+                }
+            }
+            double r = nL * lb.vL + nG * lb.vV - vTot;
+            if (Math.abs(r) <= 1e-12 * vTot) {
+                break;
+            }
+            double next = nL + r / (lb.vV - lb.vL);
+            nL = Math.min(nTot, Math.max(0.5 * nL, next));
+        }
+        BoilingState b0 = BoilingState.at(model, basis, p1, x, t, lnK);
+        double nG = nTot - nL;
+        double[] y = b0.vapour();
+        double[] xb = b0.liquid();
+        for (int i = 0; i < n; i++) {
+            double residual = moles[i] - nL * xb[i] - nG * y[i];
+            if (!(Math.abs(residual) <= 1e-8 * nTot)) {
+                throw new ConvergenceException("boil-off start (stored contents at P1)", 60, residual,
+                        String.format(Locale.US, "component %s", spec.components().get(i).name()));
+            }
+        }
+        return new Start(b0, nL, nG, 0.0);
+    }
+
     private static final class Light {
         double t;
         double[] y;

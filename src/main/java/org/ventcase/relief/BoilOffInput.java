@@ -21,7 +21,24 @@ import org.ventcase.vessel.Vessel;
  * @param device              back pressure and coefficients for the required area at each step
  */
 public record BoilOffInput(MixtureSpec fluid, Vessel vessel, Level level, double heatW, double relievingPressurePa,
-                           double stopLiquidFraction, double timeLimitS, int steps, DeviceSpec device) {
+                           double stopLiquidFraction, double timeLimitS, int steps, DeviceSpec device,
+                           java.util.Optional<double[]> storedMoles) {
+
+    /**
+     * Without the stored contents: the liquid at the level is taken at its bubble point at P1
+     * (its volume, not its mass, is kept; use the stored moles where they are known).
+     */
+    public BoilOffInput(MixtureSpec fluid, Vessel vessel, Level level, double heatW, double relievingPressurePa,
+                        double stopLiquidFraction, double timeLimitS, int steps, DeviceSpec device) {
+        this(fluid, vessel, level, heatW, relievingPressurePa, stopLiquidFraction, timeLimitS, steps, device,
+                java.util.Optional.empty());
+    }
+
+    /** The same input starting from the stored contents, moles per component (the inventory). */
+    public BoilOffInput withStoredMoles(double[] moles) {
+        return new BoilOffInput(fluid, vessel, level, heatW, relievingPressurePa, stopLiquidFraction, timeLimitS, steps,
+                device, java.util.Optional.of(moles.clone()));
+    }
 
     /** Default number of steps. */
     public static final int DEFAULT_STEPS = 100;
@@ -38,6 +55,11 @@ public record BoilOffInput(MixtureSpec fluid, Vessel vessel, Level level, double
         }
         if (device == null) {
             throw InvalidInputException.missing("boilOff.device", "expected the back pressure and coefficients");
+        }
+        storedMoles = storedMoles == null ? java.util.Optional.empty() : storedMoles.map(double[]::clone);
+        if (storedMoles.isPresent() && storedMoles.get().length != fluid.components().size()) {
+            throw InvalidInputException.invalid("boilOff.storedMoles", storedMoles.get().length + " values",
+                    "expected one mole amount per component (" + fluid.components().size() + ")");
         }
         InvalidInputException.requirePositive("boilOff.heat", heatW, "W");
         InvalidInputException.requirePositive("boilOff.relievingPressure", relievingPressurePa, "Pa abs");
