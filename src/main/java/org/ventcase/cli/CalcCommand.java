@@ -143,6 +143,9 @@ final class CalcCommand implements Callable<Integer> {
     }
 
     private static String fluid(RelievedFluid f) {
+        if (f.phase() == org.ventcase.relief.RelievedFluid.Phase.LIQUID) {
+            return String.format(Locale.ROOT, "M %.2f kg/kmol, Z %.4f, %.4g kg/m3", f.molarMass(), f.z(), f.density());
+        }
         return String.format(Locale.ROOT, "M %.2f kg/kmol, Z %.4f, k %.4f, %.4g kg/m3", f.molarMass(), f.z(),
                 f.kIdeal(), f.density());
     }

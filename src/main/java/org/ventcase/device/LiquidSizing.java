@@ -123,7 +123,8 @@ public final class LiquidSizing {
         OrificeSelection sel = OrificeTable.select(a0 * 1e-6, massFlowKgPerS);
         if (in.viscosityPaS().isEmpty()) {
             trace.add("No viscosity given: Kv = 1; orifice " + sel.designation());
-            warnings.add("No viscosity given: viscosity correction not applied (Kv = 1).");
+            warnings.add("No liquid viscosity given: the viscosity correction Kv = 1 was assumed; give the viscosity at "
+                    + "flowing temperature for a viscous liquid.");
             return new LiquidSizingResult(a0 * 1e-6, a0 * 1e-6, 1.0, OptionalDouble.empty(), in.kvForm(), sel, 0,
                     trace, warnings, SOURCE);
         }

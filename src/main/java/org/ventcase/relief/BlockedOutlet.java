@@ -82,10 +82,7 @@ public final class BlockedOutlet {
             double g = fp.density() / WATER_REFERENCE_DENSITY;
             String viscSource = in.liquidViscosityPaS().isPresent() ? "given by the user"
                     : "not given: Kv = 1 assumed";
-            if (in.liquidViscosityPaS().isEmpty()) {
-                warnings.add("No liquid viscosity given: the viscosity correction Kv = 1 was assumed; give the "
-                        + "viscosity at flowing temperature for a viscous liquid.");
-            }
+            // without a viscosity, LiquidSizing says once that Kv = 1 was assumed
             LiquidSizingResult ls = LiquidSizing.size(new LiquidSizingInput(q, g, p1, in.device().backPressurePa(),
                     in.liquidViscosityPaS(), in.device().kd(), in.device().kb(), in.device().kc(), in.kvForm()));
             warnings.addAll(ls.warnings());

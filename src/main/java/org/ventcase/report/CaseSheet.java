@@ -442,8 +442,11 @@ final class CaseSheet {
         rows.add(Row.of("Molar mass M", f("%.3f kg/kmol", fl.molarMass())));
         rows.add(Row.of("Compressibility Z (selected root)", f("%.5f", fl.z())));
         rows.add(Row.of("Real roots of the cubic", fl.realRootsText()));
-        rows.add(Row.of("k = Cp/Cv, ideal gas (used for sizing)", f("%.4f", fl.kIdeal())));
-        rows.add(Row.of("Real-fluid isentropic exponent", f("%.4f", fl.isentropicExponent())));
+        if (fl.phase() != org.ventcase.relief.RelievedFluid.Phase.LIQUID) {
+            // k and the isentropic exponent size gas flow; for a liquid they mean nothing
+            rows.add(Row.of("k = Cp/Cv, ideal gas (used for sizing)", f("%.4f", fl.kIdeal())));
+            rows.add(Row.of("Real-fluid isentropic exponent", f("%.4f", fl.isentropicExponent())));
+        }
         rows.add(Row.of("Density", u.plain(Kind.DENSITY, fl.density()) + " (" + fl.densityBasis().label() + ")"));
         fl.latentHeatJPerKg().ifPresent(l -> rows.add(Row.of("Latent heat", u.format(Kind.SPECIFIC_ENERGY, l)
                 + (fl.latentHeatDefinition().isEmpty() ? "" : " (" + fl.latentHeatDefinition() + ")"))));

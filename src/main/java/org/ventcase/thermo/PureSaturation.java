@@ -336,9 +336,10 @@ public final class PureSaturation {
         double dev = liq.density() / rackett - 1.0;
         if (Math.abs(dev) > RACKETT_WARNING) {
             warnings.add(String.format(Locale.US,
-                    "The %s liquid density (%.4g kg/m3) differs from the Rackett correlation (%.4g kg/m3, Z_RA from "
-                            + "%s) by %+.1f %%: a liquid inventory on this basis may be %s; compare the bases before "
-                            + "relying on it.", used.label(), liq.density(), rackett, Citations.rackett(component), 100 * dev,
+                    "The %s liquid density of %s at %.2f K (%.2f C) (%.4g kg/m3) differs from the Rackett correlation "
+                            + "(%.4g kg/m3, Z_RA from %s) by %+.1f %%: a liquid inventory on this basis may be %s; "
+                            + "compare the bases before relying on it.", used.label(), component.name(), t, t - 273.15,
+                    liq.density(), rackett, Citations.rackett(component), 100 * dev,
                     dev < 0 ? "understated" : "overstated"));
         }
         double dh = s.hV - s.hL;

@@ -211,4 +211,17 @@ class CliTest {
             assertFalse(all.contains("picocli WARN") || all.contains("null."), c + " --help:\n" + all);
         }
     }
+
+    @Test
+    void aLiquidReliefShowsNoGasPropertiesAndTheViscosityNoteOnce() throws Exception {
+        // seen: k = 1.31 and an isentropic exponent of 625 listed for relieved liquid ammonia, and the
+        // Kv = 1 note printed twice in different words
+        Run r = run("calc", "demo-cases/ammonia-storage.json");
+        assertEquals(0, r.code(), r.err());
+        String liquid = r.out().lines().filter(l -> l.contains("Relieved liquid")).findFirst().orElseThrow();
+        assertFalse(liquid.contains(" k "), liquid);
+        assertEquals(1, r.out().lines().filter(l -> l.contains("viscosity")).count(), r.out());
+        // the density warning says where it applies (the liquid after flashing through the valve)
+        assertTrue(r.out().contains("liquid density of ammonia at 246.34 K (-26.81 C)"), r.out());
+    }
 }
