@@ -146,6 +146,38 @@ public final class CaseValidator {
                 unit)));
     }
 
+    /**
+     * Saturated storage of one component needs a temperature below its critical temperature (the
+     * model's): the check the calculation would make, made here, so that a case 'check' passes is
+     * never refused by 'calc'.
+     */
+    private void saturatedBelowCritical(Optional<ValidatedCase.FluidModel> fluid,
+                                        Optional<ValidatedCase.StorageState> storage) {
+        if (fluid.isEmpty() || storage.isEmpty() || storage.get().mode() != ValidatedCase.StorageMode.SATURATED) {
+            return;
+        }
+        ValidatedCase.Composition c = fluid.get().composition();
+        int only = -1;
+        int present = 0;
+        for (int i = 0; i < c.fractions().length; i++) {
+            if (c.fractions()[i] > 0) {
+                present++;
+                only = i;
+            }
+        }
+        if (present != 1) {
+            return;
+        }
+        double tc = fluid.get().model().tc(only);
+        double t = storage.get().temperatureK();
+        if (t >= tc) {
+            problem("$.storage.temperature", kase.storage().temperature(), String.format(java.util.Locale.ROOT,
+                    "saturated storage needs a temperature below the critical temperature of %s (%.2f K, %.2f C): "
+                            + "above it there is no liquid; use mode 'gas-filled' or 'specified'",
+                    c.components().get(only).name(), tc, tc - 273.15));
+        }
+    }
+
     private Optional<Double> positive(String path, Optional<Double> v, String unit) {
         return v.flatMap(x -> attempt(path, () -> InvalidInputException.requirePositive(path, x, unit)));
     }
@@ -207,6 +239,7 @@ public final class CaseValidator {
         Optional<ValidatedCase.FluidModel> fluid = fluid();
         Optional<ValidatedCase.VesselModel> vessel = vessel(site);
         Optional<ValidatedCase.StorageState> storage = storage(vessel, site);
+        saturatedBelowCritical(fluid, storage);
         Optional<ValidatedCase.DeviceSpec> device = device();
         List<ValidatedCase.ScenarioSpec> scenarios = scenarios(vessel, storage, device);
         if (!problems.isEmpty()) {

@@ -84,12 +84,12 @@ public final class RelievingPressure {
         double maxSet = maxSetFraction * mawp;
         if (set > maxSet * (1 + 1e-12)) {
             if (in.setAboveLimitReason().isEmpty()) {
-                throw InvalidInputException.invalid("relief.setPressure", fmt(set) + " Pa gauge",
-                        "expected at most " + fmt(maxSet) + " Pa gauge (" + pct(maxSetFraction) + " of MAWP "
-                                + fmt(mawp) + " Pa gauge; " + setRule
+                throw InvalidInputException.invalid("relief.setPressure", fmt(set) + " kPa gauge",
+                        "expected at most " + fmt(maxSet) + " kPa gauge (" + pct(maxSetFraction) + " of MAWP "
+                                + fmt(mawp) + " kPa gauge; " + setRule
                                 + "), or give relief.setAboveLimitReason");
             }
-            warnings.add("Set pressure " + fmt(set) + " Pa gauge is " + pct(set / mawp) + " of MAWP, above the "
+            warnings.add("Set pressure " + fmt(set) + " kPa gauge is " + pct(set / mawp) + " of MAWP, above the "
                     + pct(maxSetFraction) + " limit (" + setRule + "); accepted because: "
                     + in.setAboveLimitReason().get());
         }
@@ -125,22 +125,23 @@ public final class RelievingPressure {
         double maxAccumulated = mawp + accumulation;
         double overpressure = maxAccumulated - set;
         if (!(overpressure > 0)) {
-            throw InvalidInputException.invalid("relief.setPressure", fmt(set) + " Pa gauge",
-                    "expected below MAWP + accumulation = " + fmt(maxAccumulated) + " Pa gauge, so the device can "
+            throw InvalidInputException.invalid("relief.setPressure", fmt(set) + " kPa gauge",
+                    "expected below MAWP + accumulation = " + fmt(maxAccumulated) + " kPa gauge, so the device can "
                             + "open before the vessel exceeds its allowable accumulated pressure");
         }
         double p1 = maxAccumulated + in.atmosphericPa();
         String rule = String.format(Locale.US,
-                "Accumulation on MAWP (%s) = %s Pa; P1 = MAWP + accumulation + Patm = %s + %s + %s = %s Pa abs; "
-                        + "overpressure above set = %s Pa (%.2f %% of set); %s",
+                "Accumulation on MAWP (%s) = %s kPa; P1 = MAWP + accumulation + Patm = %s + %s + %s = %s kPa abs; "
+                        + "overpressure above set = %s kPa (%.2f %% of set); %s",
                 accText, fmt(accumulation), fmt(mawp), fmt(accumulation), fmt(in.atmosphericPa()), fmt(p1),
                 fmt(overpressure), 100 * overpressure / set, setRule);
         return new RelievingPressureResult(p1, overpressure, 100 * overpressure / set, accumulation, maxAccumulated,
                 maxSetFraction, rule, SOURCE, warnings);
     }
 
+    /** A pressure in Pa as kPa with up to 6 significant digits, without trailing zeros: 1720000 -> "1720". */
     private static String fmt(double v) {
-        return String.format(Locale.US, "%.6g", v);
+        return new java.math.BigDecimal(String.format(Locale.US, "%.6g", v / 1e3)).stripTrailingZeros().toPlainString();
     }
 
     private static String pct(double f) {

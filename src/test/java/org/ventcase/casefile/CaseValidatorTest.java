@@ -267,4 +267,19 @@ class CaseValidatorTest {
                 && p.accepted().contains("0.05 to 40 m")), big.problems().toString());
         assertTrue(big.problems().stream().noneMatch(p -> p.path().startsWith("$.storage")), big.problems().toString());
     }
+
+    @Test
+    void saturatedStorageAboveTheCriticalTemperatureIsRefusedByCheckAsCalcWould() {
+        // seen: 'check' passed saturated propane at 150 C, which 'calc' then refused
+        String json;
+        try {
+            json = java.nio.file.Files.readString(java.nio.file.Path.of("demo-cases/propane-bullet-fire.json"))
+                    .replace("\"temperature\": \"20 C\"", "\"temperature\": \"150 C\"");
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        ValidationReport r = check(json);
+        assertTrue(r.problems().stream().anyMatch(p -> p.path().equals("$.storage.temperature")
+                && p.accepted().contains("critical temperature of propane")), r.problems().toString());
+    }
 }
