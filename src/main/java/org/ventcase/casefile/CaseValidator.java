@@ -193,7 +193,44 @@ public final class CaseValidator {
             }
             return Optional.empty();
         }
+        int limit = TEXT_LIMITS.getOrDefault(path, MAX_TEXT);
+        if (value.length() > limit) {
+            problem(path, value.substring(0, 40) + "... (" + value.length() + " characters)",
+                    "expected at most " + limit + " characters");
+            return Optional.empty();
+        }
+        int bad = malformedAt(value);
+        if (bad >= 0) {
+            problem(path, "text with an unpaired surrogate at character " + (bad + 1),
+                    "expected well-formed text (the file holds a broken character there; retype it)");
+            return Optional.empty();
+        }
         return Optional.of(value);
+    }
+
+    /** Longest text accepted in a field, characters (common practice, no source). */
+    static final int MAX_TEXT = 1000;
+
+    /** Shorter limits where a field is printed in a title block or a table cell. */
+    static final Map<String, Integer> TEXT_LIMITS = Map.of("$.identity.title", 200, "$.identity.tag", 60,
+            "$.identity.revision", 20, "$.identity.preparer", 100, "$.identity.checker", 100);
+
+    /** Index of the first unpaired UTF-16 surrogate, or -1. */
+    static int malformedAt(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            if (Character.isHighSurrogate(c)) {
+                if (i + 1 < s.length() && Character.isLowSurrogate(s.charAt(i + 1))) {
+                    i++;
+                    continue;
+                }
+                return i;
+            }
+            if (Character.isLowSurrogate(c)) {
+                return i;
+            }
+        }
+        return -1;
     }
 
     private <E> Optional<E> choice(String path, String value, Map<String, E> options, boolean required) {
@@ -294,6 +331,9 @@ public final class CaseValidator {
         // An unchecked case is the normal state of a first-pass basis: a missing or empty checker
         // means unchecked, and the sheet's sign-off block shows it so.
         String checker = id.checker() == null ? "" : id.checker().strip();
+        if (!checker.isEmpty() && text("$.identity.checker", checker, false, "").isEmpty()) {
+            checker = "";
+        }
         Optional<LocalDate> date = Optional.empty();
         if (id.date() == null) {
             missing("$.identity.date", "expected an ISO date yyyy-mm-dd");

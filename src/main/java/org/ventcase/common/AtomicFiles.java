@@ -26,6 +26,28 @@ public final class AtomicFiles {
     private AtomicFiles() {
     }
 
+    /**
+     * Temporary files being written now. A JVM shutdown hook (Ctrl-C, SIGTERM) deletes them, so an
+     * interrupted write leaves nothing behind; a killed process (SIGKILL) cannot run it, and the
+     * next write to the same target removes what it left ({@link #removeStaleTemps}).
+     */
+    private static final java.util.Set<Path> PENDING = java.util.concurrent.ConcurrentHashMap.newKeySet();
+
+    static {
+        Runtime.getRuntime().addShutdownHook(new Thread(AtomicFiles::deletePending, "ventcase-temp-cleanup"));
+    }
+
+    /** Deletes the temporary files of writes still in progress (the shutdown hook's work). */
+    static void deletePending() {
+        for (Path p : PENDING) {
+            try {
+                Files.deleteIfExists(p);
+            } catch (IOException ignored) {
+                // the next write to the same target removes it
+            }
+        }
+    }
+
     /** What writes the content. */
     @FunctionalInterface
     public interface Writer {
@@ -55,8 +77,11 @@ public final class AtomicFiles {
         }
         removeStaleTemps(dir, abs.getFileName().toString());
         Path tmp = null;
+        Path pending = null;
         try {
             tmp = newTemp(dir, abs.getFileName().toString());
+            pending = tmp;
+            PENDING.add(tmp);
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING);
                  OutputStream out = Channels.newOutputStream(ch)) {
                 writer.write(out);
@@ -70,6 +95,9 @@ public final class AtomicFiles {
             }
             tmp = null;
         } finally {
+            if (pending != null) {
+                PENDING.remove(pending);
+            }
             if (tmp != null) {
                 try {
                     Files.deleteIfExists(tmp);

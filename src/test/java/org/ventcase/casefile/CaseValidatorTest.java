@@ -282,4 +282,16 @@ class CaseValidatorTest {
         assertTrue(r.problems().stream().anyMatch(p -> p.path().equals("$.storage.temperature")
                 && p.accepted().contains("critical temperature of propane")), r.problems().toString());
     }
+
+    @Test
+    void overlongTextAndBrokenCharactersAreRefusedWithTheLimit() {
+        // seen: a 100,000-character title made 'sheet' run for minutes; a lone surrogate passed check and
+        // then failed the PDF's font (limits: common practice, no source)
+        ValidationReport longTitle = check(Fixtures.bulletWith("\"title\": \"", "\"title\": \"" + "x".repeat(100_000)));
+        assertTrue(longTitle.problems().stream().anyMatch(p -> p.path().equals("$.identity.title")
+                && p.accepted().contains("at most 200 characters")), longTitle.problems().toString());
+        ValidationReport broken = check(Fixtures.bulletWith("\"tag\": \"", "\"tag\": \"\\ud800"));
+        assertTrue(broken.problems().stream().anyMatch(p -> p.path().equals("$.identity.tag")
+                && p.accepted().contains("well-formed")), broken.problems().toString());
+    }
 }

@@ -72,4 +72,40 @@ class SpecialFilesTest {
         assertTrue(Files.exists(other), "another target's file is not ours to remove");
         assertEquals("{}", Files.readString(target));
     }
+
+    @Test
+    void anInterruptedWriteLeavesNoTemporaryFile() throws Exception {
+        // the shutdown hook's work (Ctrl-C during a write): the temporary file of a write in progress goes
+        Path target = dir.resolve("sheet.pdf");
+        java.util.concurrent.CountDownLatch inside = new java.util.concurrent.CountDownLatch(1);
+        java.util.concurrent.CountDownLatch release = new java.util.concurrent.CountDownLatch(1);
+        Thread w = new Thread(() -> {
+            try {
+                AtomicFiles.write(target, out -> {
+                    out.write(1);
+                    inside.countDown();
+                    try {
+                        release.await();
+                    } catch (InterruptedException e) {
+                        Thread.currentThread().interrupt();
+                    }
+                    throw new java.io.IOException("interrupted for the test");
+                });
+            } catch (java.io.IOException expected) {
+                // the write fails, as an interrupted one would
+            }
+        });
+        w.start();
+        inside.await();
+        try (var s = Files.list(dir)) {
+            assertEquals(1, s.filter(p -> p.getFileName().toString().endsWith(".tmp")).count(), "a write in progress");
+        }
+        AtomicFiles.deletePending();
+        try (var s = Files.list(dir)) {
+            assertEquals(0, s.count(), "the hook removed the temporary file");
+        }
+        release.countDown();
+        w.join();
+        assertTrue(Files.notExists(target));
+    }
 }
