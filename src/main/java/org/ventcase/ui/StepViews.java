@@ -420,7 +420,7 @@ final class StepViews {
             CaseSummary.ScenarioRow r = s.scenarios().get(i);
             int row = i + 1;
             boolean gov = s.governing().isPresent() && s.governing().get() == i;
-            Label name = new Label((gov ? "\u25B6 " : "") + r.label());
+            Label name = new Label(r.label() + (gov ? " " + Messages.get("results.governingMark") : ""));
             if (gov) {
                 name.getStyleClass().add("governing");
             }
@@ -442,6 +442,7 @@ final class StepViews {
             }
         }
         out.getChildren().add(t);
+        relievedTable(out, s, u);
         Label gov = new Label();
         gov.setId("governing");
         gov.setWrapText(true);
@@ -497,6 +498,56 @@ final class StepViews {
     private String deferralText() {
         return Texts.deferral(vm.valueAt("$.identity.tag"),
                 vm.validated().map(ValidatedCase::inputHash).orElse("(computed when the case is complete)"));
+    }
+
+    /** The relieved fluid of each computed scenario: what a reviewer checks beside the load. */
+    private static void relievedTable(javafx.scene.layout.VBox out, CaseSummary s, UnitSystem u) {
+        if (s.scenarios().stream().noneMatch(r -> r.relieved().isPresent())) {
+            return;
+        }
+        Label h = new Label(Messages.get("results.relieved"));
+        h.getStyleClass().add("form-heading");
+        out.getChildren().add(h);
+        GridPane t = new GridPane();
+        t.setId("relieved-table");
+        t.getStyleClass().add("results-table");
+        t.setHgap(14);
+        t.setVgap(4);
+        String[] cols = {"scenario", "phase", "molarMass", "z", "k", "density", "latent", "margin"};
+        for (int c = 0; c < cols.length; c++) {
+            Label l = new Label(Messages.get("results.col." + cols[c]));
+            l.getStyleClass().add("col-head");
+            t.add(l, c, 0);
+        }
+        int row = 1;
+        for (CaseSummary.ScenarioRow r : s.scenarios()) {
+            if (r.relieved().isEmpty()) {
+                continue;
+            }
+            CaseSummary.ScenarioRow.Relieved f = r.relieved().get();
+            t.add(new Label(r.label()), 0, row);
+            t.add(new Label(Messages.get(f.liquid() ? "results.phase.liquid" : "results.phase.vapour")), 1, row);
+            t.add(new Label(String.format(Locale.ROOT, "%.2f kg/kmol", f.molarMass())), 2, row);
+            t.add(new Label(String.format(Locale.ROOT, "%.4f", f.z())), 3, row);
+            t.add(new Label(f.kIdeal().isPresent() ? String.format(Locale.ROOT, "%.4f", f.kIdeal().getAsDouble())
+                    : Messages.get("results.notApplicable")), 4, row);
+            t.add(new Label(density(f.densityKgM3(), u)), 5, row);
+            t.add(new Label(f.latentHeatJPerKg().isPresent() ? latent(f.latentHeatJPerKg().getAsDouble(), u)
+                    : Messages.get("results.notApplicable")), 6, row);
+            t.add(new Label(r.orificeMarginPercent().isPresent()
+                    ? String.format(Locale.ROOT, "%+.0f %%", r.orificeMarginPercent().getAsDouble())
+                    : Messages.get("results.notApplicable")), 7, row);
+            row++;
+        }
+        out.getChildren().add(t);
+    }
+
+    static String density(double kgm3, UnitSystem u) {
+        return u == UnitSystem.SI ? g(kgm3) + " kg/m3" : g(kgm3 * 0.0624279606) + " lb/ft3";
+    }
+
+    static String latent(double jkg, UnitSystem u) {
+        return u == UnitSystem.SI ? g(jkg / 1e3) + " kJ/kg" : g(jkg / 2326.0) + " Btu/lb";
     }
 
     private static String opt(OptionalDouble v, java.util.function.DoubleFunction<String> f) {

@@ -67,7 +67,28 @@ public record CaseSummary(Optional<InventoryRow> inventory, String inventoryNote
     public record ScenarioRow(String label, String type, boolean computed, String note,
                               OptionalDouble relievingPressurePa, OptionalDouble relievingTemperatureK,
                               OptionalDouble loadKgPerS, OptionalDouble heatInputW, OptionalDouble wettedAreaM2,
-                              OptionalDouble requiredAreaM2, Optional<String> orifice) {
+                              OptionalDouble requiredAreaM2, Optional<String> orifice, Optional<Relieved> relieved,
+                              OptionalDouble orificeMarginPercent) {
+
+        /** Without the relieved fluid and the margin (a row that was not computed). */
+        public ScenarioRow(String label, String type, boolean computed, String note,
+                           OptionalDouble relievingPressurePa, OptionalDouble relievingTemperatureK,
+                           OptionalDouble loadKgPerS, OptionalDouble heatInputW, OptionalDouble wettedAreaM2,
+                           OptionalDouble requiredAreaM2, Optional<String> orifice) {
+            this(label, type, computed, note, relievingPressurePa, relievingTemperatureK, loadKgPerS, heatInputW,
+                    wettedAreaM2, requiredAreaM2, orifice, Optional.empty(), OptionalDouble.empty());
+        }
+
+        /**
+         * The relieved fluid at relieving conditions, as the sheet lists it.
+         *
+         * @param liquid        a liquid is relieved (then k means nothing and is empty)
+         * @param kIdeal        ideal-gas Cp/Cv, the k of the API 520 gas equation
+         * @param latentHeatJPerKg latent heat where the scenario has one
+         */
+        public record Relieved(boolean liquid, double molarMass, double z, OptionalDouble kIdeal, double densityKgM3,
+                               OptionalDouble latentHeatJPerKg) {
+        }
 
         /** A row that was not computed, with the reason. */
         public static ScenarioRow notComputed(String label, String type, String reason) {

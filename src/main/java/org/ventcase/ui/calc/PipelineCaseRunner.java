@@ -108,7 +108,12 @@ public final class PipelineCaseRunner implements CaseRunner {
             rows.add(new CaseSummary.ScenarioRow(s.label(), s.type().key(), true, s.sizingEquation(),
                     s.relievingPressurePa(), s.relievingTemperatureK(), s.reliefLoadKgPerS(), s.heatInputW(),
                     wettedFire ? OptionalDouble.of(r.vessel().fire().area()) : OptionalDouble.empty(),
-                    s.requiredAreaM2(), s.orifice().map(o -> o.designation())));
+                    s.requiredAreaM2(), s.orifice().map(o -> o.designation()), s.relievedFluid().map(f -> {
+                        boolean liquid = f.phase() == org.ventcase.relief.RelievedFluid.Phase.LIQUID;
+                        return new CaseSummary.ScenarioRow.Relieved(liquid, f.molarMass(), f.z(),
+                                liquid ? OptionalDouble.empty() : OptionalDouble.of(f.kIdeal()), f.density(),
+                                f.latentHeatJPerKg());
+                    }), s.orifice().map(o -> OptionalDouble.of(o.marginPercent())).orElse(OptionalDouble.empty())));
         }
         LinkedHashSet<String> warnings = new LinkedHashSet<>();
         for (CaseResult.CaseWarning w : r.warnings()) {

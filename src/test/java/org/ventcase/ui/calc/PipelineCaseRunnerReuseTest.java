@@ -23,4 +23,20 @@ class PipelineCaseRunnerReuseTest {
         ValidatedCase other = CaseFiles.load(Path.of("demo-cases/hexane-drum.json"));
         assertNotSame(first, runner.resultOf(other, CaseInputs.from(other)), "other inputs: computed anew");
     }
+
+    @Test
+    void theResultsStepRowsCarryTheRelievedFluidAndTheOrificeMargin() {
+        // seen: the results step omitted latent heat, molar mass, Z, k, vapour density and the margin
+        PipelineCaseRunner runner = new PipelineCaseRunner();
+        ValidatedCase kase = CaseFiles.load(Path.of("demo-cases/ammonia-storage.json"));
+        CaseSummary s = runner.run(kase, (f, m) -> { }, () -> false);
+        CaseSummary.ScenarioRow fire = s.scenarios().get(0);
+        CaseSummary.ScenarioRow.Relieved v = fire.relieved().orElseThrow();
+        org.junit.jupiter.api.Assertions.assertFalse(v.liquid());
+        org.junit.jupiter.api.Assertions.assertTrue(v.kIdeal().isPresent() && v.latentHeatJPerKg().isPresent());
+        org.junit.jupiter.api.Assertions.assertTrue(fire.orificeMarginPercent().getAsDouble() >= 0);
+        // the blocked-outlet scenario relieves liquid: no k
+        CaseSummary.ScenarioRow.Relieved l = s.scenarios().get(1).relieved().orElseThrow();
+        org.junit.jupiter.api.Assertions.assertTrue(l.liquid() && l.kIdeal().isEmpty());
+    }
 }
