@@ -65,8 +65,16 @@ public enum EosVariant {
     /** The variant used where a case or command names none. */
     public static final EosVariant DEFAULT = PRTWU;
 
+    /** The variants in the order they are offered: the default first (UI choices, messages). */
+    public static final List<EosVariant> OFFERED = List.of(PRTWU, PR78, PR76, SRK, RK, VDW);
+
     /** The names accepted on input, for messages: every variant once, default first. */
     public static final String ACCEPTED = "PR-Twu (default), PR78 (= PR), PR76, SRK, RK, vdW";
+
+    /** The names of {@link #OFFERED}, as typed in a case file or on the command line. */
+    public static List<String> offeredIds() {
+        return OFFERED.stream().map(EosVariant::id).toList();
+    }
 
     private final String displayName;
     private final double sigma;

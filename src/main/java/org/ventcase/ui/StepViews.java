@@ -142,7 +142,7 @@ final class StepViews {
         row.setAlignment(Pos.CENTER_LEFT);
         f.span(row);
         f.heading(Messages.plain("step.fluid"));
-        f.choice(vm.choice("$.fluid.eos", List.of("PR-Twu", "PR78", "PR76", "SRK", "RK", "vdW")), false);
+        f.choice(vm.choice("$.fluid.eos", org.ventcase.thermo.EosVariant.offeredIds()), false);
         f.choice(vm.choice("$.fluid.densityBasis", List.of("translated", "cubic")), false);
         return f.grid();
     }

@@ -76,4 +76,16 @@ class EosVariantTest {
         // Hand calculation: 0.37464 + 0.925356 - 0.097171 = 1.202825
         assertEquals(1.202825, MCorrelation.PENG_ROBINSON_1976.m(w), 1e-6);
     }
+
+    @Test
+    void everyVariantIsOfferedOnceAndEveryOfferedNameParsesBackToIt() {
+        // one registry for the names: the UI choices and messages read EosVariant.OFFERED
+        org.junit.jupiter.api.Assertions.assertEquals(java.util.EnumSet.allOf(EosVariant.class),
+                java.util.EnumSet.copyOf(EosVariant.OFFERED));
+        org.junit.jupiter.api.Assertions.assertEquals(EosVariant.DEFAULT, EosVariant.OFFERED.get(0));
+        for (EosVariant v : EosVariant.OFFERED) {
+            assertSame(v, EosVariant.parse("eos", v.id()));
+            org.junit.jupiter.api.Assertions.assertTrue(EosVariant.ACCEPTED.contains(v.id()), v.id());
+        }
+    }
 }
