@@ -226,7 +226,14 @@ public final class PTFlash {
                     // (seen: a trace of ethylbenzene in nitrogen with isobutylene, |g| stuck near 1e-6).
                     // Substitution from the K-values before Newton converges there, linearly but surely.
                     System.arraycopy(lnKBeforeNewton, 0, lnK, 0, n);
-                    beta = finishBySubstitution(at, p, z, lnK, x, y, s);
+                    try {
+                        beta = finishBySubstitution(at, p, z, lnK, x, y, s);
+                    } catch (ConvergenceException e2) {
+                        throw new ConvergenceException("PT flash (Newton, then substitution)", s.newton + s.ss,
+                                e2.residual(), String.format(Locale.US, "T = %.6g K, P = %.6g Pa: the feed is unstable but "
+                                        + "no two-phase split converges; it may split into three phases (two liquids and "
+                                        + "a vapour), which Ventcase does not compute", t, p));
+                    }
                 }
             }
             if (Double.isNaN(beta)) {
