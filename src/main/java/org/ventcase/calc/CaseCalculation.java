@@ -170,9 +170,13 @@ public final class CaseCalculation {
         double steps = n + 2.0;
         monitor.progress(0, "Inventory at storage conditions");
         check(monitor);
+        // each scenario's relieving pressure, computed once and handed to its scenario
         double maxP1 = 0;
+        List<RelievingPressureResult> p1s = new ArrayList<>();
         for (CaseInput.Scenario s : in.scenarios()) {
-            maxP1 = Math.max(maxP1, RelievingPressure.compute(s.relieving()).relievingPressurePa());
+            RelievingPressureResult rp = RelievingPressure.compute(s.relieving());
+            p1s.add(rp);
+            maxP1 = Math.max(maxP1, rp.relievingPressurePa());
         }
         Storage storage = in.storage();
         if (storage instanceof Storage.Saturated sat) {
@@ -185,7 +189,7 @@ public final class CaseCalculation {
             monitor.progress((results.size() + 1) / steps, "Scenario " + (results.size() + 1) + " of " + n + ": "
                     + s.label());
             check(monitor);
-            results.add(runOne(ctx, s));
+            results.add(runOne(ctx, s, p1s.get(results.size())));
         }
         monitor.progress((n + 1) / steps, "Phase envelope");
         check(monitor);
@@ -334,11 +338,10 @@ public final class CaseCalculation {
         final LinkedHashSet<String> warnings = new LinkedHashSet<>();
     }
 
-    private static CaseResult.ScenarioResult runOne(Context c, CaseInput.Scenario s) {
+    private static CaseResult.ScenarioResult runOne(Context c, CaseInput.Scenario s, RelievingPressureResult rp) {
         Out o = new Out();
         Optional<String> failure = Optional.empty();
         try {
-            RelievingPressureResult rp = RelievingPressure.compute(s.relieving());
             o.p1 = OptionalDouble.of(rp.relievingPressurePa());
             o.warnings.addAll(rp.warnings());
             if (s instanceof CaseInput.WettedFire f) {
@@ -628,15 +631,7 @@ public final class CaseCalculation {
     }
 
     private static TraceStep relievingStep(org.ventcase.relief.RelievingPressureInput in, RelievingPressureResult rp) {
-        return TraceStep.of("Relieving pressure").equation("P1 = set pressure + allowable overpressure + P_atm")
-                .source(rp.source())
-                .in("Set pressure", "%.1f kPa gauge", in.setPressureGaugePa() / 1e3)
-                .in("MAWP", "%.1f kPa gauge", in.mawpGaugePa() / 1e3)
-                .in("Atmospheric pressure", "%.3f kPa abs", in.atmosphericPa() / 1e3)
-                .out("Overpressure above set", "%.1f kPa (%.1f %% of set)",
-                        rp.overpressurePa() / 1e3, rp.overpressurePercentOfSet())
-                .out("P1", "%.1f kPa abs", rp.relievingPressurePa() / 1e3)
-                .note(rp.ruleApplied()).build();
+        return RelievingPressure.step(in, rp);
     }
 
     private static TraceStep factorStep(EnvironmentFactor env, String at) {

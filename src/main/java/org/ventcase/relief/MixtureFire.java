@@ -68,13 +68,7 @@ public final class MixtureFire {
         RelievingPressureResult rp = RelievingPressure.compute(in.relieving());
         warnings.addAll(rp.warnings());
         double p1 = rp.relievingPressurePa();
-        trace.add(TraceStep.of("Relieving pressure").equation("P1 = MAWP + allowable accumulation + P_atm")
-                .source(rp.source())
-                .in("Set pressure", "%.1f kPa gauge", in.relieving().setPressureGaugePa() / 1e3)
-                .in("MAWP", "%.1f kPa gauge", in.relieving().mawpGaugePa() / 1e3)
-                .in("Atmospheric pressure", "%.3f kPa abs", in.relieving().atmosphericPa() / 1e3)
-                .out("Accumulation", "%.1f kPa", rp.accumulationPa() / 1e3)
-                .out("P1", ScenarioSupport.kpa(p1) + " abs").note(rp.ruleApplied()).build());
+        trace.add(RelievingPressure.step(in.relieving(), rp));
 
         LevelState vs = LevelState.of(in.vessel(), in.level(), in.exposure());
         trace.add(TraceStep.of("Vessel and fire-exposed wetted area")

@@ -147,4 +147,22 @@ public final class RelievingPressure {
     private static String pct(double f) {
         return String.format(Locale.US, "%.1f %%", 100 * f);
     }
+
+    /**
+     * The calculation step of the relieving pressure, as every scenario prints it (one text for
+     * all): P1 = MAWP + allowable accumulation + P_atm, with the overpressure above the set pressure.
+     */
+    public static org.ventcase.common.TraceStep step(RelievingPressureInput in, RelievingPressureResult rp) {
+        return org.ventcase.common.TraceStep.of("Relieving pressure")
+                .equation("P1 = MAWP + allowable accumulation + P_atm")
+                .source(rp.source())
+                .in("Set pressure", "%.1f kPa gauge", in.setPressureGaugePa() / 1e3)
+                .in("MAWP", "%.1f kPa gauge", in.mawpGaugePa() / 1e3)
+                .in("Atmospheric pressure", "%.3f kPa abs", in.atmosphericPa() / 1e3)
+                .out("Accumulation", "%.1f kPa", rp.accumulationPa() / 1e3)
+                .out("Overpressure above set", "%.1f kPa (%.1f %% of set)", rp.overpressurePa() / 1e3,
+                        rp.overpressurePercentOfSet())
+                .out("P1", "%.1f kPa abs", rp.relievingPressurePa() / 1e3)
+                .note(rp.ruleApplied()).build();
+    }
 }

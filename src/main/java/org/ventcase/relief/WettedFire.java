@@ -50,15 +50,7 @@ public final class WettedFire {
         RelievingPressureResult rp = RelievingPressure.compute(in.relieving());
         warnings.addAll(rp.warnings());
         double p1 = rp.relievingPressurePa();
-        trace.add(TraceStep.of("Relieving pressure").equation("P1 = MAWP + allowable accumulation + P_atm")
-                .source(rp.source())
-                .in("Set pressure", kpag(in.relieving().setPressureGaugePa()))
-                .in("MAWP", kpag(in.relieving().mawpGaugePa()))
-                .in("Atmospheric pressure", kpa(in.relieving().atmosphericPa()) + " abs")
-                .out("Accumulation", "%.1f kPa", rp.accumulationPa() / 1e3)
-                .out("Overpressure above set", "%.1f kPa (%.1f %% of set)",
-                        rp.overpressurePa() / 1e3, rp.overpressurePercentOfSet())
-                .out("P1", kpa(p1) + " abs").note(rp.ruleApplied()).build());
+        trace.add(RelievingPressure.step(in.relieving(), rp));
 
         // 2. Vessel at level
         LevelState vs = LevelState.of(in.vessel(), in.level(), in.exposure());
