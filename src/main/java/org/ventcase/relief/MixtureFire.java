@@ -99,8 +99,12 @@ public final class MixtureFire {
         if (b.temperatureK() / tcMix > 0.9) {
             warnings.add(String.format(Locale.US, "Relieving temperature is at %.3f of the liquid's pseudo-critical "
                     + "temperature (Kay's rule): near the critical point the latent heat falls quickly and the fire "
-                    + "load rises; a transient method (the near-critical scenario or boil-off simulation) may be needed.",
-                    b.temperatureK() / tcMix));
+                    + "load rises; a transient method (the near-critical scenario or boil-off simulation) may be needed. "
+                    + "There a cubic equation's vapour density and latent heat also lose accuracy%s.",
+                    b.temperatureK() / tcMix, spec.eos() == org.ventcase.thermo.EosVariant.PRTWU
+                            ? " (the default model against reference equations at Tr 0.925: vapour density up to 4 % "
+                                    + "high, latent heat up to 4 % low, docs/accuracy.md)"
+                            : ""));
         }
         double liquidMass = vs.liquidVolume() * b.liquidProps().density();
         trace.add(TraceStep.of("Relieving temperature and latent heat")
