@@ -45,13 +45,25 @@ final class ScenarioSupport {
     }
 
     static TraceStep expansionStep(IsenthalpicExpansion.Result e) {
-        return TraceStep.of("Temperature after expansion to the back pressure").equation(e.equation())
-                .source("first law, steady adiabatic flow without work: isenthalpic (common practice)")
-                .out("T2", kelvinC(e.downstreamTemperatureK()))
-                .out("Vapour fraction after expansion", "%.4f", e.vapourFraction())
-                .out("Minimum design metal temperature", e.minimumDesignMetalTemperatureK().isPresent()
-                        ? kelvinC(e.minimumDesignMetalTemperatureK().getAsDouble()) : "not given (no check)")
-                .build();
+        TraceStep.Builder b = TraceStep.of("Temperature after expansion to the back pressure").equation(e.equation())
+                .source("first law, steady adiabatic flow without work: isenthalpic (common practice)");
+        if (e.minimumDesignMetalTemperatureK().isPresent()) {
+            b.in("Minimum design metal temperature of the outlet",
+                    kelvinC(e.minimumDesignMetalTemperatureK().getAsDouble()));
+        }
+        b.out("T2", kelvinC(e.downstreamTemperatureK()))
+                .out("Vapour fraction after expansion", "%.4f", e.vapourFraction());
+        if (e.minimumDesignMetalTemperatureK().isPresent()) {
+            double mdmt = e.minimumDesignMetalTemperatureK().getAsDouble();
+            b.out("Cold-relief check", e.belowMdmt()
+                    ? "T2 = " + kelvinC(e.downstreamTemperatureK()) + " is below the MDMT " + kelvinC(mdmt)
+                            + ": brittle-fracture caution (see the warnings)"
+                    : "T2 = " + kelvinC(e.downstreamTemperatureK()) + " is above the MDMT " + kelvinC(mdmt)
+                            + ": no cold-relief concern");
+        } else {
+            b.note("No minimum design metal temperature given for the outlet: the cold-relief check is not made.");
+        }
+        return b.build();
     }
 
     static String kpa(double pa) {

@@ -20,7 +20,9 @@ public final class Texts {
     /** The code-deferral block with the tag and input hash filled in. */
     public static String deferral(String tag, String inputHash) {
         return Templates.text("code-deferral").orElseThrow().strip().replace("{tag}", tag.isBlank() ? "this vessel" : tag)
-                .replace("{inputHash}", inputHash).replaceAll("(?<!\\n)\\n(?!\\n)", " ");
+                .replace("{inputHash}", inputHash).replaceAll("(?<!\\n)\\n(?!\\n)", " ")
+                // on screen it is not a sheet: the same words for the results shown
+                .replace("This sheet is", "These results are").replace("Where this sheet and", "Where these results and");
     }
 
     /** This build's version. */
