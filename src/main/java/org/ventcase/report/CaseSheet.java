@@ -563,7 +563,7 @@ final class CaseSheet {
         List<Figure.Marker> markers = new ArrayList<>();
         markers.add(new Figure.Marker("storage: " + u.plain(Kind.TEMPERATURE, inv.temperatureK()) + ", "
                 + u.plain(Kind.PRESSURE_ABS, inv.pressurePa()), u.value(Kind.TEMPERATURE, inv.temperatureK()),
-                u.value(Kind.PRESSURE_ABS, inv.pressurePa()), false));
+                u.value(Kind.PRESSURE_ABS, inv.pressurePa()), false, Figure.Marker.Shape.SQUARE));
         // one marker per distinct relieving point (scenarios at the same T1 and P1 share it), at most three
         java.util.Map<String, List<Integer>> at = new java.util.LinkedHashMap<>();
         java.util.Map<String, double[]> where = new java.util.HashMap<>();
@@ -591,7 +591,8 @@ final class CaseSheet {
                     governing.contains(label)));
         });
         e.criticalPoint().ifPresent(c -> markers.add(new Figure.Marker("critical point",
-                u.value(Kind.TEMPERATURE, c.temperatureK()), u.value(Kind.PRESSURE_ABS, c.pressurePa()), false)));
+                u.value(Kind.TEMPERATURE, c.temperatureK()), u.value(Kind.PRESSURE_ABS, c.pressurePa()), false,
+                Figure.Marker.Shape.DIAMOND)));
         return new Figure.LineChart("Phase envelope of the stored liquid's composition (" + in.fluid().variant()
                 .displayName() + ", k_ij as listed) with the storage point and the relieving points (the vapour "
                 + "relieved at P1 is in equilibrium with the liquid at its bubble point).",

@@ -140,7 +140,7 @@ final class ChartDrawing {
         }
         for (Figure.Marker mk : ch.markers()) {
             float[] p = m.at(mk.x(), mk.y());
-            symbol(c, p[0], p[1], mk.filled());
+            symbol(c, p[0], p[1], mk.filled(), mk.shape());
         }
         if (ch.markers().isEmpty()) {
             return;
@@ -187,16 +187,28 @@ final class ChartDrawing {
         c.strokeRect(kx, ky, kw, kh, 0.4f, PdfCanvas.RULE);
         float ly = ky + kh - 11;
         for (Figure.Marker mk : ch.markers()) {
-            symbol(c, kx + 9, ly + 2.5f, mk.filled());
+            symbol(c, kx + 9, ly + 2.5f, mk.filled(), mk.shape());
             c.text(mk.label(), kx + 17, ly, c.regular, TICK_SIZE, PdfCanvas.INK);
             ly -= 10;
         }
     }
 
-    private static void symbol(PdfCanvas c, float x, float y, boolean filled) throws IOException {
+    private static void symbol(PdfCanvas c, float x, float y, boolean filled, Figure.Marker.Shape shape)
+            throws IOException {
         c.cs.setStrokingColor(PdfCanvas.INK[0], PdfCanvas.INK[1], PdfCanvas.INK[2]);
         c.cs.setLineWidth(0.9f);
-        c.circlePath(x, y, 3.2f);
+        float r = 3.2f;
+        switch (shape) {
+            case SQUARE -> c.cs.addRect(x - 0.85f * r, y - 0.85f * r, 1.7f * r, 1.7f * r);
+            case DIAMOND -> {
+                c.cs.moveTo(x, y + 1.2f * r);
+                c.cs.lineTo(x + 1.2f * r, y);
+                c.cs.lineTo(x, y - 1.2f * r);
+                c.cs.lineTo(x - 1.2f * r, y);
+                c.cs.closePath();
+            }
+            default -> c.circlePath(x, y, r);
+        }
         if (filled) {
             c.cs.setNonStrokingColor(PdfCanvas.FIRE[0], PdfCanvas.FIRE[1], PdfCanvas.FIRE[2]);
         } else {

@@ -133,12 +133,23 @@ public sealed interface Figure permits Figure.VesselSketch, Figure.LineChart, Fi
      * @param y      y in axis units
      * @param filled filled (e.g. governing) or open (e.g. case point) symbol
      */
-    record Marker(String label, double x, double y, boolean filled) {
+    record Marker(String label, double x, double y, boolean filled, Shape shape) {
         public Marker {
             Objects.requireNonNull(label, "label");
+            Objects.requireNonNull(shape, "shape");
             if (!Double.isFinite(x) || !Double.isFinite(y)) {
                 throw new IllegalArgumentException(label + ": marker not finite");
             }
+        }
+
+        /** A round marker. */
+        public Marker(String label, double x, double y, boolean filled) {
+            this(label, x, y, filled, Shape.CIRCLE);
+        }
+
+        /** The symbol drawn, so that different kinds of point are told apart without colour. */
+        public enum Shape {
+            CIRCLE, SQUARE, DIAMOND
         }
     }
 
