@@ -224,4 +224,15 @@ class CliTest {
         // the density warning says where it applies (the liquid after flashing through the valve)
         assertTrue(r.out().contains("liquid density of ammonia at 246.34 K (-26.81 C)"), r.out());
     }
+
+    @Test
+    void calcPrintsInTheChosenUnitSystem() throws Exception {
+        Run us = run("calc", "demo-cases/propane-bullet-fire.json", "--units", "us");
+        assertEquals(0, us.code(), us.err());
+        assertTrue(us.out().contains(" psia [") && us.out().contains(" lb/h [") && us.out().contains(" in2 ["),
+                us.out());
+        Run bad = run("calc", "demo-cases/propane-bullet-fire.json", "--units", "imperial");
+        assertEquals(2, bad.code());
+        assertTrue((bad.err() + bad.out()).contains("--units"), bad.err() + bad.out());
+    }
 }
