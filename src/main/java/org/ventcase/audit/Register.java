@@ -198,32 +198,13 @@ public record Register(String origin, List<Optional<RegisterColumn>> columns, Li
         RegisterColumn best = null;
         int bestD = 3;
         for (RegisterColumn c : RegisterColumn.values()) {
-            int d = edits(n, c.header().toLowerCase(java.util.Locale.ROOT));
+            int d = org.ventcase.common.Strings.editDistance(n, c.header().toLowerCase(java.util.Locale.ROOT));
             if (d < bestD) {
                 bestD = d;
                 best = c;
             }
         }
         return Optional.ofNullable(best);
-    }
-
-    private static int edits(String a, String b) {
-        int[] prev = new int[b.length() + 1];
-        int[] cur = new int[b.length() + 1];
-        for (int j = 0; j <= b.length(); j++) {
-            prev[j] = j;
-        }
-        for (int i = 1; i <= a.length(); i++) {
-            cur[0] = i;
-            for (int j = 1; j <= b.length(); j++) {
-                int cost = a.charAt(i - 1) == b.charAt(j - 1) ? 0 : 1;
-                cur[j] = Math.min(Math.min(cur[j - 1] + 1, prev[j] + 1), prev[j - 1] + cost);
-            }
-            int[] t = prev;
-            prev = cur;
-            cur = t;
-        }
-        return prev[b.length()];
     }
 
     private static String requiredList() {

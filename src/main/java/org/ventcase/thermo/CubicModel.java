@@ -686,27 +686,23 @@ public final class CubicModel {
 
     /** d c(T, x)/dT of a composition, m3/(mol K); zero for a constant translation. */
     public double volumeShiftSlope(double t, double[] x) {
-        if (shift == null || !shiftVaries) {
-            return 0.0;
-        }
-        double d = 0;
-        for (int i = 0; i < x.length; i++) {
-            if (x[i] != 0) {
-                d += x[i] * shift[i].dcdT(t);
-            }
-        }
-        return d;
+        return varyingShiftSum(x, tr -> tr.dcdT(t));
     }
 
     /** d2 c(T, x)/dT2 of a composition, m3/(mol K2); zero for a constant translation. */
     public double volumeShiftCurvature(double t, double[] x) {
+        return varyingShiftSum(x, tr -> tr.d2cdT2(t));
+    }
+
+    /** sum_i x_i f(translation_i), zero where the translation does not vary with T. */
+    private double varyingShiftSum(double[] x, java.util.function.ToDoubleFunction<VolumeTranslation> f) {
         if (shift == null || !shiftVaries) {
             return 0.0;
         }
         double d = 0;
         for (int i = 0; i < x.length; i++) {
             if (x[i] != 0) {
-                d += x[i] * shift[i].d2cdT2(t);
+                d += x[i] * f.applyAsDouble(shift[i]);
             }
         }
         return d;

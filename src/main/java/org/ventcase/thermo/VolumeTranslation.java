@@ -188,25 +188,25 @@ public interface VolumeTranslation {
             out[2] = a * m2[i] + b * m2[i + 1];
         }
 
-        @Override
-        public double c(double t) {
+        private double part(double t, int which) {
             double[] o = new double[3];
             eval(t, o);
-            return o[0];
+            return o[which];
+        }
+
+        @Override
+        public double c(double t) {
+            return part(t, 0);
         }
 
         @Override
         public double dcdT(double t) {
-            double[] o = new double[3];
-            eval(t, o);
-            return o[1];
+            return part(t, 1);
         }
 
         @Override
         public double d2cdT2(double t) {
-            double[] o = new double[3];
-            eval(t, o);
-            return o[2];
+            return part(t, 2);
         }
 
         @Override

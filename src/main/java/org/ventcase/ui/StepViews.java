@@ -410,12 +410,7 @@ final class StepViews {
         t.getStyleClass().add("results-table");
         t.setHgap(14);
         t.setVgap(4);
-        String[] cols = {"scenario", "type", "p1", "t1", "heat", "load", "area", "orifice"};
-        for (int c = 0; c < cols.length; c++) {
-            Label l = new Label(Messages.get("results.col." + cols[c]));
-            l.getStyleClass().add("col-head");
-            t.add(l, c, 0);
-        }
+        headings(t, "scenario", "type", "p1", "t1", "heat", "load", "area", "orifice");
         for (int i = 0; i < s.scenarios().size(); i++) {
             CaseSummary.ScenarioRow r = s.scenarios().get(i);
             int row = i + 1;
@@ -500,6 +495,15 @@ final class StepViews {
                 vm.validated().map(ValidatedCase::inputHash).orElse("(computed when the case is complete)"));
     }
 
+    /** The column headings of a results table (message keys results.col.NAME) in its first row. */
+    private static void headings(GridPane t, String... cols) {
+        for (int c = 0; c < cols.length; c++) {
+            Label l = new Label(Messages.get("results.col." + cols[c]));
+            l.getStyleClass().add("col-head");
+            t.add(l, c, 0);
+        }
+    }
+
     /** The relieved fluid of each computed scenario: what a reviewer checks beside the load. */
     private static void relievedTable(javafx.scene.layout.VBox out, CaseSummary s, UnitSystem u) {
         if (s.scenarios().stream().noneMatch(r -> r.relieved().isPresent())) {
@@ -513,12 +517,7 @@ final class StepViews {
         t.getStyleClass().add("results-table");
         t.setHgap(14);
         t.setVgap(4);
-        String[] cols = {"scenario", "phase", "molarMass", "z", "k", "density", "latent", "margin"};
-        for (int c = 0; c < cols.length; c++) {
-            Label l = new Label(Messages.get("results.col." + cols[c]));
-            l.getStyleClass().add("col-head");
-            t.add(l, c, 0);
-        }
+        headings(t, "scenario", "phase", "molarMass", "z", "k", "density", "latent", "margin");
         int row = 1;
         for (CaseSummary.ScenarioRow r : s.scenarios()) {
             if (r.relieved().isEmpty()) {
