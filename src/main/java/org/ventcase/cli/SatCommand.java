@@ -37,6 +37,11 @@ final class SatCommand implements Callable<Integer> {
     @Mixin
     FluidOptions fluidOptions;
 
+    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
+            description = "Unit system of a pure fluid's printed saturation state: si or us (JSON is always SI). "
+                    + "Default: ${DEFAULT-VALUE}.")
+    String units;
+
     @Option(names = "--dew", description = "For a mixture: the dew point instead of the bubble point.")
     boolean dew;
 
@@ -74,6 +79,23 @@ final class SatCommand implements Callable<Integer> {
             return ExitCode.OK;
         }
         Text tx = new Text(out);
+        org.ventcase.report.UnitSystem system = org.ventcase.report.UnitSystem.parse("--units", units);
+        if (system == org.ventcase.report.UnitSystem.US) {
+            org.ventcase.report.DisplayUnits u = new org.ventcase.report.DisplayUnits(system);
+            tx.title(String.format(Locale.ROOT, "Saturation of %s  [%s]", c.name(), s.variant().displayName()));
+            tx.row("Temperature", plain(u.format(org.ventcase.report.DisplayUnits.Kind.TEMPERATURE, s.temperatureK())));
+            tx.row("Pressure", plain(u.format(org.ventcase.report.DisplayUnits.Kind.PRESSURE_ABS, s.pressurePa())));
+            tx.row("Z liquid / vapour", "%.6f / %.6f", s.liquid().z(), s.vapor().z());
+            tx.row("Liquid density", plain(u.plain(org.ventcase.report.DisplayUnits.Kind.DENSITY, s.liquid().density()))
+                    + " (" + s.liquid().densityBasis().label() + ")");
+            tx.row("Vapour density", plain(u.plain(org.ventcase.report.DisplayUnits.Kind.DENSITY, s.vapor().density()))
+                    + " (" + s.vapor().densityBasis().label() + ")");
+            tx.row("Latent heat", plain(u.format(org.ventcase.report.DisplayUnits.Kind.SPECIFIC_ENERGY,
+                    s.latentHeatJkg())));
+            Text.modelRows(tx, s.variant(), c);
+            tx.warnings(s.warnings());
+            return ExitCode.OK;
+        }
         tx.title(String.format(Locale.ROOT, "Saturation of %s  [%s]", c.name(), s.variant().displayName()));
         tx.row("Temperature", Text.temperature(s.temperatureK()));
         tx.row("Pressure", Text.pressure(s.pressurePa(), common.atmosphericPa()));
@@ -139,5 +161,10 @@ final class SatCommand implements Callable<Integer> {
             throw new org.ventcase.common.NoSolutionException(option,
                     e.getMessage().substring(e.getMessage().indexOf(':') + 2));
         }
+    }
+
+    /** The sheet's no-break spaces as plain spaces on a console. */
+    private static String plain(String s) {
+        return s.replace('\u00A0', ' ');
     }
 }

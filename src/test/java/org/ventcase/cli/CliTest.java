@@ -235,4 +235,12 @@ class CliTest {
         assertEquals(2, bad.code());
         assertTrue((bad.err() + bad.out()).contains("--units"), bad.err() + bad.out());
     }
+
+    @Test
+    void satPrintsUsCustomaryUnitsWhenAsked() throws Exception {
+        Run r = run("sat", "--fluid", "propane", "--temperature", "100 F", "--units", "us");
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("psia") && r.out().contains("lb/ft3") && r.out().contains("Btu/lb"), r.out());
+        assertFalse(r.out().contains("\u00A0"), "plain spaces on a console");
+    }
 }
