@@ -57,6 +57,12 @@ final class BatchJvm {
         }
         List<String> cmd = new ArrayList<>();
         cmd.add(java.get());
+        // the user's own JVM options (system properties, agents) go to the child as well
+        for (String a : java.lang.management.ManagementFactory.getRuntimeMXBean().getInputArguments()) {
+            if (!a.startsWith("-D" + CHILD_PROPERTY)) {
+                cmd.add(a);
+            }
+        }
         cmd.add("-XX:+UseSerialGC");
         cmd.add("-D" + CHILD_PROPERTY + "=true");
         cmd.add("-cp");
