@@ -1,6 +1,7 @@
 package org.ventcase.cli;
 
 import java.io.IOException;
+import java.lang.management.ManagementFactory;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
@@ -58,7 +59,7 @@ final class BatchJvm {
         List<String> cmd = new ArrayList<>();
         cmd.add(java.get());
         // the user's own JVM options (system properties, agents) go to the child as well
-        for (String a : java.lang.management.ManagementFactory.getRuntimeMXBean().getInputArguments()) {
+        for (String a : ManagementFactory.getRuntimeMXBean().getInputArguments()) {
             if (!a.startsWith("-D" + CHILD_PROPERTY)) {
                 cmd.add(a);
             }
