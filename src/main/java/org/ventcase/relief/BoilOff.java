@@ -7,6 +7,7 @@ import java.util.Locale;
 import java.util.OptionalDouble;
 
 import org.ventcase.common.ConvergenceException;
+import org.ventcase.common.NoSolutionException;
 import org.ventcase.common.PhysicalConstants;
 import org.ventcase.common.TraceStep;
 import org.ventcase.device.GasSizingResult;
@@ -366,9 +367,8 @@ public final class BoilOff {
         return trace;
     }
 
-    /** Bubble point and phase volumes only: the inner loop's evaluation (no full property sets). */
     /** The state at P1 the boil-off starts from (see {@link #start}). */
-    private record Start(BoilingState state, double nL, double nG, double ventedLiquidKg) {
+    private record Start(BoilingState state, double nL, double nG) {
     }
 
     /**
@@ -399,11 +399,27 @@ public final class BoilOff {
                     + "than fill the vessel as liquid (%.0f kg too much at %.1f C): liquid relief comes first; the "
                     + "boil-off is computed from a vessel full of liquid at P1, and the excess is not in the vented "
                     + "vapour.", excessKg, bz.temperatureK() - 273.15));
-            return new Start(bz, nL, 0.0, excessKg);
+            return new Start(bz, nL, 0.0);
+        }
+        // all vapour: even with no liquid the contents' vapour at its dew point would not fill the vessel
+        try {
+            org.ventcase.thermo.mix.SaturationPoint dew = new org.ventcase.thermo.mix.SaturationPoints(model)
+                    .dewTemperature(p1, z);
+            double vDew = model.properties(dew.temperatureK(), p1, z, org.ventcase.thermo.PhaseRequest.VAPOR, basis)
+                    .molarVolume();
+            if (nTot * vDew <= vTot) {
+                throw new NoSolutionException("boilOff.storage", String.format(Locale.US, "heated to the relieving "
+                        + "pressure in the closed vessel the stored contents are all vapour (at the dew point, %.1f C, "
+                        + "they would take %.1f of %.1f m3): there is no liquid to boil off; use the gas-filled fire "
+                        + "scenario", dew.temperatureK() - 273.15, nTot * vDew, vTot));
+            }
+        } catch (org.ventcase.common.ConvergenceException ignored) {
+            // no dew point found: the volume check after the solve below still guards the result
         }
         double[] lnK = guess.lnK().clone();
         double t = guess.temperatureK();
         double nL = nTot * 0.99;
+        double r = Double.NaN;
         double[] x = new double[n];
         Light lb = null;
         for (int outer = 0; outer < 60; outer++) {
@@ -428,12 +444,16 @@ public final class BoilOff {
                     break;
                 }
             }
-            double r = nL * lb.vL + nG * lb.vV - vTot;
-            if (Math.abs(r) <= 1e-12 * vTot) {
+            r = nL * lb.vL + nG * lb.vV - vTot;
+            if (Math.abs(r) <= 1e-10 * vTot) {
                 break;
             }
             double next = nL + r / (lb.vV - lb.vL);
             nL = Math.min(nTot, Math.max(0.5 * nL, next));
+        }
+        if (!(Math.abs(r) <= 1e-8 * vTot)) {
+            throw new ConvergenceException("boil-off start (stored contents at P1, volume balance)", 60, r / vTot,
+                    String.format(Locale.US, "liquid %.6g of %.6g mol", nL, nTot));
         }
         BoilingState b0 = BoilingState.at(model, basis, p1, x, t, lnK);
         double nG = nTot - nL;
@@ -446,9 +466,10 @@ public final class BoilOff {
                         String.format(Locale.US, "component %s", spec.components().get(i).name()));
             }
         }
-        return new Start(b0, nL, nG, 0.0);
+        return new Start(b0, nL, nG);
     }
 
+    /** Bubble point and phase volumes only: the inner loop's evaluation (no full property sets). */
     private static final class Light {
         double t;
         double[] y;

@@ -94,7 +94,7 @@ public final class MixtureFire {
         double tcMix = 0;
         double[] x = spec.composition();
         for (int i = 0; i < x.length; i++) {
-            tcMix += x[i] * spec.components().get(i).tcK();
+            tcMix += x[i] * model.tc(i);
         }
         if (b.temperatureK() / tcMix > 0.9) {
             warnings.add(String.format(Locale.US, "Relieving temperature is at %.3f of the liquid's pseudo-critical "
@@ -103,7 +103,7 @@ public final class MixtureFire {
                     + "There a cubic equation's vapour density and latent heat also lose accuracy%s.",
                     b.temperatureK() / tcMix, spec.eos() == org.ventcase.thermo.EosVariant.PRTWU
                             ? " (the default model against reference equations at Tr 0.925: vapour density up to 4 % "
-                                    + "high, latent heat up to 4 % low, docs/accuracy.md)"
+                                    + "high, latent heat up to 4 % low, liquid density up to 1.2 % low, docs/accuracy.md)"
                             : ""));
         }
         double liquidMass = vs.liquidVolume() * b.liquidProps().density();

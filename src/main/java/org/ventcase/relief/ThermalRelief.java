@@ -82,7 +82,7 @@ public final class ThermalRelief {
                 OptionalDouble.empty(), "not needed for the thermal case (the device is normally a small liquid valve)");
         List<TraceStep> trace = new ArrayList<>();
         trace.add(TraceStep.of("Blocked-in liquid at relieving conditions")
-                .equation("alpha_v = (1/v)(dv/dT)_P with (dv/dT)_P = (mu_JT Cp + v_cubic)/T; c = Cp / M; liquid root")
+                .equation("alpha_v = (1/v)(dv/dT)_P with (dv/dT)_P = (mu_JT Cp + v)/T on the density basis; c = Cp / M; liquid root")
                 .source(spec.eos().displayName() + " (" + spec.eos().citation() + ")")
                 .in("T", ScenarioSupport.kelvinC(t)).in("P1", ScenarioSupport.kpa(p) + " abs")
                 .out("alpha_v", "%.4g 1/K", alpha)

@@ -102,11 +102,11 @@ public final class WettedFire {
                 .out("Vapour mass", "%.0f kg", mV).build());
 
         // 5. Relieving temperature and latent heat
-        if (p1 >= c.pcPa()) {
+        if (p1 >= model.pc(0)) {
             throw new NoSolutionException("device.setPressure", String.format(Locale.US,
                     "the relieving pressure %.1f kPa abs is at or above the critical pressure of %s (%.1f kPa): "
                             + "the contents are supercritical at relief; use the near-critical fire scenario",
-                    p1 / 1e3, c.name(), c.pcPa() / 1e3));
+                    p1 / 1e3, c.name(), model.pc(0) / 1e3));
         }
         SaturationResult rel = sat.atPressure(p1, in.densityBasis());
         warnings.addAll(rel.warnings());
@@ -115,7 +115,7 @@ public final class WettedFire {
         if (lh.minimumApplied()) {
             warnings.add(lh.warning());
         }
-        double tr = rel.temperatureK() / c.tcK();
+        double tr = rel.temperatureK() / model.tc(0);
         if (tr > 0.9) {
             warnings.add(String.format(Locale.US, "Relieving temperature is at Tr = %.3f: near the critical point the "
                     + "latent heat falls quickly and the fire load rises; a transient (time-dependent) method may be needed.",

@@ -243,7 +243,9 @@ public enum EosVariant {
         if (t.temperatureDependent()) {
             return "";
         }
-        return c.name() + ": no published saturated-liquid density correlation; the " + displayName
+        return c.name() + (SaturatedLiquidDensity.find(c).isPresent()
+                ? ": the saturated-liquid density correlation could not be anchored (a saturation point failed); the "
+                : ": no published saturated-liquid density correlation; the ") + displayName
                 + " model translates its volumes by a constant (" + t.describe() + ")";
     }
 
@@ -269,8 +271,8 @@ public enum EosVariant {
             if (corr.isPresent()) {
                 try {
                     return VolumeTranslation.Anchored.build(CubicModel.untranslated(v, c), corr.get());
-                } catch (RuntimeException e) {
-                    // falls through to a constant translation (the note says so)
+                } catch (org.ventcase.common.VentcaseException e) {
+                    // a saturation anchor could not be computed: a constant translation (the note says so)
                 }
             }
             java.util.Optional<TwuParameters.Set> set = TwuParameters.find(c);

@@ -316,7 +316,7 @@ public final class PureSaturation {
                     "Tr = %.4f: above Tr 0.9 a cubic equation's vapour density and latent heat lose accuracy%s.", tr,
                     model.variant() == EosVariant.PRTWU
                             ? " (against reference equations at Tr 0.925: vapour density up to 4 % high, latent heat up "
-                                    + "to 4 % low; docs/accuracy.md)"
+                                    + "to 4 % low, liquid density up to 1.2 % low and more closer to Tc; docs/accuracy.md)"
                             : ""));
         }
         if (tr > 0.95) {

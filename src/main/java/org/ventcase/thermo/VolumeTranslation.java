@@ -14,10 +14,13 @@ import java.util.Locale;
  * applies the enthalpy term wherever a translated basis enters an energy balance
  * ({@link CubicModel#translatedEnthalpyShift}) and the others in
  * {@link CubicModel#properties} on the translated basis (Cv, k, isentropic exponent, speed of
- * sound and Joule-Thomson coefficient follow from them). The P T c'' term is not negligible:
- * measured up to 13 % of a compressed liquid's Cp at 5 MPa and Tr 0.9 (carbon monoxide), a few
- * per cent for most fluids near Tr 0.85 (VolumeTranslationTest). A pure fluid's latent heat is
- * unchanged by any translation.
+ * sound and Joule-Thomson coefficient follow from them). The P T c'' term is not negligible near
+ * the top anchor: at 5 MPa up to 25 % of Cp for carbon monoxide and 12 % for propane at Tr 0.89,
+ * smaller at the pressures of saturated storage. The anchors stop at 0.90 Tc with a 0.10 Tc
+ * smoothstep taper because closer to Tc the cubic's liquid volume and the correlation part so fast
+ * that c'' (and so Cp) swings by up to 90 % (anchors to 0.95 Tc with a 0.05 Tc taper, measured);
+ * the price is a liquid density up to 1.2 % low at Tr 0.925 (docs/accuracy.md). A pure fluid's
+ * latent heat is unchanged by any translation.
  */
 public interface VolumeTranslation {
 
@@ -71,20 +74,20 @@ public interface VolumeTranslation {
     /**
      * The translation that makes the cubic's saturated-liquid volume equal a published
      * saturated-liquid density correlation: c(T) = v_L,cubic(T) - v_L,correlation(T), evaluated at
-     * uniformly spaced temperatures from max(T_min of the correlation, 0.3 Tc) to 0.95 Tc and
-     * joined by a natural cubic spline (continuous c, c' and c''). Outside that range c' goes
-     * linearly to zero over 0.05 Tc and c is constant beyond, so c and c' stay continuous for a
-     * supercritical component of a mixture and for cold states.
+     * uniformly spaced temperatures from max(T_min of the correlation, 0.3 Tc) to 0.90 Tc and
+     * joined by a natural cubic spline (continuous c, c' and c''). Outside that range c' goes to
+     * zero along a smoothstep over {@link #TAPER} Tc and c is constant beyond, so c, c' and c'' stay
+     * continuous for a supercritical component of a mixture and for cold states.
      */
     final class Anchored implements VolumeTranslation {
         /** Number of anchor temperatures. */
         static final int NODES = 66;
         /** Highest anchor, as a fraction of Tc. */
-        static final double TR_HIGH = 0.95;
+        static final double TR_HIGH = 0.90;
         /** Lowest anchor, as a fraction of Tc, unless the correlation starts higher. */
         static final double TR_LOW = 0.30;
         /** Width of the taper outside the anchors, as a fraction of Tc. */
-        static final double TAPER = 0.05;
+        static final double TAPER = 0.10;
 
         private final double lo;
         private final double h;
@@ -127,6 +130,10 @@ public interface VolumeTranslation {
                 double t = tLo + i * h;
                 double vl = sat.liquidMolarVolumeCubic(t);
                 y[i] = vl - corr.molarVolume(t, mw);
+                if (!Double.isFinite(y[i])) {
+                    throw new org.ventcase.common.NoSolutionException("volumeTranslation", String.format(Locale.US,
+                            "the translation of %s at %.2f K is not finite", corr.component(), t));
+                }
             }
             return new Anchored(tLo, h, y, naturalSecondDerivatives(y, h), TAPER * tc,
                     "anchored on " + corr.source());
@@ -165,19 +172,22 @@ public interface VolumeTranslation {
         /** {c, c', c''} at t. */
         private void eval(double t, double[] out) {
             double tHi = hi();
+            // Outside the anchors c' goes to zero along a smoothstep, 1 - 3u^2 + 2u^3 (u = distance / w),
+            // whose slope is zero at both ends: c, c' and c'' stay continuous (the natural spline's c''
+            // is zero at its ends), so no heat capacity or load steps at the joins.
             if (t < lo) {
-                double d = Math.min(lo - t, w);
-                out[0] = y[0] - slopeLo * (d - d * d / (2 * w));
-                out[1] = slopeLo * (1 - d / w);
-                out[2] = lo - t < w ? slopeLo / w : 0.0;
+                double u = Math.min((lo - t) / w, 1.0);
+                out[0] = y[0] - slopeLo * w * (u - u * u * u + 0.5 * u * u * u * u);
+                out[1] = slopeLo * (1 - 3 * u * u + 2 * u * u * u);
+                out[2] = slopeLo * 6 * u * (1 - u) / w;
                 return;
             }
             if (t > tHi) {
-                double d = Math.min(t - tHi, w);
+                double u = Math.min((t - tHi) / w, 1.0);
                 int last = y.length - 1;
-                out[0] = y[last] + slopeHi * (d - d * d / (2 * w));
-                out[1] = slopeHi * (1 - d / w);
-                out[2] = t - tHi < w ? -slopeHi / w : 0.0;
+                out[0] = y[last] + slopeHi * w * (u - u * u * u + 0.5 * u * u * u * u);
+                out[1] = slopeHi * (1 - 3 * u * u + 2 * u * u * u);
+                out[2] = -slopeHi * 6 * u * (1 - u) / w;
                 return;
             }
             int i = Math.min((int) ((t - lo) / h), y.length - 2);

@@ -29,7 +29,8 @@ import org.junit.jupiter.api.Test;
  * liquid density 2 %, vapour density 3 %, latent heat 3 %. Where a two-parameter cubic cannot do
  * that, the figure reached is asserted and named in {@link #EXCEPTIONS} with the reason, and the
  * program warns (AssociatingFluids, PureSaturation). Above Tr 0.9 the figures reached are
- * asserted (vapour pressure 1.5 %, liquid density 1 %, vapour density 4.5 %, latent heat 4.5 %)
+ * asserted (vapour pressure 1.5 %, liquid density 6.5 % (water at Tr 0.958; 1.2 % at Tr 0.925),
+ * vapour density 4.5 %, latent heat 4.5 %)
  * and a warning is printed with every saturation state there.
  *
  * <p>The second test writes the accuracy table (docs/accuracy.md) from the same numbers and fails
@@ -41,7 +42,12 @@ class ReferenceSaturationTest {
     private static final ComponentLibrary LIB = ComponentLibrary.builtIn();
     private static final String[] QUANTITIES = {"Psat", "rhoL", "rhoV", "L"};
     private static final double[] TOL = {0.02, 0.02, 0.03, 0.03};
-    private static final double[] TOL_ABOVE_09 = {0.015, 0.01, 0.045, 0.045};
+    /**
+     * Above Tr 0.9: the figures reached. Liquid density: the translation's anchors end at 0.90 Tc
+     * (VolumeTranslation.Anchored says why), so it falls off towards Tc: 1.2 % at Tr 0.925 for the
+     * hydrocarbons, 6.2 % for water at Tr 0.958.
+     */
+    private static final double[] TOL_ABOVE_09 = {0.015, 0.065, 0.045, 0.045};
 
     /**
      * Where the default model is held to the figure it reaches rather than the general tolerance:

@@ -473,13 +473,14 @@ public final class PhaseEnvelope {
 
     private Result pure(int only) {
         var c = model.components().get(only);
-        PureSaturation ps = new PureSaturation(CubicModel.pure(model.variant(), c));
+        CubicModel pure = CubicModel.pure(model.variant(), c);
+        PureSaturation ps = new PureSaturation(pure);
         List<Point> pts = new ArrayList<>();
         int steps = 60;
         double tr0 = 0.5;
         for (int i = 0; i <= steps; i++) {
             double tr = tr0 + (PureSaturation.MAX_TR - tr0) * i / steps;
-            double t = tr * c.tcK();
+            double t = tr * pure.tc(0); // the model's own Tc (a published set may bring its own)
             SaturationResult s = ps.atTemperature(t, DensityBasis.CUBIC);
             pts.add(new Point(t, s.pressurePa(), Branch.BUBBLE, 0.0));
         }
@@ -487,7 +488,7 @@ public final class PhaseEnvelope {
             Point b = pts.get(i);
             pts.add(new Point(b.temperatureK(), b.pressurePa(), Branch.DEW, 1.0));
         }
-        StatePoint crit = new StatePoint(c.tcK(), c.pcPa(), "pure component: the cubic's critical point is (Tc, Pc)");
+        StatePoint crit = new StatePoint(pure.tc(0), pure.pc(0), "pure component: the cubic's critical point is (Tc, Pc)");
         return new Result(pts, Optional.of(crit), crit, crit, 0,
                 List.of("one component: bubble and dew curves coincide with the pure saturation curve (Tr 0.5 to "
                         + PureSaturation.MAX_TR + ")"));

@@ -47,8 +47,8 @@ public final class SinglePhaseLabel {
         double tc = 0;
         double pc = 0;
         for (int i = 0; i < x.length; i++) {
-            tc += x[i] * model.components().get(i).tcK();
-            pc += x[i] * model.components().get(i).pcPa();
+            tc += x[i] * model.tc(i);
+            pc += x[i] * model.pc(i);
         }
         return classify(t, p, tc, pc, liquidLikeRoot, "Kay's-rule pseudo-critical point (screening only)");
     }
