@@ -84,4 +84,17 @@ class PhaseEnvelopeTest {
         }
         assertEquals(c3.components().get(0).tcK(), r.criticalPoint().orElseThrow().temperatureK(), 1e-12);
     }
+
+    @Test
+    void aPureFluidsEnvelopeUsesTheModelsOwnCriticalPoint() {
+        // a review found the pure-fluid curve placed by the component's Tc: with the default model, whose
+        // published set brings a lower Tc for isobutane, methanol, water..., the last point lay above the
+        // model's Tc and the envelope failed
+        for (String name : java.util.List.of("isobutane", "methanol", "water", "propylene")) {
+            org.ventcase.thermo.Component c = org.ventcase.thermo.ComponentLibrary.builtIn().get(name);
+            org.ventcase.thermo.CubicModel m = org.ventcase.thermo.CubicModel.pure(org.ventcase.thermo.EosVariant.DEFAULT, c);
+            PhaseEnvelope.Result r = new PhaseEnvelope(m).trace(new double[] {1});
+            org.junit.jupiter.api.Assertions.assertEquals(m.tc(0), r.criticalPoint().orElseThrow().temperatureK(), 0.0, name);
+        }
+    }
 }
