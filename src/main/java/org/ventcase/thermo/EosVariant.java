@@ -288,18 +288,6 @@ public enum EosVariant {
         return volumeShift != null || this == PRTWU;
     }
 
-    /**
-     * The volume shift c (m3/mol) of one component: v_translated = v_cubic - c.
-     *
-     * @throws IllegalStateException when the variant has no published shift
-     */
-    public double volumeShift(Component c) {
-        if (!hasVolumeShift()) {
-            throw new IllegalStateException(displayName + " has no published volume shift");
-        }
-        return translation(c).c(c.tcK() * 0.7);
-    }
-
     /** Citation of the volume-shift correlation, or "" where there is none. */
     public String volumeShiftCitation() {
         if (this == PRTWU) {
