@@ -425,7 +425,8 @@ public final class CaseCalculation {
         } else {
             env = factor(f.factor(), Double.NaN);
         }
-        MixtureFireResult r = MixtureFire.run(fireInput(c, f.fireFighting(), env, f.relieving()));
+        // the vessel at the case's level is the inventory's (same vessel, level and exposure)
+        MixtureFireResult r = MixtureFire.run(fireInput(c, f.fireFighting(), env, f.relieving()), c.level());
         o.t1 = OptionalDouble.of(r.boiling().temperatureK());
         o.q = OptionalDouble.of(r.heat().heatW());
         o.latent = OptionalDouble.of(r.latentHeat().usedJPerKg());

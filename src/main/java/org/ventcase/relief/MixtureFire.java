@@ -60,6 +60,14 @@ public final class MixtureFire {
 
     /** Runs the case. */
     public static MixtureFireResult run(MixtureFireInput in) {
+        return run(in, null);
+    }
+
+    /**
+     * Runs the case with the vessel at its level already evaluated for exactly this input's vessel,
+     * level and exposure (the case calculation has it from the inventory); {@code null} evaluates it.
+     */
+    public static MixtureFireResult run(MixtureFireInput in, LevelState known) {
         List<TraceStep> trace = new ArrayList<>();
         LinkedHashSet<String> warnings = new LinkedHashSet<>(in.fluid().kijWarnings());
         MixtureSpec spec = in.fluid();
@@ -70,7 +78,8 @@ public final class MixtureFire {
         double p1 = rp.relievingPressurePa();
         trace.add(RelievingPressure.step(in.relieving(), rp));
 
-        LevelState vs = LevelState.of(in.vessel(), in.level(), in.exposure());
+        LevelState vs = known != null && known.vessel() == in.vessel() ? known
+                : LevelState.of(in.vessel(), in.level(), in.exposure());
         trace.add(TraceStep.of("Vessel and fire-exposed wetted area")
                 .equation("A_wetted = wetted inside area below min(liquid level, fire height - elevation)")
                 .source("API Std 521 / ISO 23251: wetted surface within 7.6 m (25 ft) of the base of the fire")
