@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 
 /**
  * Keeps the layering of DEVELOPERS.md: domain packages import only java.*, Commons Math and lower
- * domain packages; only casefile imports Jackson, only report imports PDFBox, only cli imports
+ * domain packages; only casefile (and ui's draft case) imports Jackson, only report imports PDFBox, only cli imports
  * picocli and prints to standard streams, only ui imports JavaFX (and ui.calc, the wizard's bridge
  * to the calculation, does not). Checked on the source text.
  */
