@@ -6,6 +6,8 @@ import java.util.concurrent.Callable;
 
 import org.ventcase.casefile.JsonReports;
 import org.ventcase.common.InvalidInputException;
+import org.ventcase.report.DisplayUnits;
+import org.ventcase.report.UnitSystem;
 import org.ventcase.thermo.Component;
 import org.ventcase.thermo.ComponentLibrary;
 import org.ventcase.thermo.CubicModel;
@@ -53,12 +55,25 @@ final class PropsCommand implements Callable<Integer> {
                     + "Default: ${DEFAULT-VALUE}.")
     String phase;
 
+    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
+            description = "Unit system of the printed properties: si or us (JSON is always SI). "
+                    + "Default: ${DEFAULT-VALUE}.")
+    String units;
+
+    // US customary conversions, all by definition: lbmol = 453.59237 mol, ft = 0.3048 m,
+    // Btu (International Table) = 1055.05585262 J, degree R = K / 1.8, psi = 6894.757293168361 Pa.
+    private static final double MOL_PER_LBMOL = 453.59237;
+    private static final double M3_PER_FT3 = 0.3048 * 0.3048 * 0.3048;
+    private static final double J_PER_BTU = 1055.05585262;
+    private static final double PA_PER_PSI = 6894.757293168361;
+
     @Override
     public Integer call() {
         Component c = ComponentLibrary.builtIn().get("--fluid", fluid);
         double t = Units.temperatureK("--temperature", temperature);
         double p = Units.parsePressure("--pressure", pressure, common.atmosphericPa());
         PhaseRequest req = parsePhase(phase);
+        UnitSystem system = UnitSystem.parse("--units", units);
         FluidProperties f = CubicModel.pure(common.variant(), c)
                 .properties(t, p, new double[] {1.0}, req, common.basis());
         PrintWriter out = spec.commandLine().getOut();
@@ -67,8 +82,12 @@ final class PropsCommand implements Callable<Integer> {
             return ExitCode.OK;
         }
         Text tx = new Text(out);
-        tx.title(String.format(Locale.ROOT, "%s at %s, %s  [%s]", c.name(), Text.temperature(t),
-                Text.pressure(p, common.atmosphericPa()), f.variant().displayName()));
+        boolean us = system == UnitSystem.US;
+        DisplayUnits u = new DisplayUnits(system);
+        tx.title(String.format(Locale.ROOT, "%s at %s, %s  [%s]", c.name(),
+                us ? plain(u.format(DisplayUnits.Kind.TEMPERATURE, t)) : Text.temperature(t),
+                us ? plain(u.format(DisplayUnits.Kind.PRESSURE_ABS, p)) : Text.pressure(p, common.atmosphericPa()),
+                f.variant().displayName()));
         tx.row("Real roots of the cubic (Z)", Text.roots(f.roots().physical()) + "  (" + f.roots().rootCase().words()
                 + ")");
         if (f.roots().rejected().length > 0) {
@@ -77,20 +96,41 @@ final class PropsCommand implements Callable<Integer> {
         tx.row("Root chosen", f.rootReason());
         tx.row("Phase", f.phase().label());
         tx.row("Z (cubic root)", "%.6f", f.z());
-        tx.row("Density", "%.4g kg/m3 (%s basis; cubic %.4g kg/m3)", f.density(), f.densityBasis().label(),
-                f.molarMass() * 1e-3 / f.molarVolumeCubic());
-        tx.row("Molar volume", "%.6g m3/mol", f.molarVolume());
-        tx.row("Fugacity coefficient", "%.6g", f.fugacityCoefficient(0));
-        tx.row("Residual enthalpy H-H_ig", "%.1f J/mol", f.residualEnthalpy());
-        tx.row("Residual entropy S-S_ig", "%.4f J/(mol K)", f.residualEntropy());
-        tx.row("Cp ideal gas / real", "%.3f / %.3f J/(mol K)", f.cpIdeal(), f.cp());
-        tx.row("Cv real", "%.3f J/(mol K)", f.cv());
+        if (us) {
+            double toLbmol = MOL_PER_LBMOL;                      // per mol -> per lbmol
+            double molarEnergy = toLbmol / J_PER_BTU;            // J/mol -> Btu/lbmol
+            double molarHeat = molarEnergy / 1.8;                // J/(mol K) -> Btu/(lbmol R)
+            tx.row("Density", "%s (%s basis; cubic %s)",
+                    plain(u.plain(DisplayUnits.Kind.DENSITY, f.density())), f.densityBasis().label(),
+                    plain(u.plain(DisplayUnits.Kind.DENSITY, f.molarMass() * 1e-3 / f.molarVolumeCubic())));
+            tx.row("Molar volume", "%.6g ft3/lbmol", f.molarVolume() * toLbmol / M3_PER_FT3);
+            tx.row("Fugacity coefficient", "%.6g", f.fugacityCoefficient(0));
+            tx.row("Residual enthalpy H-H_ig", "%.1f Btu/lbmol", f.residualEnthalpy() * molarEnergy);
+            tx.row("Residual entropy S-S_ig", "%.4f Btu/(lbmol R)", f.residualEntropy() * molarHeat);
+            tx.row("Cp ideal gas / real", "%.3f / %.3f Btu/(lbmol R)", f.cpIdeal() * molarHeat, f.cp() * molarHeat);
+            tx.row("Cv real", "%.3f Btu/(lbmol R)", f.cv() * molarHeat);
+        } else {
+            tx.row("Density", "%.4g kg/m3 (%s basis; cubic %.4g kg/m3)", f.density(), f.densityBasis().label(),
+                    f.molarMass() * 1e-3 / f.molarVolumeCubic());
+            tx.row("Molar volume", "%.6g m3/mol", f.molarVolume());
+            tx.row("Fugacity coefficient", "%.6g", f.fugacityCoefficient(0));
+            tx.row("Residual enthalpy H-H_ig", "%.1f J/mol", f.residualEnthalpy());
+            tx.row("Residual entropy S-S_ig", "%.4f J/(mol K)", f.residualEntropy());
+            tx.row("Cp ideal gas / real", "%.3f / %.3f J/(mol K)", f.cpIdeal(), f.cp());
+            tx.row("Cv real", "%.3f J/(mol K)", f.cv());
+        }
         tx.row("k = Cp/Cv ideal gas / real", "%.4f / %.4f", f.kIdeal(), f.kReal());
         tx.row("Isentropic exponent", "%.4f", f.isentropicExponent());
-        tx.row("Speed of sound", Double.isFinite(f.speedOfSound())
-                ? String.format(Locale.ROOT, "%.1f m/s", f.speedOfSound()) : "not defined (see warnings)");
-        tx.row("Joule-Thomson coefficient", "%.4g K/bar", f.jouleThomson() * 1e5);
-        Text.modelRows(tx, f.variant(), c);
+        tx.row("Speed of sound", !Double.isFinite(f.speedOfSound()) ? "not defined (see warnings)"
+                : us ? String.format(Locale.ROOT, "%.1f ft/s", f.speedOfSound() / 0.3048)
+                : String.format(Locale.ROOT, "%.1f m/s", f.speedOfSound()));
+        if (us) {
+            // K/Pa -> F/psi: a temperature difference of 1 K is 1.8 F
+            tx.row("Joule-Thomson coefficient", "%.4g F/psi", f.jouleThomson() * 1.8 * PA_PER_PSI);
+        } else {
+            tx.row("Joule-Thomson coefficient", "%.4g K/bar", f.jouleThomson() * 1e5);
+        }
+        Text.modelRows(tx, f.variant(), c, u);
         tx.warnings(f.warnings());
         return ExitCode.OK;
     }
@@ -107,5 +147,10 @@ final class PropsCommand implements Callable<Integer> {
             default:
                 throw InvalidInputException.invalid("--phase", s, "expected liquid, vapor or stable");
         }
+    }
+
+    /** Console text: the sheet's non-breaking spaces as plain ones. */
+    private static String plain(String s) {
+        return s.replace('\u00A0', ' ');
     }
 }

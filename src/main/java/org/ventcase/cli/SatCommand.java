@@ -92,7 +92,7 @@ final class SatCommand implements Callable<Integer> {
                     + " (" + s.vapor().densityBasis().label() + ")");
             tx.row("Latent heat", plain(u.format(org.ventcase.report.DisplayUnits.Kind.SPECIFIC_ENERGY,
                     s.latentHeatJkg())));
-            Text.modelRows(tx, s.variant(), c);
+            Text.modelRows(tx, s.variant(), c, u);
             tx.warnings(s.warnings());
             return ExitCode.OK;
         }

@@ -59,10 +59,25 @@ final class Text {
 
     /** The constants, alpha function and volume translation the model uses for a component, with sources. */
     static void modelRows(Text tx, org.ventcase.thermo.EosVariant v, org.ventcase.thermo.Component c) {
+        modelRows(tx, v, c, null);
+    }
+
+    /** As {@link #modelRows(Text, org.ventcase.thermo.EosVariant, org.ventcase.thermo.Component)}, with the
+     *  constants in the units of {@code u} when it is given and not SI. */
+    static void modelRows(Text tx, org.ventcase.thermo.EosVariant v, org.ventcase.thermo.Component c,
+                          org.ventcase.report.DisplayUnits u) {
         org.ventcase.thermo.EosVariant.ComponentModel d = v.describe(c);
-        tx.row("Constants used", String.format(java.util.Locale.ROOT,
-                "Tc %.2f K, Pc %.4g kPa, omega %.4f, M %.3f kg/kmol", d.constants().tcK(), d.constants().pcPa() / 1e3,
-                d.constants().omega(), c.molarMass()));
+        if (u != null && u.system() == org.ventcase.report.UnitSystem.US) {
+            // molar mass: kg/kmol and lb/lbmol are the same number
+            tx.row("Constants used", String.format(java.util.Locale.ROOT, "Tc %s, Pc %s, omega %.4f, M %.3f lb/lbmol",
+                    u.plain(org.ventcase.report.DisplayUnits.Kind.TEMPERATURE, d.constants().tcK()).replace('\u00A0', ' '),
+                    u.plain(org.ventcase.report.DisplayUnits.Kind.PRESSURE_ABS, d.constants().pcPa()).replace('\u00A0', ' '),
+                    d.constants().omega(), c.molarMass()));
+        } else {
+            tx.row("Constants used", String.format(java.util.Locale.ROOT,
+                    "Tc %.2f K, Pc %.4g kPa, omega %.4f, M %.3f kg/kmol", d.constants().tcK(),
+                    d.constants().pcPa() / 1e3, d.constants().omega(), c.molarMass()));
+        }
         boolean own = d.constants().source().equals(org.ventcase.thermo.Citations.constants(c));
         tx.row("Source of constants", d.constants().source()
                 + (own ? "" : "; molar mass " + org.ventcase.thermo.Citations.constants(c)));

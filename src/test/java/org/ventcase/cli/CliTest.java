@@ -243,4 +243,48 @@ class CliTest {
         assertTrue(r.out().contains("psia") && r.out().contains("lb/ft3") && r.out().contains("Btu/lb"), r.out());
         assertFalse(r.out().contains("\u00A0"), "plain spaces on a console");
     }
+
+    @Test
+    void propsPrintsEveryQuantityInUsCustomaryUnitsWhenAsked() throws Exception {
+        String[] args = {"props", "--fluid", "propane", "--temperature", "100 F", "--pressure", "250 psia"};
+        Run si = run(args);
+        Run us = run(java.util.stream.Stream.concat(java.util.Arrays.stream(args), java.util.stream.Stream.of(
+                "--units", "us")).toArray(String[]::new));
+        assertEquals(0, si.code(), si.err());
+        assertEquals(0, us.code(), us.err());
+        // Conversions by definition: lbmol = 453.59237 mol; Btu (IT) = 1055.05585262 J; R = K / 1.8;
+        // ft = 0.3048 m; psi = 6894.757293168361 Pa; lb/ft3 = 16.01846337 kg/m3
+        double hSi = number(si.out(), "Residual enthalpy H-H_ig");
+        double hUs = number(us.out(), "Residual enthalpy H-H_ig");
+        assertEquals(hSi * 453.59237 / 1055.05585262, hUs, 0.1);
+        double cpSi = number(si.out(), "Cv real");
+        double cpUs = number(us.out(), "Cv real");
+        assertEquals(cpSi * 453.59237 / 1055.05585262 / 1.8, cpUs, 2e-3);
+        assertEquals(number(si.out(), "Speed of sound") / 0.3048, number(us.out(), "Speed of sound"), 0.2);
+        assertEquals(number(si.out(), "Density") / 16.01846337, number(us.out(), "Density"), 0.01);
+        for (String unit : List.of("lb/ft3", "ft3/lbmol", "Btu/lbmol", "Btu/(lbmol R)", "ft/s", "F/psi", "psia",
+                "lb/lbmol")) {
+            assertTrue(us.out().contains(unit), unit + " in\n" + us.out());
+        }
+        for (String si1 : List.of("kg/m3", "J/mol", "m/s", "K/bar", "kPa,", "kg/kmol")) {
+            assertFalse(us.out().contains(si1), si1 + " left in SI in\n" + us.out());
+        }
+        assertFalse(us.out().contains("\u00A0"), "plain spaces on a console");
+        Run bad = run("props", "--fluid", "propane", "--temperature", "100 F", "--pressure", "250 psia", "--units",
+                "imperial");
+        assertEquals(2, bad.code());
+        assertTrue((bad.err() + bad.out()).contains("--units"), bad.err());
+    }
+
+    /** The first number on the row whose label starts the line (after indentation). */
+    private static double number(String out, String label) {
+        String line = out.lines().filter(l -> l.strip().startsWith(label)).findFirst().orElseThrow(
+                () -> new AssertionError("no row " + label + " in\n" + out));
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("-?\\d+(\\.\\d+)?(e-?\\d+)?")
+                .matcher(line.strip().substring(label.length()));
+        if (!m.find()) {
+            throw new AssertionError("no number on " + line);
+        }
+        return Double.parseDouble(m.group());
+    }
 }
