@@ -1,56 +1,70 @@
 package org.ventcase.report;
 
+import java.nio.file.Path;
 import java.time.LocalDate;
 
-import org.ventcase.common.PhysicalConstants;
-import org.ventcase.device.GasSizingInput;
-import org.ventcase.relief.DeviceCount;
-import org.ventcase.relief.EnvironmentFactors;
-import org.ventcase.relief.FireFighting;
-import org.ventcase.relief.RelievingPressureInput;
-import org.ventcase.relief.ScenarioKind;
-import org.ventcase.relief.WettedFire;
-import org.ventcase.relief.WettedFireInput;
-import org.ventcase.relief.WettedFireResult;
-import org.ventcase.thermo.ComponentLibrary;
-import org.ventcase.thermo.DensityBasis;
-import org.ventcase.thermo.EosVariant;
-import org.ventcase.vessel.FireExposure;
-import org.ventcase.vessel.Head;
-import org.ventcase.vessel.Level;
-import org.ventcase.vessel.Vessel;
+import org.ventcase.calc.CaseCalculation;
+import org.ventcase.calc.CaseInput;
+import org.ventcase.calc.CaseResult;
+import org.ventcase.casefile.CaseFiles;
+import org.ventcase.casefile.CaseInputs;
+import org.ventcase.casefile.ValidatedCase;
 
-/** Invented cases for the sheet tests (no real site, vessel or person). */
+/**
+ * Cases for the sheet tests, computed by the same path as {@code ventcase sheet}: a demo case file
+ * (invented: no real site, vessel or person), its calculation and the case sheet model, under the
+ * case file's identity or the invented test identity below.
+ */
 final class SheetFixtures {
 
     private SheetFixtures() {
     }
 
-    static WettedFireInput input(String fluid, Vessel v, Level level, double elevation, double tStorageK,
-            double setGaugePa) {
-        double atm = PhysicalConstants.ATM_PA;
-        return new WettedFireInput(ComponentLibrary.builtIn().get(fluid), EosVariant.PR78, DensityBasis.TRANSLATED,
-                v, level, FireExposure.atElevation(elevation), tStorageK,
-                RelievingPressureInput.of(setGaugePa, setGaugePa, atm, DeviceCount.SINGLE, ScenarioKind.FIRE),
-                FireFighting.ADEQUATE_DRAINAGE_AND_FIREFIGHTING, EnvironmentFactors.byKey("bare"), atm,
-                GasSizingInput.DEFAULT_KD, 1.0, 1.0, false);
+    /** A demo case computed: its input and result. */
+    record Computed(CaseInput input, CaseResult result, SheetIdentity caseIdentity) {
+
+        /** The governing scenario (every fixture has one). */
+        CaseResult.ScenarioResult governing() {
+            return result.governing().orElseThrow();
+        }
+
+        /** The sheet under the case file's own identity, as {@code ventcase sheet} writes it. */
+        SheetModel model(UnitSystem units) {
+            return SheetModels.from(result, input, caseIdentity, units);
+        }
+
+        /** The SI sheet under the invented test identity of {@link SheetFixtures#identity()}. */
+        SheetModel modelWithTestIdentity() {
+            return SheetModels.from(result, input, identity(), UnitSystem.SI);
+        }
+
+        SheetModel model() {
+            return model(UnitSystem.SI);
+        }
     }
 
-    /** Propane bullet, 2.8 m x 12 m, 2:1 heads, 80 % of volume, 0.9 m above grade. */
-    static WettedFireResult bullet() {
-        return WettedFire.run(input("propane", Vessel.horizontal(2.8, 12, Head.ellipsoidal2to1(2.8),
-                Head.ellipsoidal2to1(2.8)), Level.ofPercentOfVolume(80), 0.9, 290.0, 16.5e5));
+    static Computed demo(String file) {
+        ValidatedCase vc = CaseFiles.load(Path.of("demo-cases", file));
+        CaseInput in = CaseInputs.from(vc);
+        SheetIdentity id = new SheetIdentity(vc.identity().title(), vc.identity().tag(), vc.identity().revision(),
+                vc.identity().date(), vc.identity().preparer(), vc.identity().checker(), "Ventcase", "test",
+                vc.inputHash());
+        return new Computed(in, CaseCalculation.run(in), id);
     }
 
-    /** n-Butane drum, vertical, 2.0 m x 6 m, F&D heads, 3.1 m level, 2.5 m above grade. */
-    static WettedFireResult drum() {
-        return WettedFire.run(input("n-butane", Vessel.vertical(2.0, 6, Head.asmeFlangedAndDished(2.0),
-                Head.asmeFlangedAndDished(2.0)), Level.ofHeight(3.1), 2.5, 295.0, 7.0e5));
+    /** Horizontal propane bullet, pool fire (demo-cases/propane-bullet-fire.json). */
+    static Computed bullet() {
+        return demo("propane-bullet-fire.json");
     }
 
-    /** Propane sphere, 12 m ID, 60 % of height, 2 m above grade. */
-    static WettedFireResult sphere() {
-        return WettedFire.run(input("propane", Vessel.sphere(12), Level.ofPercentOfHeight(60), 2.0, 285.0, 15e5));
+    /** Vertical n-hexane drum (demo-cases/hexane-drum.json). */
+    static Computed drum() {
+        return demo("hexane-drum.json");
+    }
+
+    /** LPG sphere, wetted fire and boil-off (demo-cases/lpg-sphere-mixture.json). */
+    static Computed sphere() {
+        return demo("lpg-sphere-mixture.json");
     }
 
     static SheetIdentity identity() {

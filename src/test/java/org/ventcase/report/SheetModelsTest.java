@@ -8,30 +8,36 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
+import org.ventcase.calc.CaseResult;
 import org.ventcase.casefile.Templates;
 import org.ventcase.relief.FireLoadCurve;
-import org.ventcase.relief.WettedFireResult;
 
 class SheetModelsTest {
 
     @Test
     void fireCaseFillsEveryPartOfTheModel() {
-        WettedFireResult r = SheetFixtures.bullet();
-        SheetModel m = SheetModels.from(r, SheetFixtures.identity());
+        SheetFixtures.Computed c = SheetFixtures.bullet();
+        SheetModel m = c.model();
         assertEquals(UnitSystem.SI, m.units());
-        assertEquals(1, m.loads().size());
-        assertTrue(m.loads().get(0).governing());
-        assertEquals(7, m.inputs().size(), "fluid, EOS, vessel, storage, site, scenario, device");
-        assertEquals(4, m.results().size());
-        assertEquals(r.trace(), m.method().get(0).steps());
-        assertEquals(r.warnings(), m.warnings());
+        assertEquals(c.result().scenarios().size(), m.loads().size());
+        assertEquals(1, m.loads().stream().filter(SheetModel.ScenarioLoad::governing).count());
+        assertEquals(c.result().scenarios().size(), m.method().size());
+        for (int i = 0; i < m.method().size(); i++) {
+            // the first section also carries the case's own steps (fluid model, vessel, inventory)
+            assertTrue(m.method().get(i).steps().containsAll(c.result().scenarios().get(i).trace()), "scenario " + i);
+        }
+        assertFalse(m.inputs().isEmpty());
+        assertFalse(m.results().isEmpty());
         assertTrue(m.figures().get(0) instanceof Figure.VesselSketch);
-        assertTrue(m.figures().get(1) instanceof Figure.LineChart);
+        assertTrue(m.figures().stream().anyMatch(f -> f instanceof Figure.LineChart), "load against level");
+        for (CaseResult.CaseWarning w : c.result().warnings()) {
+            assertTrue(m.warnings().stream().anyMatch(x -> x.contains(w.message())), w.message());
+        }
     }
 
     @Test
     void textBlocksComeFromTheTemplatesWithPlaceholdersFilled() {
-        SheetModel m = SheetModels.from(SheetFixtures.bullet(), SheetFixtures.identity());
+        SheetModel m = SheetFixtures.bullet().modelWithTestIdentity();
         List<String> cautions = SheetModels.paragraphs(Templates.text("cautions").orElseThrow());
         assertEquals(cautions, m.cautions());
         assertTrue(m.cautions().size() >= 5);
@@ -43,10 +49,13 @@ class SheetModelsTest {
 
     @Test
     void chartCarriesTheDomainCurveWithTheGoverningLevelMarked() {
-        WettedFireResult r = SheetFixtures.bullet();
-        FireLoadCurve curve = FireLoadCurve.overLevels(r.input(), 10, 90, 8);
-        SheetModel m = SheetModels.from(r, curve, SheetFixtures.identity(), UnitSystem.US);
-        Figure.LineChart ch = (Figure.LineChart) m.figures().get(1);
+        SheetFixtures.Computed c = SheetFixtures.bullet();
+        CaseResult.ScenarioResult fire = c.result().scenarios().stream().filter(s -> s.levelCurve().isPresent())
+                .findFirst().orElseThrow();
+        FireLoadCurve curve = fire.levelCurve().orElseThrow();
+        SheetModel m = c.model(UnitSystem.US);
+        Figure.LineChart ch = m.figures().stream().filter(f -> f instanceof Figure.LineChart)
+                .map(Figure.LineChart.class::cast).findFirst().orElseThrow();
         double[] y = ch.series().get(0).y();
         assertEquals(curve.points().size(), y.length);
         // Definition: lb/h = kg/s x 3600 / 0.45359237
@@ -57,7 +66,7 @@ class SheetModelsTest {
 
     @Test
     void modelRefusesTwoGoverningScenariosAndMissingCautions() {
-        SheetModel m = SheetModels.from(SheetFixtures.bullet(), SheetFixtures.identity());
+        SheetModel m = SheetFixtures.bullet().model();
         SheetModel.ScenarioLoad l = m.loads().get(0);
         assertThrows(IllegalArgumentException.class, () -> new SheetModel(m.identity(), m.units(), m.revisions(),
                 m.signOff(), m.inputs(), List.of(l, l), m.results(), m.warnings(), m.figures(), m.method(),
