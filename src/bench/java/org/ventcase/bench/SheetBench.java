@@ -51,9 +51,7 @@ public class SheetBench {
     private SheetIdentity caseIdentity;
 
     private static SheetIdentity identity(ValidatedCase vc) {
-        return new SheetIdentity(vc.identity().title(), vc.identity().tag(), vc.identity().revision(),
-                vc.identity().date(), vc.identity().preparer(), vc.identity().checker(), "Ventcase", "bench",
-                vc.inputHash());
+        return org.ventcase.app.CaseSheets.identity(vc, "bench");
     }
 
     @Setup

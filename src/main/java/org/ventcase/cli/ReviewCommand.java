@@ -109,9 +109,7 @@ final class ReviewCommand implements Callable<Integer> {
             out.println("Review JSON written to " + json);
         }
         if (pdf != null) {
-            ValidatedCase.Identity id = vc.identity();
-            SheetIdentity identity = new SheetIdentity(id.title(), id.tag(), id.revision(), id.date(), id.preparer(),
-                    id.checker(), "Ventcase", Main.version(), vc.inputHash());
+            SheetIdentity identity = org.ventcase.app.CaseSheets.identity(vc, Main.version());
             CalculationSheet.write(ReviewSheets.from(r, identity, kase.getFileName().toString(),
                     claimedFile.getFileName().toString()), pdf, size);
             out.println("Review PDF written to " + pdf);

@@ -108,9 +108,7 @@ final class SheetCommand implements Callable<Integer> {
 
     /** The title block of a case: its identity, the tool and version, the input hash. */
     static SheetIdentity identity(ValidatedCase kase, String version) {
-        ValidatedCase.Identity id = kase.identity();
-        return new SheetIdentity(id.title(), id.tag(), id.revision(), id.date(), id.preparer(), id.checker(),
-                "Ventcase", version, kase.inputHash());
+        return org.ventcase.app.CaseSheets.identity(kase, version);
     }
 
     /** The demo's sheet: the packaged demo case (the one 'ventcase demo' runs) through the case pipeline. */

@@ -30,7 +30,7 @@ import org.ventcase.audit.AuditResult;
 import org.ventcase.audit.VesselAudit;
 import org.ventcase.report.AuditSheet;
 import org.ventcase.report.CalculationSheet;
-import org.ventcase.ui.calc.AuditRunner;
+import org.ventcase.app.AuditRunner;
 
 /**
  * The audit screen: choose a register (and thresholds), progress with Cancel, then the counts,

@@ -12,8 +12,8 @@ import javafx.beans.property.ReadOnlyStringProperty;
 import javafx.beans.property.ReadOnlyStringWrapper;
 
 import org.ventcase.report.CalculationSheet;
-import org.ventcase.ui.calc.AuditRunner;
-import org.ventcase.ui.calc.CaseRunner;
+import org.ventcase.app.AuditRunner;
+import org.ventcase.app.CaseRunner;
 
 /**
  * State and actions of the wizard's audit mode: the register and thresholds chosen, the audit of

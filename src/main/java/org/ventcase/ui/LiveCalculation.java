@@ -18,8 +18,8 @@ import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.util.Duration;
 
 import org.ventcase.casefile.ValidatedCase;
-import org.ventcase.ui.calc.CaseRunner;
-import org.ventcase.ui.calc.CaseSummary;
+import org.ventcase.app.CaseRunner;
+import org.ventcase.app.CaseSummary;
 
 /**
  * Keeps the results following the case as it is edited. Each change of the case restarts a quiet

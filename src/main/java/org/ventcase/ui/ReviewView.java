@@ -27,8 +27,8 @@ import javafx.stage.Window;
 import org.ventcase.report.CalculationSheet;
 import org.ventcase.review.ReviewQuantity;
 import org.ventcase.review.ReviewResult;
-import org.ventcase.ui.calc.ReviewRunner;
-import org.ventcase.ui.calc.ReviewTable;
+import org.ventcase.app.ReviewRunner;
+import org.ventcase.app.ReviewTable;
 
 /**
  * The review screen: choose claimed values, the deviation table with verdicts (coloured and

@@ -22,8 +22,8 @@ import javafx.beans.property.StringProperty;
 import org.ventcase.report.CalculationSheet;
 import org.ventcase.review.ReviewQuantity;
 import org.ventcase.review.Tolerances;
-import org.ventcase.ui.calc.CaseRunner;
-import org.ventcase.ui.calc.ReviewRunner;
+import org.ventcase.app.CaseRunner;
+import org.ventcase.app.ReviewRunner;
 
 /**
  * State and actions of the wizard's review mode: the claimed-value file chosen, the tolerance of

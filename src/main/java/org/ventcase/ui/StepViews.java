@@ -33,8 +33,8 @@ import org.ventcase.relief.EnvironmentFactor;
 import org.ventcase.relief.EnvironmentFactors;
 import org.ventcase.report.CalculationSheet;
 import org.ventcase.report.UnitSystem;
-import org.ventcase.ui.calc.CaseSummary;
-import org.ventcase.ui.calc.SheetOutcome;
+import org.ventcase.app.CaseSummary;
+import org.ventcase.app.SheetOutcome;
 import org.ventcase.units.Dimension;
 import org.ventcase.units.Units;
 

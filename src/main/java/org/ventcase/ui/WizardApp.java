@@ -45,7 +45,7 @@ import javafx.util.Duration;
 import org.ventcase.casefile.CaseValidationException;
 import org.ventcase.casefile.Problem;
 import org.ventcase.casefile.Templates;
-import org.ventcase.ui.calc.CaseRunner;
+import org.ventcase.app.CaseRunner;
 
 /**
  * The wizard's window: start screen, step list, the current step, navigation, menus, the
@@ -75,10 +75,10 @@ public final class WizardApp extends Application {
     private boolean started;
     /** True while the review or audit screen is shown (the wizard's keys are off). */
     private boolean reviewing;
-    private final ReviewViewModel review = new ReviewViewModel(new org.ventcase.ui.calc.ReviewRunner(),
+    private final ReviewViewModel review = new ReviewViewModel(new org.ventcase.app.ReviewRunner(),
             LiveCalculation.Env.fx(worker), this::openCase, LiveCalculation.DEBOUNCE_MS);
     private ReviewView reviewView;
-    private final AuditViewModel audit = new AuditViewModel(new org.ventcase.ui.calc.AuditRunner(),
+    private final AuditViewModel audit = new AuditViewModel(new org.ventcase.app.AuditRunner(),
             LiveCalculation.Env.fx(worker), Math.max(1, Runtime.getRuntime().availableProcessors() - 1));
     private AuditView auditView;
 
@@ -268,10 +268,10 @@ public final class WizardApp extends Application {
     // ------------------------------------------------------------------------------ review mode
 
     /** The case open in the wizard, for claimed values that name none (none from the start screen). */
-    private org.ventcase.ui.calc.ReviewRunner.OpenCase openCase() {
+    private org.ventcase.app.ReviewRunner.OpenCase openCase() {
         Path f = vm.file().get();
         String name = f == null ? vm.title() : f.getFileName().toString();
-        return new org.ventcase.ui.calc.ReviewRunner.OpenCase(started ? vm.validated() : Optional.empty(), name);
+        return new org.ventcase.app.ReviewRunner.OpenCase(started ? vm.validated() : Optional.empty(), name);
     }
 
     /** Shows the review screen (start screen button, File menu; also used by tests). */

@@ -40,9 +40,9 @@ import org.ventcase.common.PhysicalConstants;
 import org.ventcase.report.UnitSystem;
 import org.ventcase.thermo.Component;
 import org.ventcase.thermo.ComponentLibrary;
-import org.ventcase.ui.calc.CaseRunner;
-import org.ventcase.ui.calc.CaseSummary;
-import org.ventcase.ui.calc.SheetOutcome;
+import org.ventcase.app.CaseRunner;
+import org.ventcase.app.CaseSummary;
+import org.ventcase.app.SheetOutcome;
 import org.ventcase.units.Dimension;
 import org.ventcase.units.Units;
 

@@ -87,9 +87,7 @@ class CaseSheetTest {
         CaseInput in = CaseInputs.from(vc);
         CaseResult r = CaseCalculation.run(in);
         JsonNode json = ResultsJson.tree(r, "test");
-        SheetIdentity id = new SheetIdentity(vc.identity().title(), vc.identity().tag(), vc.identity().revision(),
-                vc.identity().date(), vc.identity().preparer(), vc.identity().checker(), "Ventcase", "test",
-                vc.inputHash());
+        SheetIdentity id = org.ventcase.app.CaseSheets.identity(vc, "test");
         for (UnitSystem system : UnitSystem.values()) {
             CalculationSheet.PageSize size = system == UnitSystem.SI ? CalculationSheet.PageSize.A4
                     : CalculationSheet.PageSize.LETTER;

@@ -46,10 +46,7 @@ final class SheetFixtures {
     static Computed demo(String file) {
         ValidatedCase vc = CaseFiles.load(Path.of("demo-cases", file));
         CaseInput in = CaseInputs.from(vc);
-        SheetIdentity id = new SheetIdentity(vc.identity().title(), vc.identity().tag(), vc.identity().revision(),
-                vc.identity().date(), vc.identity().preparer(), vc.identity().checker(), "Ventcase", "test",
-                vc.inputHash());
-        return new Computed(in, CaseCalculation.run(in), id);
+        return new Computed(in, CaseCalculation.run(in), org.ventcase.app.CaseSheets.identity(vc, "test"));
     }
 
     /** Horizontal propane bullet, pool fire (demo-cases/propane-bullet-fire.json). */

@@ -20,7 +20,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.ventcase.audit.VesselAudit;
 import org.ventcase.cli.Main;
 import org.ventcase.report.CalculationSheet;
-import org.ventcase.ui.calc.AuditRunner;
+import org.ventcase.app.AuditRunner;
 
 /**
  * The audit mode's view-model without a window, on the invented demo register: the counts are
@@ -129,7 +129,7 @@ class AuditViewModelTest {
     void aCancelDuringTheRunStopsTheWorkersWithCancelled() {
         for (int threads : new int[] {1, 3}) {
             java.util.concurrent.atomic.AtomicInteger seen = new java.util.concurrent.atomic.AtomicInteger();
-            org.junit.jupiter.api.Assertions.assertThrows(org.ventcase.ui.calc.CaseRunner.Cancelled.class,
+            org.junit.jupiter.api.Assertions.assertThrows(org.ventcase.app.CaseRunner.Cancelled.class,
                     () -> new AuditRunner().run(AuditRunner.Input.file(REGISTER), Optional.empty(), threads,
                             (d, n) -> seen.incrementAndGet(), () -> seen.get() > 5));
             assertTrue(seen.get() < 100, "stopped early, not after the whole register: " + seen.get());

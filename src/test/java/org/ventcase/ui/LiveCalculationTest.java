@@ -24,9 +24,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.ventcase.casefile.ValidatedCase;
 import org.ventcase.report.UnitSystem;
-import org.ventcase.ui.calc.CaseRunner;
-import org.ventcase.ui.calc.CaseSummary;
-import org.ventcase.ui.calc.SheetOutcome;
+import org.ventcase.app.CaseRunner;
+import org.ventcase.app.CaseSummary;
+import org.ventcase.app.SheetOutcome;
 import org.ventcase.units.Dimension;
 
 /**

@@ -17,10 +17,10 @@ import org.ventcase.casefile.CaseInputs;
 import org.ventcase.casefile.Templates;
 import org.ventcase.casefile.ValidatedCase;
 import org.ventcase.report.UnitSystem;
-import org.ventcase.ui.calc.CaseRunner;
-import org.ventcase.ui.calc.CaseSummary;
-import org.ventcase.ui.calc.PipelineCaseRunner;
-import org.ventcase.ui.calc.SheetOutcome;
+import org.ventcase.app.CaseRunner;
+import org.ventcase.app.CaseSummary;
+import org.ventcase.app.PipelineCaseRunner;
+import org.ventcase.app.SheetOutcome;
 
 /** The wizard's runner is the case pipeline: every scenario computed, rows equal to the case result. */
 class PipelineCaseRunnerTest {

@@ -21,8 +21,8 @@ import org.ventcase.report.CalculationSheet;
 import org.ventcase.review.ReviewQuantity;
 import org.ventcase.review.ReviewResult;
 import org.ventcase.review.Verdict;
-import org.ventcase.ui.calc.ReviewRunner;
-import org.ventcase.ui.calc.ReviewTable;
+import org.ventcase.app.ReviewRunner;
+import org.ventcase.app.ReviewTable;
 
 /**
  * The review mode's view-model without a window: demo files reviewed, a tolerance edit re-running

@@ -11,7 +11,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.ventcase.casefile.CaseFiles;
 import org.ventcase.casefile.ScenarioType;
-import org.ventcase.ui.calc.CaseRunner;
+import org.ventcase.app.CaseRunner;
 import org.ventcase.units.Dimension;
 
 /** The wizard's view-model without a window: validation beside fields, navigation, undo/redo, files. */

@@ -376,7 +376,7 @@ class WizardWindowTest {
         settle();
         assertEquals(AuditViewModel.State.DONE, fx(() -> app.auditModel().state().get()),
                 () -> "audit did not finish: " + app.auditModel().message().get());
-        org.ventcase.ui.calc.AuditRunner.Outcome o = fx(() -> app.auditModel().outcome().get().orElseThrow());
+        org.ventcase.app.AuditRunner.Outcome o = fx(() -> app.auditModel().outcome().get().orElseThrow());
         assertTrue(text("audit-counts").contains("error " + o.count(org.ventcase.audit.VesselAudit.Status.ERROR)),
                 text("audit-counts"));
         assertNotNull(lookup("audit-by-area"));

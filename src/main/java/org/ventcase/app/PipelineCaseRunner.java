@@ -1,4 +1,4 @@
-package org.ventcase.ui.calc;
+package org.ventcase.app;
 
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
@@ -64,10 +64,7 @@ public final class PipelineCaseRunner implements CaseRunner {
         try {
             CaseInput in = CaseInputs.from(kase);
             CaseResult r = resultOf(kase, in);
-            ValidatedCase.Identity id = kase.identity();
-            SheetIdentity sid = new SheetIdentity(id.title(), id.tag(), id.revision(), id.date(), id.preparer(),
-                    id.checker(), "Ventcase", toolVersion, kase.inputHash());
-            return SheetOutcome.of(SheetModels.from(r, in, sid, units));
+            return SheetOutcome.of(SheetModels.from(r, in, CaseSheets.identity(kase, toolVersion), units));
         } catch (VentcaseException e) {
             return SheetOutcome.none("the case could not be computed: " + e.getMessage());
         }

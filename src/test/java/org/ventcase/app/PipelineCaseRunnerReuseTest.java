@@ -1,4 +1,4 @@
-package org.ventcase.ui.calc;
+package org.ventcase.app;
 
 import static org.junit.jupiter.api.Assertions.assertNotSame;
 import static org.junit.jupiter.api.Assertions.assertSame;

@@ -1,4 +1,4 @@
-package org.ventcase.ui.calc;
+package org.ventcase.app;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -166,9 +166,7 @@ public final class ReviewRunner {
 
     /** The review sheet's title block: the case's identity. */
     static SheetIdentity identity(Outcome o, String toolVersion) {
-        ValidatedCase.Identity id = o.kase().identity();
-        return new SheetIdentity(id.title(), id.tag(), id.revision(), id.date(), id.preparer(), id.checker(),
-                "Ventcase", toolVersion, o.kase().inputHash());
+        return CaseSheets.identity(o.kase(), toolVersion);
     }
 
     /** Writes the review PDF atomically. */

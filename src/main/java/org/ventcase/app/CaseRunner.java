@@ -1,4 +1,4 @@
-package org.ventcase.ui.calc;
+package org.ventcase.app;
 
 import java.util.function.BooleanSupplier;
 
