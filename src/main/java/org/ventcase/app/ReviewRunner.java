@@ -123,14 +123,26 @@ public final class ReviewRunner {
                             + "(or fix its marked fields), or add a 'case' entry to the claimed values"));
         }
         check(cancelled);
-        ClaimedValues values = claimed.values(kase.site().atmosphericPa());
         progress.update(0.2, "computing the case, then again with PR78 and SRK on both density bases (once: a "
                 + "tolerance change only judges again)");
-        Review.Prepared prepared = Review.prepare(CaseInputs.from(kase), values);
+        Outcome o = review(kase, caseName, origin, claimed, source.name(), tolerances);
         check(cancelled);
-        ReviewResult r = prepared.judge(tolerances);
         progress.update(1.0, "done");
-        return new Outcome(r, kase, caseName, origin, source.name(), prepared);
+        return o;
+    }
+
+    /**
+     * The review of a case already read against claimed values already read: the last step of
+     * {@link #run}, and the whole of {@code ventcase review} once the command line has found its case.
+     *
+     * @throws org.ventcase.common.InvalidInputException a claimed value is not accepted (the message names
+     *         the field)
+     */
+    public static Outcome review(ValidatedCase kase, String caseName, String caseOrigin, ClaimedFiles.Claimed claimed,
+                                 String claimedName, Tolerances tolerances) {
+        ClaimedValues values = claimed.values(kase.site().atmosphericPa());
+        Review.Prepared prepared = Review.prepare(CaseInputs.from(kase), values);
+        return new Outcome(prepared.judge(tolerances), kase, caseName, caseOrigin, claimedName, prepared);
     }
 
     private static void check(BooleanSupplier cancelled) {

@@ -8,19 +8,14 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 
+import org.ventcase.app.ReviewRunner;
 import org.ventcase.casefile.CaseFiles;
-import org.ventcase.casefile.CaseInputs;
 import org.ventcase.casefile.CaseValidationException;
 import org.ventcase.casefile.ClaimedFiles;
 import org.ventcase.casefile.Problem;
-import org.ventcase.casefile.ReviewJson;
 import org.ventcase.casefile.ValidatedCase;
 import org.ventcase.common.InvalidInputException;
 import org.ventcase.report.CalculationSheet;
-import org.ventcase.report.ReviewSheets;
-import org.ventcase.report.SheetIdentity;
-import org.ventcase.review.ClaimedValues;
-import org.ventcase.review.Review;
 import org.ventcase.review.ReviewQuantity;
 import org.ventcase.review.ReviewResult;
 import org.ventcase.review.Tolerances;
@@ -101,17 +96,16 @@ final class ReviewCommand implements Callable<Integer> {
             }
             return ExitCode.INVALID_INPUT;
         }
-        ClaimedValues values = claimed.values(vc.site().atmosphericPa());
-        ReviewResult r = Review.run(CaseInputs.from(vc), values, tol);
-        print(out, r, kase, claimedFile);
+        ReviewRunner.Outcome o = ReviewRunner.review(vc, kase.getFileName().toString(),
+                caseFile != null ? "given on the command line" : "named in " + claimedFile, claimed,
+                claimedFile.getFileName().toString(), tol);
+        print(out, o.result(), kase, claimedFile);
         if (json != null) {
-            CaseFiles.writeText(ReviewJson.write(r, Main.version()), json);
+            ReviewRunner.writeJson(o, json, Main.version());
             out.println("Review JSON written to " + json);
         }
         if (pdf != null) {
-            SheetIdentity identity = org.ventcase.app.CaseSheets.identity(vc, Main.version());
-            CalculationSheet.write(ReviewSheets.from(r, identity, kase.getFileName().toString(),
-                    claimedFile.getFileName().toString()), pdf, size);
+            ReviewRunner.writePdf(o, pdf, size, Main.version());
             out.println("Review PDF written to " + pdf);
         }
         return ExitCode.OK;
