@@ -3,8 +3,6 @@ package org.ventcase.app;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
@@ -61,12 +59,10 @@ public final class AuditRunner {
         byte[] bytes() {
             try {
                 if (path.isPresent()) {
-                    long size = Files.size(path.get());
-                    if (size > Register.MAX_BYTES) {
-                        throw InvalidInputException.invalid(name, size + " bytes",
-                                "expected a file of at most " + Register.MAX_BYTES + " bytes");
-                    }
-                    return Files.readAllBytes(path.get());
+                    // bounded while reading (a growing file or a device stops at the limit), as the CLI reads
+                    return org.ventcase.common.BoundedRead.bytes(path.get(), Register.MAX_BYTES).orElseThrow(() ->
+                            InvalidInputException.invalid(name, "more than " + Register.MAX_BYTES + " bytes",
+                                    "expected a file of at most " + Register.MAX_BYTES + " bytes"));
                 }
                 try (InputStream in = AuditRunner.class.getResourceAsStream(DEMO_DIR + name)) {
                     if (in == null) {
@@ -140,12 +136,13 @@ public final class AuditRunner {
         MessageDigest hash = sha256();
         byte[] reg = register.bytes();
         hash.update(reg);
-        Register parsed = Register.parse(new String(reg, StandardCharsets.UTF_8), register.name());
+        // strict UTF-8, as the CLI reads: Latin-1 or UTF-16 is refused with the line and column
+        Register parsed = Register.parse(org.ventcase.common.Utf8.decode(reg, register.name()), register.name());
         Thresholds th = Thresholds.none();
         if (thresholds.isPresent()) {
             byte[] t = thresholds.get().bytes();
             hash.update(t);
-            th = Thresholds.parse(new String(t, StandardCharsets.UTF_8), thresholds.get().name());
+            th = Thresholds.parse(org.ventcase.common.Utf8.decode(t, thresholds.get().name()), thresholds.get().name());
         }
         check(cancelled);
         progress.update(0, parsed.rows().size());
