@@ -5,11 +5,14 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import org.ventcase.casefile.JsonReports;
+import org.ventcase.report.DisplayUnits;
+import org.ventcase.report.UnitSystem;
 import org.ventcase.thermo.Compositions;
 import org.ventcase.thermo.mix.FlashResult;
 import org.ventcase.thermo.mix.MixtureModel;
 import org.ventcase.thermo.mix.MixturePhase;
 import org.ventcase.thermo.mix.PTFlash;
+import org.ventcase.units.CustomaryUnits;
 import org.ventcase.units.Units;
 
 import picocli.CommandLine.Command;
@@ -45,12 +48,17 @@ final class FlashCommand implements Callable<Integer> {
             description = "Pressure, absolute or gauge (e.g. \"10 bara\").")
     String pressure;
 
+    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
+            description = "Unit system of the printed result: si or us (JSON is always SI). Default: ${DEFAULT-VALUE}.")
+    String units;
+
     @Override
     public Integer call() {
         org.ventcase.thermo.Composition c = fluid.composition();
         MixtureModel mm = fluid.model(c, common.variant());
         double t = Units.temperatureK("--temperature", temperature);
         double p = Units.parsePressure("--pressure", pressure, common.atmosphericPa());
+        UnitSystem system = UnitSystem.parse("--units", units);
         FlashResult f = new PTFlash(mm.model()).flash(t, p, c.fractions(), common.basis());
         PrintWriter out = spec.commandLine().getOut();
         if (common.json) {
@@ -58,19 +66,35 @@ final class FlashCommand implements Callable<Integer> {
             return ExitCode.OK;
         }
         Text tx = new Text(out);
-        tx.title(String.format(Locale.ROOT, "Flash of %s at %s, %s  [%s]", fluid.fluid, Text.temperature(t),
-                Text.pressure(p, common.atmosphericPa()), mm.model().variant().displayName()));
+        boolean us = system == UnitSystem.US;
+        DisplayUnits u = new DisplayUnits(system);
+        tx.title(String.format(Locale.ROOT, "Flash of %s at %s, %s  [%s]", fluid.fluid,
+                us ? plain(u.format(DisplayUnits.Kind.TEMPERATURE, t)) : Text.temperature(t),
+                us ? plain(u.format(DisplayUnits.Kind.PRESSURE_ABS, p)) : Text.pressure(p, common.atmosphericPa()),
+                mm.model().variant().displayName()));
         tx.row("Stability of the feed", f.stability().stable() ? "stable (one phase)"
                 : String.format(Locale.ROOT, "unstable (tangent-plane distance %.4g): splits", f.stability().minimumTpd()));
         tx.row("Vapour fraction (molar)", "%.6f", f.vaporFraction());
-        tx.row("Feed enthalpy", "%.1f J/mol (ideal gas at 298.15 K = 0)", f.enthalpyJmol());
+        if (us) {
+            tx.row("Feed enthalpy", "%.1f Btu/lbmol (ideal gas at 77 F = 0)",
+                    CustomaryUnits.jPerMolToBtuPerLbmol(f.enthalpyJmol()));
+        } else {
+            tx.row("Feed enthalpy", "%.1f J/mol (ideal gas at 298.15 K = 0)", f.enthalpyJmol());
+        }
         for (MixturePhase ph : f.phases()) {
             tx.blank();
             tx.row("Phase", "%s, %.6f of the feed (molar)", ph.label().label(), ph.amount());
             tx.row("  Z", "%.6f", ph.z());
-            tx.row("  Density", "%.4g kg/m3 (%s; cubic %.4g)", ph.density(), ph.densityBasis().label(),
-                    ph.densityCubic());
-            tx.row("  Molar mass", "%.3f kg/kmol", ph.molarMass());
+            if (us) {
+                tx.row("  Density", "%s (%s; cubic %s)", plain(u.plain(DisplayUnits.Kind.DENSITY, ph.density())),
+                        ph.densityBasis().label(), plain(u.plain(DisplayUnits.Kind.DENSITY, ph.densityCubic())));
+                // kg/kmol and lb/lbmol are the same number
+                tx.row("  Molar mass", "%.3f lb/lbmol", ph.molarMass());
+            } else {
+                tx.row("  Density", "%.4g kg/m3 (%s; cubic %.4g)", ph.density(), ph.densityBasis().label(),
+                        ph.densityCubic());
+                tx.row("  Molar mass", "%.3f kg/kmol", ph.molarMass());
+            }
             double[] x = ph.composition();
             for (int i = 0; i < x.length; i++) {
                 tx.row("  x " + mm.model().components().get(i).name(), "%.6f", x[i]);
@@ -82,5 +106,10 @@ final class FlashCommand implements Callable<Integer> {
         w.addAll(f.warnings());
         tx.warnings(w);
         return ExitCode.OK;
+    }
+
+    /** Console text: the sheet's non-breaking spaces as plain ones. */
+    private static String plain(String s) {
+        return s.replace('\u00A0', ' ');
     }
 }

@@ -13,6 +13,7 @@ import org.ventcase.thermo.ComponentLibrary;
 import org.ventcase.thermo.CubicModel;
 import org.ventcase.thermo.FluidProperties;
 import org.ventcase.thermo.PhaseRequest;
+import org.ventcase.units.CustomaryUnits;
 import org.ventcase.units.Units;
 
 import picocli.CommandLine.Command;
@@ -60,13 +61,6 @@ final class PropsCommand implements Callable<Integer> {
                     + "Default: ${DEFAULT-VALUE}.")
     String units;
 
-    // US customary conversions, all by definition: lbmol = 453.59237 mol, ft = 0.3048 m,
-    // Btu (International Table) = 1055.05585262 J, degree R = K / 1.8, psi = 6894.757293168361 Pa.
-    private static final double MOL_PER_LBMOL = 453.59237;
-    private static final double M3_PER_FT3 = 0.3048 * 0.3048 * 0.3048;
-    private static final double J_PER_BTU = 1055.05585262;
-    private static final double PA_PER_PSI = 6894.757293168361;
-
     @Override
     public Integer call() {
         Component c = ComponentLibrary.builtIn().get("--fluid", fluid);
@@ -97,18 +91,16 @@ final class PropsCommand implements Callable<Integer> {
         tx.row("Phase", f.phase().label());
         tx.row("Z (cubic root)", "%.6f", f.z());
         if (us) {
-            double toLbmol = MOL_PER_LBMOL;                      // per mol -> per lbmol
-            double molarEnergy = toLbmol / J_PER_BTU;            // J/mol -> Btu/lbmol
-            double molarHeat = molarEnergy / 1.8;                // J/(mol K) -> Btu/(lbmol R)
             tx.row("Density", "%s (%s basis; cubic %s)",
                     plain(u.plain(DisplayUnits.Kind.DENSITY, f.density())), f.densityBasis().label(),
                     plain(u.plain(DisplayUnits.Kind.DENSITY, f.molarMass() * 1e-3 / f.molarVolumeCubic())));
-            tx.row("Molar volume", "%.6g ft3/lbmol", f.molarVolume() * toLbmol / M3_PER_FT3);
+            tx.row("Molar volume", "%.6g ft3/lbmol", CustomaryUnits.m3PerMolToFt3PerLbmol(f.molarVolume()));
             tx.row("Fugacity coefficient", "%.6g", f.fugacityCoefficient(0));
-            tx.row("Residual enthalpy H-H_ig", "%.1f Btu/lbmol", f.residualEnthalpy() * molarEnergy);
-            tx.row("Residual entropy S-S_ig", "%.4f Btu/(lbmol R)", f.residualEntropy() * molarHeat);
-            tx.row("Cp ideal gas / real", "%.3f / %.3f Btu/(lbmol R)", f.cpIdeal() * molarHeat, f.cp() * molarHeat);
-            tx.row("Cv real", "%.3f Btu/(lbmol R)", f.cv() * molarHeat);
+            tx.row("Residual enthalpy H-H_ig", "%.1f Btu/lbmol", CustomaryUnits.jPerMolToBtuPerLbmol(f.residualEnthalpy()));
+            tx.row("Residual entropy S-S_ig", "%.4f Btu/(lbmol R)", CustomaryUnits.jPerMolKToBtuPerLbmolR(f.residualEntropy()));
+            tx.row("Cp ideal gas / real", "%.3f / %.3f Btu/(lbmol R)", CustomaryUnits.jPerMolKToBtuPerLbmolR(f.cpIdeal()),
+                    CustomaryUnits.jPerMolKToBtuPerLbmolR(f.cp()));
+            tx.row("Cv real", "%.3f Btu/(lbmol R)", CustomaryUnits.jPerMolKToBtuPerLbmolR(f.cv()));
         } else {
             tx.row("Density", "%.4g kg/m3 (%s basis; cubic %.4g kg/m3)", f.density(), f.densityBasis().label(),
                     f.molarMass() * 1e-3 / f.molarVolumeCubic());
@@ -122,11 +114,12 @@ final class PropsCommand implements Callable<Integer> {
         tx.row("k = Cp/Cv ideal gas / real", "%.4f / %.4f", f.kIdeal(), f.kReal());
         tx.row("Isentropic exponent", "%.4f", f.isentropicExponent());
         tx.row("Speed of sound", !Double.isFinite(f.speedOfSound()) ? "not defined (see warnings)"
-                : us ? String.format(Locale.ROOT, "%.1f ft/s", f.speedOfSound() / 0.3048)
+                : us ? String.format(Locale.ROOT, "%.1f ft/s", f.speedOfSound() / CustomaryUnits.M_PER_FT)
                 : String.format(Locale.ROOT, "%.1f m/s", f.speedOfSound()));
         if (us) {
             // K/Pa -> F/psi: a temperature difference of 1 K is 1.8 F
-            tx.row("Joule-Thomson coefficient", "%.4g F/psi", f.jouleThomson() * 1.8 * PA_PER_PSI);
+            tx.row("Joule-Thomson coefficient", "%.4g F/psi",
+                    f.jouleThomson() / CustomaryUnits.K_PER_R * CustomaryUnits.PA_PER_PSI);
         } else {
             tx.row("Joule-Thomson coefficient", "%.4g K/bar", f.jouleThomson() * 1e5);
         }

@@ -31,8 +31,25 @@ public final class CustomaryUnits {
     public static final double M3_PER_US_GAL = 3.785411784e-3;
     /** Watts per Btu per hour. */
     public static final double W_PER_BTU_PER_H = J_PER_BTU / 3600.0;
+    /** Moles per pound-mole (exact: 1000 x the pound in kg). */
+    public static final double MOL_PER_LBMOL = 1000.0 * KG_PER_LB;
 
     private CustomaryUnits() {
+    }
+
+    /** Molar energy in J/mol to Btu/lbmol. */
+    public static double jPerMolToBtuPerLbmol(double jPerMol) {
+        return jPerMol * MOL_PER_LBMOL / J_PER_BTU;
+    }
+
+    /** Molar heat capacity or entropy in J/(mol K) to Btu/(lbmol R). */
+    public static double jPerMolKToBtuPerLbmolR(double jPerMolK) {
+        return jPerMolToBtuPerLbmol(jPerMolK) * K_PER_R;
+    }
+
+    /** Molar volume in m3/mol to ft3/lbmol. */
+    public static double m3PerMolToFt3PerLbmol(double m3PerMol) {
+        return m3PerMol * MOL_PER_LBMOL / (M_PER_FT * M_PER_FT * M_PER_FT);
     }
 
     /** Pressure in Pa to psi (same base, gauge or absolute). */

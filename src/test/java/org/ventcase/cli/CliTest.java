@@ -276,6 +276,27 @@ class CliTest {
         assertTrue((bad.err() + bad.out()).contains("--units"), bad.err());
     }
 
+    @Test
+    void flashPrintsUsCustomaryUnitsWhenAsked() throws Exception {
+        String[] args = {"flash", "--fluid", "propane:0.7,n-butane:0.3", "--temperature", "40 C", "--pressure",
+                "10 bara"};
+        Run si = run(args);
+        Run us = run(java.util.stream.Stream.concat(java.util.Arrays.stream(args), java.util.stream.Stream.of(
+                "--units", "us")).toArray(String[]::new));
+        assertEquals(0, si.code(), si.err());
+        assertEquals(0, us.code(), us.err());
+        // Conversions by definition: lbmol = 453.59237 mol; Btu (IT) = 1055.05585262 J; lb/ft3 = 16.01846337 kg/m3
+        assertEquals(number(si.out(), "Feed enthalpy") * 453.59237 / 1055.05585262, number(us.out(), "Feed enthalpy"),
+                0.1);
+        assertEquals(number(si.out(), "Density") / 16.01846337, number(us.out(), "Density"), 0.01);
+        for (String unit : List.of("°F", "psia", "Btu/lbmol", "lb/ft3", "lb/lbmol")) {
+            assertTrue(us.out().contains(unit), unit + " in\n" + us.out());
+        }
+        for (String si1 : List.of("kg/m3", "J/mol", "kg/kmol")) {
+            assertFalse(us.out().contains(si1), si1 + " left in SI in\n" + us.out());
+        }
+    }
+
     /** The first number on the row whose label starts the line (after indentation). */
     private static double number(String out, String label) {
         String line = out.lines().filter(l -> l.strip().startsWith(label)).findFirst().orElseThrow(
