@@ -9,6 +9,8 @@ import java.util.Locale;
 import java.util.concurrent.Callable;
 
 import org.ventcase.casefile.JsonReports;
+import org.ventcase.report.DisplayUnits;
+import org.ventcase.report.UnitSystem;
 import org.ventcase.thermo.Compositions;
 import org.ventcase.thermo.mix.MixtureModel;
 import org.ventcase.thermo.mix.PhaseEnvelope;
@@ -39,8 +41,14 @@ final class EnvelopeCommand implements Callable<Integer> {
     @Option(names = "--csv", paramLabel = "FILE", description = "Also write the points as CSV (written atomically).")
     Path csv;
 
+    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
+            description = "Unit system of the printed summary: si or us (JSON and the CSV are always SI). "
+                    + "Default: ${DEFAULT-VALUE}.")
+    String units;
+
     @Override
     public Integer call() throws IOException {
+        UnitSystem system = UnitSystem.parse("--units", units);
         org.ventcase.thermo.Composition c = fluid.composition();
         MixtureModel mm = fluid.model(c, common.variant());
         PhaseEnvelope.Result r = new PhaseEnvelope(mm.model()).trace(c.fractions());
@@ -57,17 +65,23 @@ final class EnvelopeCommand implements Callable<Integer> {
             out.print(JsonReports.write(JsonReports.envelope(mm, c.fractions(), r)));
             return ExitCode.OK;
         }
+        DisplayUnits u = new DisplayUnits(system);
+        boolean us = system == UnitSystem.US;
+        java.util.function.DoubleFunction<String> temp = k -> us
+                ? u.format(DisplayUnits.Kind.TEMPERATURE, k).replace('\u00A0', ' ') : Text.temperature(k);
+        java.util.function.DoubleFunction<String> pres = pa -> us
+                ? u.format(DisplayUnits.Kind.PRESSURE_ABS, pa).replace('\u00A0', ' ')
+                : Text.pressure(pa, common.atmosphericPa());
         Text tx = new Text(out);
         tx.title("Phase envelope of " + fluid.fluid + "  [" + mm.model().variant().displayName() + "]");
         tx.row("Points traced", "%d", r.points().size());
         r.criticalPoint().ifPresentOrElse(
-                cp -> tx.row("Critical point", "%s, %s", Text.temperature(cp.temperatureK()),
-                        Text.pressure(cp.pressurePa(), common.atmosphericPa())),
+                cp -> tx.row("Critical point", "%s, %s", temp.apply(cp.temperatureK()), pres.apply(cp.pressurePa())),
                 () -> tx.row("Critical point", "not located (see warnings)"));
-        tx.row("Cricondenbar", "%s at %s", Text.pressure(r.cricondenbar().pressurePa(), common.atmosphericPa()),
-                Text.temperature(r.cricondenbar().temperatureK()));
-        tx.row("Cricondentherm", "%s at %s", Text.temperature(r.cricondentherm().temperatureK()),
-                Text.pressure(r.cricondentherm().pressurePa(), common.atmosphericPa()));
+        tx.row("Cricondenbar", "%s at %s", pres.apply(r.cricondenbar().pressurePa()),
+                temp.apply(r.cricondenbar().temperatureK()));
+        tx.row("Cricondentherm", "%s at %s", temp.apply(r.cricondentherm().temperatureK()),
+                pres.apply(r.cricondentherm().pressurePa()));
         if (csv != null) {
             tx.row("CSV written", csv.toString());
         }

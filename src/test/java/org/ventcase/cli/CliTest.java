@@ -297,6 +297,18 @@ class CliTest {
         }
     }
 
+    @Test
+    void envelopePrintsUsCustomaryUnitsWhenAsked() throws Exception {
+        Run si = run("envelope", "--fluid", "propane:0.7,n-butane:0.3");
+        Run us = run("envelope", "--fluid", "propane:0.7,n-butane:0.3", "--units", "us");
+        assertEquals(0, si.code(), si.err());
+        assertEquals(0, us.code(), us.err());
+        // Definitions: F = K x 1.8 - 459.67; psi = 6894.757293168361 Pa
+        assertEquals(number(si.out(), "Critical point") * 1.8 - 459.67, number(us.out(), "Critical point"), 0.01);
+        String cp = us.out().lines().filter(l -> l.contains("Critical point")).findFirst().orElseThrow();
+        assertTrue(cp.contains("°F") && cp.contains("psia ["), cp);
+    }
+
     /** The first number on the row whose label starts the line (after indentation). */
     private static double number(String out, String label) {
         String line = out.lines().filter(l -> l.strip().startsWith(label)).findFirst().orElseThrow(
