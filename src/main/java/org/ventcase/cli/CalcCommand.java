@@ -194,6 +194,6 @@ final class CalcCommand implements Callable<Integer> {
 
     private static void row(PrintWriter out, String label, String value) {
         // the sheet's no-break spaces between number and unit are plain spaces on a console
-        out.printf(Locale.ROOT, "   %-30s %s%n", label, value.replace('\u00A0', ' '));
+        out.printf(Locale.ROOT, "   %-30s %s%n", label, Text.plain(value));
     }
 }

@@ -68,9 +68,9 @@ final class EnvelopeCommand implements Callable<Integer> {
         DisplayUnits u = new DisplayUnits(system);
         boolean us = system == UnitSystem.US;
         java.util.function.DoubleFunction<String> temp = k -> us
-                ? u.format(DisplayUnits.Kind.TEMPERATURE, k).replace('\u00A0', ' ') : Text.temperature(k);
+                ? Text.plain(u.format(DisplayUnits.Kind.TEMPERATURE, k)) : Text.temperature(k);
         java.util.function.DoubleFunction<String> pres = pa -> us
-                ? u.format(DisplayUnits.Kind.PRESSURE_ABS, pa).replace('\u00A0', ' ')
+                ? Text.plain(u.format(DisplayUnits.Kind.PRESSURE_ABS, pa))
                 : Text.pressure(pa, common.atmosphericPa());
         Text tx = new Text(out);
         tx.title("Phase envelope of " + fluid.fluid + "  [" + mm.model().variant().displayName() + "]");

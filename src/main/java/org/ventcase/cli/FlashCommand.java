@@ -69,8 +69,8 @@ final class FlashCommand implements Callable<Integer> {
         boolean us = system == UnitSystem.US;
         DisplayUnits u = new DisplayUnits(system);
         tx.title(String.format(Locale.ROOT, "Flash of %s at %s, %s  [%s]", fluid.fluid,
-                us ? plain(u.format(DisplayUnits.Kind.TEMPERATURE, t)) : Text.temperature(t),
-                us ? plain(u.format(DisplayUnits.Kind.PRESSURE_ABS, p)) : Text.pressure(p, common.atmosphericPa()),
+                us ? Text.plain(u.format(DisplayUnits.Kind.TEMPERATURE, t)) : Text.temperature(t),
+                us ? Text.plain(u.format(DisplayUnits.Kind.PRESSURE_ABS, p)) : Text.pressure(p, common.atmosphericPa()),
                 mm.model().variant().displayName()));
         tx.row("Stability of the feed", f.stability().stable() ? "stable (one phase)"
                 : String.format(Locale.ROOT, "unstable (tangent-plane distance %.4g): splits", f.stability().minimumTpd()));
@@ -86,8 +86,8 @@ final class FlashCommand implements Callable<Integer> {
             tx.row("Phase", "%s, %.6f of the feed (molar)", ph.label().label(), ph.amount());
             tx.row("  Z", "%.6f", ph.z());
             if (us) {
-                tx.row("  Density", "%s (%s; cubic %s)", plain(u.plain(DisplayUnits.Kind.DENSITY, ph.density())),
-                        ph.densityBasis().label(), plain(u.plain(DisplayUnits.Kind.DENSITY, ph.densityCubic())));
+                tx.row("  Density", "%s (%s; cubic %s)", Text.plain(u.plain(DisplayUnits.Kind.DENSITY, ph.density())),
+                        ph.densityBasis().label(), Text.plain(u.plain(DisplayUnits.Kind.DENSITY, ph.densityCubic())));
                 // kg/kmol and lb/lbmol are the same number
                 tx.row("  Molar mass", "%.3f lb/lbmol", ph.molarMass());
             } else {
@@ -108,8 +108,4 @@ final class FlashCommand implements Callable<Integer> {
         return ExitCode.OK;
     }
 
-    /** Console text: the sheet's non-breaking spaces as plain ones. */
-    private static String plain(String s) {
-        return s.replace('\u00A0', ' ');
-    }
 }

@@ -79,8 +79,8 @@ final class PropsCommand implements Callable<Integer> {
         boolean us = system == UnitSystem.US;
         DisplayUnits u = new DisplayUnits(system);
         tx.title(String.format(Locale.ROOT, "%s at %s, %s  [%s]", c.name(),
-                us ? plain(u.format(DisplayUnits.Kind.TEMPERATURE, t)) : Text.temperature(t),
-                us ? plain(u.format(DisplayUnits.Kind.PRESSURE_ABS, p)) : Text.pressure(p, common.atmosphericPa()),
+                us ? Text.plain(u.format(DisplayUnits.Kind.TEMPERATURE, t)) : Text.temperature(t),
+                us ? Text.plain(u.format(DisplayUnits.Kind.PRESSURE_ABS, p)) : Text.pressure(p, common.atmosphericPa()),
                 f.variant().displayName()));
         tx.row("Real roots of the cubic (Z)", Text.roots(f.roots().physical()) + "  (" + f.roots().rootCase().words()
                 + ")");
@@ -92,8 +92,8 @@ final class PropsCommand implements Callable<Integer> {
         tx.row("Z (cubic root)", "%.6f", f.z());
         if (us) {
             tx.row("Density", "%s (%s basis; cubic %s)",
-                    plain(u.plain(DisplayUnits.Kind.DENSITY, f.density())), f.densityBasis().label(),
-                    plain(u.plain(DisplayUnits.Kind.DENSITY, f.molarMass() * 1e-3 / f.molarVolumeCubic())));
+                    Text.plain(u.plain(DisplayUnits.Kind.DENSITY, f.density())), f.densityBasis().label(),
+                    Text.plain(u.plain(DisplayUnits.Kind.DENSITY, f.molarMass() * 1e-3 / f.molarVolumeCubic())));
             tx.row("Molar volume", "%.6g ft3/lbmol", CustomaryUnits.m3PerMolToFt3PerLbmol(f.molarVolume()));
             tx.row("Fugacity coefficient", "%.6g", f.fugacityCoefficient(0));
             tx.row("Residual enthalpy H-H_ig", "%.1f Btu/lbmol", CustomaryUnits.jPerMolToBtuPerLbmol(f.residualEnthalpy()));
@@ -142,8 +142,4 @@ final class PropsCommand implements Callable<Integer> {
         }
     }
 
-    /** Console text: the sheet's non-breaking spaces as plain ones. */
-    private static String plain(String s) {
-        return s.replace('\u00A0', ' ');
-    }
 }

@@ -83,14 +83,14 @@ final class SatCommand implements Callable<Integer> {
         if (system == org.ventcase.report.UnitSystem.US) {
             org.ventcase.report.DisplayUnits u = new org.ventcase.report.DisplayUnits(system);
             tx.title(String.format(Locale.ROOT, "Saturation of %s  [%s]", c.name(), s.variant().displayName()));
-            tx.row("Temperature", plain(u.format(org.ventcase.report.DisplayUnits.Kind.TEMPERATURE, s.temperatureK())));
-            tx.row("Pressure", plain(u.format(org.ventcase.report.DisplayUnits.Kind.PRESSURE_ABS, s.pressurePa())));
+            tx.row("Temperature", Text.plain(u.format(org.ventcase.report.DisplayUnits.Kind.TEMPERATURE, s.temperatureK())));
+            tx.row("Pressure", Text.plain(u.format(org.ventcase.report.DisplayUnits.Kind.PRESSURE_ABS, s.pressurePa())));
             tx.row("Z liquid / vapour", "%.6f / %.6f", s.liquid().z(), s.vapor().z());
-            tx.row("Liquid density", plain(u.plain(org.ventcase.report.DisplayUnits.Kind.DENSITY, s.liquid().density()))
+            tx.row("Liquid density", Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.DENSITY, s.liquid().density()))
                     + " (" + s.liquid().densityBasis().label() + ")");
-            tx.row("Vapour density", plain(u.plain(org.ventcase.report.DisplayUnits.Kind.DENSITY, s.vapor().density()))
+            tx.row("Vapour density", Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.DENSITY, s.vapor().density()))
                     + " (" + s.vapor().densityBasis().label() + ")");
-            tx.row("Latent heat", plain(u.format(org.ventcase.report.DisplayUnits.Kind.SPECIFIC_ENERGY,
+            tx.row("Latent heat", Text.plain(u.format(org.ventcase.report.DisplayUnits.Kind.SPECIFIC_ENERGY,
                     s.latentHeatJkg())));
             Text.modelRows(tx, s.variant(), c, u);
             tx.warnings(s.warnings());
@@ -163,8 +163,4 @@ final class SatCommand implements Callable<Integer> {
         }
     }
 
-    /** The sheet's no-break spaces as plain spaces on a console. */
-    private static String plain(String s) {
-        return s.replace('\u00A0', ' ');
-    }
 }

@@ -53,6 +53,11 @@ final class Text {
                 (pa - atm) / 1e5);
     }
 
+    /** The sheet's no-break spaces (DisplayUnits) as plain spaces on a console. */
+    static String plain(String s) {
+        return s.replace('\u00A0', ' ');
+    }
+
     static String temperature(double k) {
         return String.format(Locale.ROOT, "%.2f K (%.2f C)", k, k - 273.15);
     }
@@ -70,8 +75,8 @@ final class Text {
         if (u != null && u.system() == org.ventcase.report.UnitSystem.US) {
             // molar mass: kg/kmol and lb/lbmol are the same number
             tx.row("Constants used", String.format(java.util.Locale.ROOT, "Tc %s, Pc %s, omega %.4f, M %.3f lb/lbmol",
-                    u.plain(org.ventcase.report.DisplayUnits.Kind.TEMPERATURE, d.constants().tcK()).replace('\u00A0', ' '),
-                    u.plain(org.ventcase.report.DisplayUnits.Kind.PRESSURE_ABS, d.constants().pcPa()).replace('\u00A0', ' '),
+                    plain(u.plain(org.ventcase.report.DisplayUnits.Kind.TEMPERATURE, d.constants().tcK())),
+                    plain(u.plain(org.ventcase.report.DisplayUnits.Kind.PRESSURE_ABS, d.constants().pcPa())),
                     d.constants().omega(), c.molarMass()));
         } else {
             tx.row("Constants used", String.format(java.util.Locale.ROOT,
