@@ -187,14 +187,8 @@ public final class PTFlash {
             if (sk < 1e-8) {
                 return null;
             }
-            if (it % 5 == 0 && den > 0) {
-                double lambda = num / den;
-                if (lambda > 0 && lambda < 0.99) {
-                    double f = lambda / (1 - lambda);
-                    for (int i = 0; i < n; i++) {
-                        lnK[i] += f * prevDelta[i];
-                    }
-                }
+            if (it % 5 == 0) {
+                accelerate(lnK, prevDelta, num, den);
             }
             slow = err > 0.7 * errPrev ? slow + 1 : 0;
             errPrev = err;
@@ -299,18 +293,30 @@ public final class PTFlash {
             }
             // The same dominant-eigenvalue acceleration as the first substitution stage (every fifth
             // step): substitution alone crawls where the ratio of successive steps is near 1.
-            if (it % 5 == 4 && den > 0) {
-                double lambda = num / den;
-                if (lambda > 0 && lambda < 0.99) {
-                    double f = lambda / (1 - lambda);
-                    for (int i = 0; i < n; i++) {
-                        lnK[i] += f * prevDelta[i];
-                    }
-                }
+            if (it % 5 == 4) {
+                accelerate(lnK, prevDelta, num, den);
             }
         }
         throw new ConvergenceException("PT flash successive substitution", s.ss, err,
                 String.format(Locale.US, "T = %.6g K, P = %.6g Pa, vapour fraction outside (0, 1)", t, p));
+    }
+
+    /**
+     * Dominant-eigenvalue extrapolation (DEM) of successive substitution:
+     * with lambda = |delta_k|^2 / (delta_k . delta_k-1) the estimated ratio of successive steps,
+     * ln K += lambda / (1 - lambda) delta_k, taken only for 0 < lambda < 0.99.
+     */
+    private static void accelerate(double[] lnK, double[] lastDelta, double num, double den) {
+        if (den <= 0) {
+            return;
+        }
+        double lambda = num / den;
+        if (lambda > 0 && lambda < 0.99) {
+            double f = lambda / (1 - lambda);
+            for (int i = 0; i < lnK.length; i++) {
+                lnK[i] += f * lastDelta[i];
+            }
+        }
     }
 
     static void compositions(double[] z, double[] k, double beta, double[] x, double[] y) {
