@@ -3,10 +3,7 @@ package org.ventcase.thermo;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.BufferedReader;
 import java.io.IOException;
-import java.io.InputStreamReader;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -95,23 +92,7 @@ class ReferenceSaturationTest {
     }
 
     private static List<List<String>> csv(String name) throws IOException {
-        List<List<String>> out = new ArrayList<>();
-        try (BufferedReader r = new BufferedReader(new InputStreamReader(
-                ReferenceSaturationTest.class.getResourceAsStream(name), StandardCharsets.UTF_8))) {
-            String line;
-            boolean header = true;
-            while ((line = r.readLine()) != null) {
-                if (line.startsWith("#") || line.isBlank()) {
-                    continue;
-                }
-                if (header) {
-                    header = false;
-                    continue;
-                }
-                out.add(ComponentLibrary.splitCsv(line, name));
-            }
-        }
-        return out;
+        return ReferenceCsv.rows(ReferenceSaturationTest.class, name);
     }
 
     /** {Psat, rhoL, rhoV, L} relative deviations of a variant at a row, and the result's warnings. */

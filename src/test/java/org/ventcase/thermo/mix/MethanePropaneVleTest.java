@@ -2,9 +2,6 @@ package org.ventcase.thermo.mix;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.BufferedReader;
-import java.io.InputStreamReader;
-import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -13,6 +10,7 @@ import org.ventcase.thermo.Component;
 import org.ventcase.thermo.ComponentLibrary;
 import org.ventcase.thermo.CubicModel;
 import org.ventcase.thermo.EosVariant;
+import org.ventcase.thermo.ReferenceCsv;
 
 /**
  * Bubble points of methane + propane against experiment. Check values: vle-methane-propane.csv,
@@ -42,36 +40,23 @@ class MethanePropaneVleTest {
         List<String> report = new ArrayList<>();
         List<String> failures = new ArrayList<>();
         int n = 0;
-        try (BufferedReader r = new BufferedReader(new InputStreamReader(
-                MethanePropaneVleTest.class.getResourceAsStream("vle-methane-propane.csv"), StandardCharsets.UTF_8))) {
-            String line;
-            boolean header = true;
-            while ((line = r.readLine()) != null) {
-                if (line.startsWith("#") || line.isBlank()) {
-                    continue;
-                }
-                if (header) {
-                    header = false;
-                    continue;
-                }
-                String[] f = line.split(",");
-                double t = Double.parseDouble(f[0]);
-                double p = Double.parseDouble(f[1]);
-                double x1 = Double.parseDouble(f[2]);
-                double y1 = Double.parseDouble(f[3]);
-                SaturationPoint b = sp.bubblePressure(t, new double[] {x1, 1 - x1});
-                double dp = b.pressurePa() / p - 1;
-                double dy = b.incipientComposition()[0] - y1;
-                String row = String.format(java.util.Locale.US, "T %.2f K x1 %.4f: P %.0f kPa vs %.0f (%+.2f %%), y1 %.4f vs %.4f (%+.4f)",
-                        t, x1, b.pressurePa() / 1e3, p / 1e3, 100 * dp, b.incipientComposition()[0], y1, dy);
-                report.add(row);
-                n++;
-                boolean lessCertain = t == 243.62 && p == 8320000;
-                double tolP = lessCertain ? 0.035 : TOL_P;
-                double tolY = lessCertain ? 0.012 : TOL_Y;
-                if (!(Math.abs(dp) <= tolP && Math.abs(dy) <= tolY)) {
-                    failures.add(row);
-                }
+        for (List<String> f : ReferenceCsv.rows(MethanePropaneVleTest.class, "vle-methane-propane.csv")) {
+            double t = Double.parseDouble(f.get(0));
+            double p = Double.parseDouble(f.get(1));
+            double x1 = Double.parseDouble(f.get(2));
+            double y1 = Double.parseDouble(f.get(3));
+            SaturationPoint b = sp.bubblePressure(t, new double[] {x1, 1 - x1});
+            double dp = b.pressurePa() / p - 1;
+            double dy = b.incipientComposition()[0] - y1;
+            String row = String.format(java.util.Locale.US, "T %.2f K x1 %.4f: P %.0f kPa vs %.0f (%+.2f %%), y1 %.4f vs %.4f (%+.4f)",
+                    t, x1, b.pressurePa() / 1e3, p / 1e3, 100 * dp, b.incipientComposition()[0], y1, dy);
+            report.add(row);
+            n++;
+            boolean lessCertain = t == 243.62 && p == 8320000;
+            double tolP = lessCertain ? 0.035 : TOL_P;
+            double tolY = lessCertain ? 0.012 : TOL_Y;
+            if (!(Math.abs(dp) <= tolP && Math.abs(dy) <= tolY)) {
+                failures.add(row);
             }
         }
         System.out.println("May et al. 2015 methane + propane, " + v + ":\n  " + String.join("\n  ", report));
