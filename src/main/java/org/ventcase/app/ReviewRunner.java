@@ -18,7 +18,6 @@ import org.ventcase.casefile.ReviewJson;
 import org.ventcase.casefile.ValidatedCase;
 import org.ventcase.report.CalculationSheet;
 import org.ventcase.report.ReviewSheets;
-import org.ventcase.report.SheetIdentity;
 import org.ventcase.review.ClaimedValues;
 import org.ventcase.review.Review;
 import org.ventcase.review.ReviewResult;
@@ -176,16 +175,11 @@ public final class ReviewRunner {
         }
     }
 
-    /** The review sheet's title block: the case's identity. */
-    static SheetIdentity identity(Outcome o, String toolVersion) {
-        return CaseSheets.identity(o.kase(), toolVersion);
-    }
-
     /** Writes the review PDF atomically. */
     public static void writePdf(Outcome o, Path target, CalculationSheet.PageSize size, String toolVersion)
             throws IOException {
-        CalculationSheet.write(ReviewSheets.from(o.result(), identity(o, toolVersion), o.caseName(), o.claimedName()),
-                target, size);
+        CalculationSheet.write(ReviewSheets.from(o.result(), CaseSheets.identity(o.kase(), toolVersion), o.caseName(),
+                o.claimedName()), target, size);
     }
 
     /** Writes the review JSON atomically. */

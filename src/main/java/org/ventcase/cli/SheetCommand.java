@@ -14,7 +14,6 @@ import org.ventcase.casefile.Problem;
 import org.ventcase.casefile.ValidatedCase;
 import org.ventcase.common.InvalidInputException;
 import org.ventcase.report.CalculationSheet;
-import org.ventcase.report.SheetIdentity;
 import org.ventcase.report.SheetModel;
 import org.ventcase.report.SheetModels;
 import org.ventcase.report.UnitSystem;
@@ -103,13 +102,9 @@ final class SheetCommand implements Callable<Integer> {
     static SheetModel caseModel(ValidatedCase kase, UnitSystem system, String version) {
         CaseInput in = CaseInputs.from(kase);
         CaseResult r = CaseCalculation.run(in);
-        return SheetModels.from(r, in, identity(kase, version), system);
+        return SheetModels.from(r, in, org.ventcase.app.CaseSheets.identity(kase, version), system);
     }
 
-    /** The title block of a case: its identity, the tool and version, the input hash. */
-    static SheetIdentity identity(ValidatedCase kase, String version) {
-        return org.ventcase.app.CaseSheets.identity(kase, version);
-    }
 
     /** The demo's sheet: the packaged demo case (the one 'ventcase demo' runs) through the case pipeline. */
     static SheetModel demoModel(UnitSystem system) {
