@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import org.ventcase.review.ReviewCells;
 import org.ventcase.review.ReviewQuantity;
 import org.ventcase.review.ReviewResult;
 import org.ventcase.review.Verdict;
@@ -71,33 +72,11 @@ public final class ReviewTable {
         List<Line> out = new ArrayList<>();
         for (ReviewResult.Row row : r.rows()) {
             ReviewQuantity q = row.quantity();
-            String claimed;
-            String computed;
-            String diff = "";
-            String rel = "";
-            if (q == ReviewQuantity.ORIFICE) {
-                claimed = row.claimedOrifice().orElse("");
-                computed = row.computedOrifice().orElse("-");
-            } else {
-                claimed = row.claimed().isPresent() ? q.format(row.claimed().getAsDouble()) : row.claimedText();
-                computed = row.computed().isPresent() ? q.format(row.computed().getAsDouble()) : "-";
-                if (row.difference().isPresent()) {
-                    diff = unsignedZero(q.formatDifference(row.difference().getAsDouble()));
-                }
-                if (row.relativeDifference().isPresent()) {
-                    rel = unsignedZero(String.format(Locale.ROOT, "%+.1f %%",
-                            row.relativeDifference().getAsDouble() * 100));
-                }
-            }
-            out.add(new Line(q, q.label(), claimed, computed, diff, rel, q.formatTolerance(row.tolerance()),
+            ReviewCells c = ReviewCells.of(row, "-");
+            out.add(new Line(q, q.label(), c.claimed(), c.computed(), c.difference(), c.relative(), c.tolerance(),
                     row.verdict(), row.withinModelUncertainty(), r.tolerances().changed(q)));
         }
         return out;
-    }
-
-    /** "-0.0 K" -> "0.0 K": a difference that rounds to zero has no direction to show. */
-    static String unsignedZero(String s) {
-        return s.matches("[-+]0(\\.0+)?( .*)?") ? s.substring(1) : s;
     }
 
     /** The possible causes under the table: every hint of every row, and why a row was not compared. */

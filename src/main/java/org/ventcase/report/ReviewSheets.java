@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.Locale;
 
 import org.ventcase.calc.CaseResult;
+import org.ventcase.review.ReviewCells;
 import org.ventcase.review.ReviewQuantity;
 import org.ventcase.review.ReviewResult;
 import org.ventcase.review.Verdict;
@@ -81,28 +82,18 @@ public final class ReviewSheets {
         return i < 0 ? s : s.substring(0, i) + NBSP + s.substring(i + 1);
     }
 
+    private static final String NOT_COMPUTED = "not computed";
+
     static SheetModel.Table deviationTable(ReviewResult r) {
         List<SheetModel.Row> rows = new ArrayList<>();
         for (ReviewResult.Row row : r.rows()) {
             ReviewQuantity q = row.quantity();
-            String claimed;
-            String computed;
-            String diff = "";
-            String rel = "";
-            if (q == ReviewQuantity.ORIFICE) {
-                claimed = row.claimedOrifice().orElse("");
-                computed = row.computedOrifice().orElse("not computed");
-            } else {
-                claimed = nb(q.format(row.claimed().getAsDouble()));
-                computed = row.computed().isPresent() ? nb(q.format(row.computed().getAsDouble())) : "not computed";
-                if (row.difference().isPresent()) {
-                    diff = nb(q.formatDifference(row.difference().getAsDouble()));
-                    rel = String.format(Locale.ROOT, "%+.1f" + NBSP + "%%", row.relativeDifference().getAsDouble() * 100);
-                }
-            }
+            ReviewCells c = ReviewCells.of(row, NOT_COMPUTED);
+            // a value and its unit stay on one line; the placeholder may wrap
+            String computed = c.computed().equals(NOT_COMPUTED) ? c.computed() : nb(c.computed());
             String verdict = row.verdict().label() + (row.withinModelUncertainty() ? ", within model uncertainty" : "");
-            rows.add(new SheetModel.Row(List.of(q.label(), claimed, computed, diff, rel,
-                    nb(q.formatTolerance(row.tolerance())), verdict), row.verdict() == Verdict.DISAGREES));
+            rows.add(new SheetModel.Row(List.of(q.label(), nb(c.claimed()), computed, nb(c.difference()),
+                    nb(c.relative()), nb(c.tolerance()), verdict), row.verdict() == Verdict.DISAGREES));
         }
         String note = String.format(Locale.ROOT, "%d agree, %d to check, %d disagree, %d not compared. Difference = "
                 + "claimed - computed; relative to the computed value.", r.count(Verdict.AGREES),

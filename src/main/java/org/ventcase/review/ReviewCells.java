@@ -1,0 +1,40 @@
+package org.ventcase.review;
+
+import java.util.Locale;
+
+/**
+ * The printed cells of one row of the deviation table, the same on the review screen and the
+ * review sheet: claimed, computed, difference (claimed - computed), relative difference and
+ * tolerance, each formatted by its quantity. A difference that rounds to zero is shown unsigned.
+ *
+ * @param claimed    the claimed value as formatted (or as written, when it could not be read)
+ * @param computed   the computed value, or the caller's placeholder when there is none
+ * @param difference claimed - computed, "" when not compared
+ * @param relative   the difference relative to the computed value, "" when not compared
+ * @param tolerance  the tolerance used
+ */
+public record ReviewCells(String claimed, String computed, String difference, String relative, String tolerance) {
+
+    /** The cells of {@code row}; {@code missing} stands where nothing was computed. */
+    public static ReviewCells of(ReviewResult.Row row, String missing) {
+        ReviewQuantity q = row.quantity();
+        String tol = q.formatTolerance(row.tolerance());
+        if (q == ReviewQuantity.ORIFICE) {
+            return new ReviewCells(row.claimedOrifice().orElse(""), row.computedOrifice().orElse(missing), "", "",
+                    tol);
+        }
+        String claimed = row.claimed().isPresent() ? q.format(row.claimed().getAsDouble()) : row.claimedText();
+        String computed = row.computed().isPresent() ? q.format(row.computed().getAsDouble()) : missing;
+        String diff = row.difference().isPresent()
+                ? unsignedZero(q.formatDifference(row.difference().getAsDouble())) : "";
+        String rel = row.relativeDifference().isPresent()
+                ? unsignedZero(String.format(Locale.ROOT, "%+.1f %%", row.relativeDifference().getAsDouble() * 100))
+                : "";
+        return new ReviewCells(claimed, computed, diff, rel, tol);
+    }
+
+    /** "-0.0 K" -> "0.0 K": a difference that rounds to zero has no direction to show. */
+    public static String unsignedZero(String s) {
+        return s.matches("[-+]0(\\.0+)?( .*)?") ? s.substring(1) : s;
+    }
+}
