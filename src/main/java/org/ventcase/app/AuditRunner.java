@@ -7,7 +7,6 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.time.LocalDate;
-import java.util.Comparator;
 import java.util.HexFormat;
 import java.util.List;
 import java.util.Optional;
@@ -93,28 +92,32 @@ public final class AuditRunner {
 
         /** The computed vessels, largest inventory first, at most {@link #TOP}. */
         public List<VesselAudit> topByInventory() {
-            return result.rows().stream().filter(v -> v.inventory().isPresent())
-                    .sorted(Comparator.comparingDouble((VesselAudit v) -> v.inventory().get().totalMassKg())
-                            .reversed())
-                    .limit(TOP).toList();
+            return result.topByInventory();
         }
 
         /** The vessels with a screening fire load, largest first, at most {@link #TOP}. */
         public List<VesselAudit> topByFireLoad() {
-            return result.rows().stream().filter(v -> v.fire().isPresent())
-                    .sorted(Comparator.comparingDouble((VesselAudit v) -> v.fire().get().reliefLoadKgPerS())
-                            .reversed())
-                    .limit(TOP).toList();
+            return result.topByFireLoad();
         }
 
-        /** Rows not (fully) computed: error rows and partial rows, in input order. */
+        /** The first {@link AuditResult#LISTED} rows not (fully) computed, in input order. */
         public List<VesselAudit> notComputed() {
-            return result.rows().stream().filter(v -> v.status() != VesselAudit.Status.OK).toList();
+            return result.notComputed();
         }
 
-        /** Rows whose installed valves are short of the screening required area, in input order. */
+        /** All rows not (fully) computed. */
+        public long notComputedCount() {
+            return result.digest().notComputedCount();
+        }
+
+        /** The first {@link AuditResult#LISTED} rows whose installed valves are short, in input order. */
         public List<VesselAudit> installedShort() {
-            return result.rows().stream().filter(v -> v.flags().contains(VesselAudit.Flag.INSTALLED_SHORT)).toList();
+            return result.installedShort();
+        }
+
+        /** All rows whose installed valves are short. */
+        public long installedShortCount() {
+            return result.digest().installedShortCount();
         }
     }
 

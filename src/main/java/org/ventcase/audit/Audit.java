@@ -11,6 +11,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.Consumer;
 
 import org.ventcase.calc.CaseCalculation;
 import org.ventcase.calc.CaseResult;
@@ -69,38 +70,57 @@ public final class Audit {
         return run(rows.size(), i -> rc.item(rows.get(i)), thresholds, threads, progress);
     }
 
-    /** Rows read, computed and reduced to their audit rows at a time by {@link #run(Register.Stream, int, Thresholds, int, Progress)}. */
+    /** Rows read, computed and handed on at a time by the streamed {@code run}. */
     public static final int CHUNK_ROWS = 2048;
 
     /**
-     * Runs the audit of a register read in chunks of {@link #CHUNK_ROWS}: read, compute in parallel,
-     * keep only the per-vessel audit rows, read on. Only the register text, one chunk of rows and
-     * the audit rows stay in memory; the output order is the input order.
-     *
-     * @param total the number of rows, for progress (the count of the register's records after the header)
+     * Runs the audit of a register read in chunks of {@link #CHUNK_ROWS}, keeping every row (the
+     * screen shows them). Memory grows with the register: a command-line run uses
+     * {@link #run(Register.Stream, int, Thresholds, int, Progress, Consumer)}.
      */
     public static AuditResult run(Register.Stream register, int total, Thresholds thresholds, int threads,
                                   Progress progress) {
+        List<VesselAudit> all = new ArrayList<>();
+        AuditResult r = run(register, total, thresholds, threads, progress, all::addAll);
+        return new AuditResult(all, r.digest(), r.site(), r.byArea(), r.byFluid(), r.thresholds(),
+                r.thresholdsOrigin());
+    }
+
+    /**
+     * Runs the audit of a register read in chunks of {@link #CHUNK_ROWS}: read a chunk, compute it in
+     * parallel, hand its rows in input order to {@code sink}, add them to the totals and summaries,
+     * read on. Only the register text, one chunk and the summaries stay in memory; the result holds
+     * no rows ({@link AuditResult#rows()} is empty).
+     *
+     * @param total the number of rows, for progress (the count of the register's records after the header)
+     * @param sink  receives each chunk's rows, in input order, on the calling thread
+     */
+    public static AuditResult run(Register.Stream register, int total, Thresholds thresholds, int threads,
+                                  Progress progress, Consumer<List<VesselAudit>> sink) {
         if (threads < 1) {
             throw InvalidInputException.invalid("threads", threads, "expected at least 1");
         }
         RegisterCases rc = new RegisterCases(register.origin());
-        List<VesselAudit> all = new ArrayList<>();
+        AuditResult.Builder acc = new AuditResult.Builder();
         AtomicInteger done = new AtomicInteger();
+        int seen = 0;
         ExecutorService pool = threads > 1 ? pool(threads) : null;
         try {
             for (List<RegisterRow> chunk = register.next(CHUNK_ROWS); !chunk.isEmpty();
                  chunk = register.next(CHUNK_ROWS)) {
                 List<RegisterRow> rows = chunk;
-                all.addAll(Arrays.asList(compute(rows.size(), i -> rc.item(rows.get(i)), pool, threads, done,
-                        Math.max(total, all.size() + rows.size()), progress)));
+                seen += rows.size();
+                List<VesselAudit> out = Arrays.asList(compute(rows.size(), i -> rc.item(rows.get(i)), pool, threads,
+                        done, Math.max(total, seen), progress));
+                sink.accept(out);
+                out.forEach(acc::add);
             }
         } finally {
             if (pool != null) {
                 pool.shutdownNow();
             }
         }
-        return AuditResult.of(all, thresholds);
+        return acc.build(thresholds, List.of());
     }
 
     /**

@@ -105,27 +105,142 @@ public final class AuditCsv {
         return cols;
     }
 
-    /** The CSV text. */
-    public static String text(AuditResult r) {
-        List<Col> cols = columns(r.components());
-        StringBuilder sb = new StringBuilder(256 * (r.rows().size() + 1));
+    private static String header(List<Col> cols) {
+        StringBuilder sb = new StringBuilder(64 * cols.size());
         for (int i = 0; i < cols.size(); i++) {
             sb.append(i == 0 ? "" : ",").append(Csv.text(cols.get(i).header()));
         }
-        sb.append('\n');
+        return sb.append('\n').toString();
+    }
+
+    /** One row's cells; ends with a newline unless {@code newline} is 0. */
+    private static String line(List<Col> cols, VesselAudit v, int newline) {
+        StringBuilder line = new StringBuilder(512);
+        for (int i = 0; i < cols.size(); i++) {
+            line.append(i == 0 ? "" : ",").append(cols.get(i).cell().apply(v));
+        }
+        return newline == 0 ? line.toString() : line.append('\n').toString();
+    }
+
+    /** The CSV text of an audit that kept its rows. */
+    public static String text(AuditResult r) {
+        if (r.rows().size() != r.rowCount()) {
+            throw new IllegalStateException("the audit did not keep its rows: write its CSV with a Spool");
+        }
+        List<Col> cols = columns(r.components());
+        StringBuilder sb = new StringBuilder(256 * (r.rows().size() + 1));
+        sb.append(header(cols));
         // lines are formatted in parallel and joined in row order: the text does not depend on scheduling
         List<VesselAudit> rows = r.rows();
-        String[] lines = java.util.stream.IntStream.range(0, rows.size()).parallel().mapToObj(k -> {
-            StringBuilder line = new StringBuilder(512);
-            for (int i = 0; i < cols.size(); i++) {
-                line.append(i == 0 ? "" : ",").append(cols.get(i).cell().apply(rows.get(k)));
-            }
-            return line.append('\n').toString();
-        }).toArray(String[]::new);
+        String[] lines = java.util.stream.IntStream.range(0, rows.size()).parallel()
+                .mapToObj(k -> line(cols, rows.get(k), 1)).toArray(String[]::new);
         for (String l : lines) {
             sb.append(l);
         }
         return sb.toString();
+    }
+
+    /**
+     * Writes the CSV of a streamed audit: each chunk's rows are formatted as they come and spilled
+     * to a scratch file beside the target, with their per-component masses; {@link #finish} writes
+     * the CSV atomically once the component columns are known (every component of a computed row,
+     * in order of first appearance, as {@link #text}). Memory holds one chunk and the component
+     * list, however long the register.
+     */
+    public static final class Spool implements java.util.function.Consumer<List<VesselAudit>>, AutoCloseable {
+        private final Path target;
+        private final Path scratch;
+        private final java.io.DataOutputStream out;
+        private final List<Col> base = columns(List.of());
+        private final java.util.LinkedHashMap<String, Integer> components = new java.util.LinkedHashMap<>();
+        private boolean closed;
+
+        public Spool(Path target) throws IOException {
+            this.target = target;
+            this.scratch = org.ventcase.common.AtomicFiles.scratch(target);
+            this.out = new java.io.DataOutputStream(new java.io.BufferedOutputStream(Files.newOutputStream(scratch),
+                    1 << 16));
+        }
+
+        @Override
+        public void accept(List<VesselAudit> chunk) {
+            String[] lines = java.util.stream.IntStream.range(0, chunk.size()).parallel()
+                    .mapToObj(k -> line(base, chunk.get(k), 0)).toArray(String[]::new);
+            try {
+                for (int k = 0; k < chunk.size(); k++) {
+                    byte[] b = lines[k].getBytes(StandardCharsets.UTF_8);
+                    out.writeInt(b.length);
+                    out.write(b);
+                    VesselAudit v = chunk.get(k);
+                    if (v.inventory().isEmpty()) {
+                        out.writeInt(-1);
+                        continue;
+                    }
+                    java.util.Map<String, Double> m = v.inventory().get().massPerComponentKg();
+                    out.writeInt(m.size());
+                    for (java.util.Map.Entry<String, Double> e : m.entrySet()) {
+                        out.writeInt(components.computeIfAbsent(e.getKey(), c -> components.size()));
+                        out.writeDouble(e.getValue());
+                    }
+                }
+            } catch (IOException e) {
+                throw new java.io.UncheckedIOException("cannot write the scratch file beside " + target + ": "
+                        + e.getMessage(), e);
+            }
+        }
+
+        /** Writes the CSV to the target atomically. */
+        public void finish() throws IOException {
+            out.close();
+            closed = true;
+            List<String> comps = new ArrayList<>(components.keySet());
+            org.ventcase.common.AtomicFiles.write(target, sink -> {
+                java.io.Writer w = new java.io.BufferedWriter(new java.io.OutputStreamWriter(sink,
+                        StandardCharsets.UTF_8), 1 << 16);
+                w.write(header(columns(comps)));
+                double[] mass = new double[comps.size()];
+                try (java.io.DataInputStream in = new java.io.DataInputStream(new java.io.BufferedInputStream(
+                        Files.newInputStream(scratch), 1 << 16))) {
+                    while (true) {
+                        int len;
+                        try {
+                            len = in.readInt();
+                        } catch (java.io.EOFException end) {
+                            break;
+                        }
+                        w.write(new String(in.readNBytes(len), StandardCharsets.UTF_8));
+                        int n = in.readInt();
+                        java.util.Arrays.fill(mass, 0.0);
+                        for (int i = 0; i < n; i++) {
+                            int idx = in.readInt();
+                            mass[idx] = in.readDouble();
+                        }
+                        for (double m : mass) {
+                            w.write(',');
+                            if (n >= 0) {
+                                w.write(num(m));
+                            }
+                        }
+                        w.write('\n');
+                    }
+                }
+                w.flush();
+            });
+        }
+
+        /** Deletes the scratch file (the target is left as it was unless {@link #finish} ran). */
+        @Override
+        public void close() {
+            if (!closed) {
+                try {
+                    out.close();
+                } catch (IOException ignored) {
+                    // the scratch file is deleted below
+                }
+                closed = true;
+            }
+            org.ventcase.common.AtomicFiles.discard(scratch);
+        }
     }
 
     /** Writes the CSV atomically (a temporary file in the target's folder, then moved into place). */

@@ -151,10 +151,23 @@ final class AuditCommand implements Callable<Integer> {
             err.println("ventcase: columns not used (not register columns, docs/audit.md): "
                     + String.join(", ", register.ignoredColumns()));
         }
-        AuditResult r = register != null ? Audit.run(register, registerRows, th, n, pb) : Audit.run(items, th, n, pb);
-        pb.finish();
-        if (csv != null) {
-            AuditCsv.write(r, csv);
+        AuditResult r;
+        if (register != null) {
+            // streamed: each chunk's rows go to the CSV spool and the summaries, then are dropped, so
+            // memory does not grow with the register
+            try (AuditCsv.Spool spool = csv == null ? null : new AuditCsv.Spool(csv)) {
+                r = Audit.run(register, registerRows, th, n, pb, spool == null ? rows -> { } : spool);
+                pb.finish();
+                if (spool != null) {
+                    spool.finish();
+                }
+            }
+        } else {
+            r = Audit.run(items, th, n, pb);
+            pb.finish();
+            if (csv != null) {
+                AuditCsv.write(r, csv);
+            }
         }
         if (pdf != null) {
             String t = title != null ? title : "Inventory audit of the vessel register " + registerName;
@@ -233,7 +246,7 @@ final class AuditCommand implements Callable<Integer> {
         out.println("VENTCASE AUDIT: " + register);
         DemoCommand.CAUTIONS.forEach(out::println);
         out.println();
-        out.printf(Locale.ROOT, "Rows %d: ok %d, partial %d, error %d%n", r.rows().size(),
+        out.printf(Locale.ROOT, "Rows %d: ok %d, partial %d, error %d%n", r.rowCount(),
                 r.count(VesselAudit.Status.OK), r.count(VesselAudit.Status.PARTIAL), r.count(VesselAudit.Status.ERROR));
         out.printf(Locale.ROOT, "Site inventory: %.1f t (liquid %.1f t, vapour %.1f t)%n", r.site().totalMassKg() / 1e3,
                 r.site().liquidMassKg() / 1e3, r.site().vapourMassKg() / 1e3);
@@ -253,13 +266,15 @@ final class AuditCommand implements Callable<Integer> {
                                 c.areasExceeding().keySet()));
             }
         }
-        long shortCount = r.rows().stream().filter(v -> v.flags().contains(VesselAudit.Flag.INSTALLED_SHORT)).count();
+        long shortCount = r.digest().installedShortCount();
         if (shortCount > 0) {
             out.println("Installed orifices short of the screening area: " + shortCount + " (flag in the CSV)");
         }
-        List<VesselAudit> bad = r.rows().stream().filter(v -> v.status() != VesselAudit.Status.OK).toList();
+        List<VesselAudit> bad = r.notComputed();
         if (!bad.isEmpty()) {
-            out.println("ROWS NOT COMPUTED (row, tag, status, field: reason)");
+            long all = r.digest().notComputedCount();
+            out.println("ROWS NOT COMPUTED (row, tag, status, field: reason)" + (all > bad.size() ? "; the first "
+                    + bad.size() + " of " + all + ", the CSV lists all" : ""));
             for (VesselAudit v : bad) {
                 out.printf(Locale.ROOT, "   %d %s %s %s%n", v.row(), v.tag(), v.status().word(),
                         v.error().map(AuditError::message).orElse(""));

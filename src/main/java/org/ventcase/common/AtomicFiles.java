@@ -108,6 +108,35 @@ public final class AtomicFiles {
         }
     }
 
+    /**
+     * A scratch file beside {@code target}, named as this class names its temporary files, so that
+     * the shutdown hook deletes it and a killed run's leftover is removed by the next write to the
+     * same target. The caller deletes it with {@link #discard} when done.
+     */
+    public static Path scratch(Path target) throws IOException {
+        Path abs = target.toAbsolutePath();
+        Path dir = abs.getParent();
+        if (!Files.isDirectory(dir)) {
+            throw new java.nio.file.NoSuchFileException(dir.toString(), null,
+                    "the folder does not exist (create it first; a mistyped folder is not created)");
+        }
+        removeStaleTemps(dir, abs.getFileName().toString());
+        Path tmp = newTemp(dir, abs.getFileName().toString());
+        PENDING.add(tmp);
+        return tmp;
+    }
+
+    /** Deletes a scratch file made by {@link #scratch} (best effort). */
+    public static void discard(Path scratch) {
+        try {
+            Files.deleteIfExists(scratch);
+        } catch (IOException ignored) {
+            // the next write to the same target removes it
+        } finally {
+            PENDING.remove(scratch);
+        }
+    }
+
     /** A temporary file of ours older than this is left over from a killed run. */
     static final long STALE_AFTER_MS = 10 * 60 * 1000L;
 

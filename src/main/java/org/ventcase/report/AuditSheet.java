@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -25,10 +24,10 @@ import org.ventcase.report.SheetModel.Table;
 public final class AuditSheet {
 
     /** Vessels listed in each "largest" table. */
-    public static final int TOP = 15;
+    public static final int TOP = AuditResult.TOP;
 
     /** Rows listed in the flagged and error tables before the sheet refers to the CSV. */
-    public static final int MAX_LISTED = 150;
+    public static final int MAX_LISTED = AuditResult.LISTED;
 
     private AuditSheet() {
     }
@@ -76,14 +75,13 @@ public final class AuditSheet {
         long ok = r.count(VesselAudit.Status.OK);
         long partial = r.count(VesselAudit.Status.PARTIAL);
         long error = r.count(VesselAudit.Status.ERROR);
-        long shortCount = r.rows().stream().filter(v -> v.flags().contains(VesselAudit.Flag.INSTALLED_SHORT)).count();
-        long withInstalled = r.rows().stream().filter(v -> v.fire().flatMap(VesselAudit.FireLoad::installed)
-                .isPresent()).count();
+        long shortCount = r.digest().installedShortCount();
+        long withInstalled = r.digest().withInstalled();
         long exceeded = r.thresholds().stream().filter(c -> c.siteExceeds() || !c.areasExceeding().isEmpty()).count();
 
         List<Table> results = new ArrayList<>();
         results.add(Table.keyValue("Audit summary", List.of(
-                Row.of("Input rows", Integer.toString(r.rows().size())),
+                Row.of("Input rows", Integer.toString(r.rowCount())),
                 Row.of("Computed (ok)", Long.toString(ok)),
                 Row.of("Inventory only, fire load not computed (partial)", Long.toString(partial)),
                 Row.of("Not computed (error): listed with row, field and reason", Long.toString(error)),
@@ -114,7 +112,7 @@ public final class AuditSheet {
         List<Table> inputs = new ArrayList<>();
         inputs.add(Table.keyValue("Register", List.of(
                 Row.of("Register", info.register()),
-                Row.of("Rows", Integer.toString(r.rows().size())),
+                Row.of("Rows", Integer.toString(r.rowCount())),
                 Row.of("Screening scenario (liquid)", "API Std 521 pool fire, wetted vessel, bare (F = 1), adequate "
                         + "drainage and fire-fighting, W = Q / L at the bubble point at P1"),
                 Row.of("Screening scenario (gas-filled)", "API Std 521 unwetted vessel, wall 593 C"),
@@ -209,11 +207,8 @@ public final class AuditSheet {
     }
 
     private static Table topInventory(AuditResult r) {
-        List<VesselAudit> vs = new ArrayList<>(r.rows().stream().filter(v -> v.inventory().isPresent()).toList());
-        vs.sort(Comparator.comparingDouble((VesselAudit v) -> -v.inventory().get().totalMassKg())
-                .thenComparingInt(VesselAudit::row));
         List<Row> rows = new ArrayList<>();
-        for (VesselAudit v : vs.subList(0, Math.min(TOP, vs.size()))) {
+        for (VesselAudit v : r.topByInventory()) {
             VesselAudit.Contents c = v.inventory().get();
             rows.add(Row.of(rowRef(v), v.tag(), v.area(), v.fluid(), String.format(Locale.ROOT, "%.1f m³",
                     c.totalVolumeM3()), String.format(Locale.ROOT, "%.0f %%", c.levelPercentVolume()),
@@ -224,11 +219,8 @@ public final class AuditSheet {
     }
 
     private static Table topFire(AuditResult r) {
-        List<VesselAudit> vs = new ArrayList<>(r.rows().stream().filter(v -> v.fire().isPresent()).toList());
-        vs.sort(Comparator.comparingDouble((VesselAudit v) -> -v.fire().get().reliefLoadKgPerS())
-                .thenComparingInt(VesselAudit::row));
         List<Row> rows = new ArrayList<>();
-        for (VesselAudit v : vs.subList(0, Math.min(TOP, vs.size()))) {
+        for (VesselAudit v : r.topByFireLoad()) {
             VesselAudit.FireLoad f = v.fire().get();
             String installed = f.installed().map(i -> i.designation() + (i.covers() ? ", covers" : ", SHORT")
                     + String.format(Locale.ROOT, " (%+.0f %%)", i.marginPercent())).orElse("not given");
@@ -242,21 +234,15 @@ public final class AuditSheet {
 
     private static Table flagged(AuditResult r) {
         List<Row> rows = new ArrayList<>();
-        int total = 0;
-        for (VesselAudit v : r.rows()) {
+        long total = r.digest().flaggedCount();
+        for (VesselAudit v : r.digest().flagged()) {
             List<VesselAudit.Flag> fl = v.flags().stream().filter(f -> f != VesselAudit.Flag.FIRE_NOT_COMPUTED)
                     .toList();
-            if (fl.isEmpty()) {
-                continue;
-            }
-            total++;
-            if (rows.size() < MAX_LISTED) {
-                String detail = v.fire().flatMap(VesselAudit.FireLoad::installed).map(i -> String.format(Locale.ROOT,
-                        "installed %s %s for %s required", i.designation(), mm2(i.areaM2()),
-                        mm2(v.fire().get().requiredAreaM2()))).orElse("");
-                rows.add(Row.of(rowRef(v), v.tag(), v.area(), String.join("; ", fl.stream()
-                        .map(VesselAudit.Flag::words).toList()), detail));
-            }
+            String detail = v.fire().flatMap(VesselAudit.FireLoad::installed).map(i -> String.format(Locale.ROOT,
+                    "installed %s %s for %s required", i.designation(), mm2(i.areaM2()),
+                    mm2(v.fire().get().requiredAreaM2()))).orElse("");
+            rows.add(Row.of(rowRef(v), v.tag(), v.area(), String.join("; ", fl.stream()
+                    .map(VesselAudit.Flag::words).toList()), detail));
         }
         return new Table("Flagged rows", List.of("Row", "Tag", "Area", "Flags", "Detail"),
                 List.of(0.5, 0.9, 1.6, 1.8, 2.4), rows, total == 0 ? "No row is flagged."
@@ -267,17 +253,11 @@ public final class AuditSheet {
 
     private static Table errors(AuditResult r) {
         List<Row> rows = new ArrayList<>();
-        int total = 0;
-        for (VesselAudit v : r.rows()) {
-            if (v.status() == VesselAudit.Status.OK) {
-                continue;
-            }
-            total++;
-            if (rows.size() < MAX_LISTED) {
-                rows.add(Row.of(rowRef(v), v.tag(), v.status().word(), v.error().map(e -> e.field()).orElse(""),
-                        v.error().map(e -> (e.value().isEmpty() ? "" : "'" + e.value() + "': ") + e.reason())
-                                .orElse("")));
-            }
+        long total = r.digest().notComputedCount();
+        for (VesselAudit v : r.notComputed()) {
+            rows.add(Row.of(rowRef(v), v.tag(), v.status().word(), v.error().map(e -> e.field()).orElse(""),
+                    v.error().map(e -> (e.value().isEmpty() ? "" : "'" + e.value() + "': ") + e.reason())
+                            .orElse("")));
         }
         return new Table("Rows not computed", List.of("Row", "Tag", "Status", "Field", "Reason"),
                 List.of(0.5, 0.9, 0.6, 1.0, 4.2), rows, total == 0 ? "Every row was computed."

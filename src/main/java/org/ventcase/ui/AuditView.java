@@ -188,7 +188,7 @@ final class AuditView {
 
     private void fill(VBox body, AuditRunner.Outcome o) {
         AuditResult r = o.result();
-        Label counts = new Label(Messages.get("audit.counts", r.rows().size(), o.count(VesselAudit.Status.OK),
+        Label counts = new Label(Messages.get("audit.counts", r.rowCount(), o.count(VesselAudit.Status.OK),
                 o.count(VesselAudit.Status.PARTIAL), o.count(VesselAudit.Status.ERROR)));
         counts.setId("audit-counts");
         counts.getStyleClass().add("governing-line");
@@ -254,7 +254,7 @@ final class AuditView {
                             cs.get(5).setMaxWidth(640);
                             return cs;
                         }, 0, 0);
-        body.getChildren().add(section("audit.notComputed", badNode, more(bad.size())));
+        body.getChildren().add(section("audit.notComputed", badNode, more(o.notComputedCount())));
 
         List<VesselAudit> shorts = o.installedShort();
         Node shortNode = shorts.isEmpty() ? new Label(Messages.get("audit.short.none"))
@@ -266,14 +266,14 @@ final class AuditView {
                                     ic.designation() + " (" + mm2(ic.areaM2()) + ")",
                                     String.format(Locale.ROOT, "%+.0f %%", ic.marginPercent()));
                         }, 3, 5);
-        body.getChildren().add(section("audit.short", shortNode, more(shorts.size())));
+        body.getChildren().add(section("audit.short", shortNode, more(o.installedShortCount())));
     }
 
     private static <T> List<T> limit(List<T> rows) {
         return rows.size() > AuditSheet.MAX_LISTED ? rows.subList(0, AuditSheet.MAX_LISTED) : rows;
     }
 
-    private static Label more(int n) {
+    private static Label more(long n) {
         Label l = new Label(n > AuditSheet.MAX_LISTED ? "First " + AuditSheet.MAX_LISTED + " of " + n
                 + " listed; the per-vessel CSV has them all." : "");
         l.getStyleClass().add("hint");

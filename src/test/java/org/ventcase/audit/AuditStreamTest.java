@@ -45,5 +45,72 @@ class AuditStreamTest {
                 2, Audit.Progress.NONE);
         assertEquals(w2.rows(), c2.rows());
         assertEquals(w2.site(), c2.site());
+        assertEquals(w2.digest(), c2.digest());
+    }
+
+    /**
+     * The command line's streamed audit keeps no rows, yet writes the same CSV byte for byte and the
+     * same totals and summaries as an audit that keeps them (a register longer than a chunk, with
+     * error rows and more than one fluid, so that component columns appear after the first chunk).
+     */
+    @Test
+    void streamedAuditWritesTheSameCsvAndSummariesWithoutKeepingRows(@org.junit.jupiter.api.io.TempDir Path dir)
+            throws Exception {
+        String text = Files.readString(Path.of("demo-cases/register/kestrel-point-register.csv"));
+        String[] lines = text.split("\n");
+        int header = 0;
+        while (lines[header].startsWith("#")) {
+            header++;
+        }
+        StringBuilder big = new StringBuilder(lines[header]).append('\n');
+        int n = 0;
+        while (n < Audit.CHUNK_ROWS + 300) {
+            for (int i = header + 1; i < lines.length && n < Audit.CHUNK_ROWS + 300; i++) {
+                if (!lines[i].startsWith("#") && !lines[i].isBlank()) {
+                    big.append(lines[i]).append('\n');
+                    n++;
+                }
+            }
+        }
+        String b = big.toString();
+        AuditResult kept = Audit.run(Register.parse(b, "big.csv"), Thresholds.none(), 2, Audit.Progress.NONE);
+        Path csv = dir.resolve("audit.csv");
+        AuditResult streamed;
+        try (AuditCsv.Spool spool = new AuditCsv.Spool(csv)) {
+            streamed = Audit.run(Register.stream(b, "big.csv"), Register.countRows(b, "big.csv"), Thresholds.none(), 2,
+                    Audit.Progress.NONE, spool);
+            spool.finish();
+        }
+        assertEquals(0, streamed.rows().size(), "the streamed audit keeps no rows");
+        assertEquals(kept.rowCount(), streamed.rowCount());
+        assertEquals(AuditCsv.text(kept), Files.readString(csv));
+        assertEquals(kept.digest(), streamed.digest());
+        assertEquals(kept.site(), streamed.site());
+        assertEquals(kept.byArea(), streamed.byArea());
+        assertEquals(kept.byFluid(), streamed.byFluid());
+        org.junit.jupiter.api.Assertions.assertTrue(kept.digest().notComputedCount() > 0,
+                "the register has rows that are not computed (the demo's error rows)");
+        try (var left = Files.list(dir)) {
+            assertEquals(java.util.List.of(csv), left.toList(), "the scratch file is gone");
+        }
+    }
+
+    /** The summaries of the kept rows are what sorting and filtering all rows gives. */
+    @Test
+    void digestListsEqualSortingAllRows() throws Exception {
+        String text = Files.readString(Path.of("demo-cases/register/kestrel-point-register.csv"));
+        AuditResult r = Audit.run(Register.parse(text, "kp.csv"), Thresholds.none(), 2, Audit.Progress.NONE);
+        java.util.List<VesselAudit> byMass = r.rows().stream().filter(v -> v.inventory().isPresent())
+                .sorted(java.util.Comparator.comparingDouble((VesselAudit v) -> v.inventory().get().totalMassKg())
+                        .reversed()).limit(AuditResult.TOP).toList();
+        assertEquals(byMass, r.topByInventory());
+        java.util.List<VesselAudit> byFire = r.rows().stream().filter(v -> v.fire().isPresent())
+                .sorted(java.util.Comparator.comparingDouble((VesselAudit v) -> v.fire().get().reliefLoadKgPerS())
+                        .reversed()).limit(AuditResult.TOP).toList();
+        assertEquals(byFire, r.topByFireLoad());
+        assertEquals(r.rows().stream().filter(v -> v.status() != VesselAudit.Status.OK).toList(), r.notComputed());
+        for (VesselAudit.Status s : VesselAudit.Status.values()) {
+            assertEquals(r.rows().stream().filter(v -> v.status() == s).count(), r.count(s));
+        }
     }
 }
