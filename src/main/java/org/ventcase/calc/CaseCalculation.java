@@ -132,15 +132,18 @@ public final class CaseCalculation {
      *
      * @param levelCurve the wetted fire's load against fill level (the scenario re-run over 19 levels)
      * @param envelope   the phase envelope of a mixture
+     * @param expansion  the fire scenarios' isenthalpic expansion to the back pressure (outlet temperature,
+     *                   brittle-fracture and outlet-condensation warnings); loads, areas and orifices do not
+     *                   depend on it
      */
-    public record Options(boolean levelCurve, boolean envelope) {
+    public record Options(boolean levelCurve, boolean envelope, boolean expansion) {
         /** Everything: what the sheet, the results JSON and the wizard show. */
-        public static final Options FULL = new Options(true, true);
+        public static final Options FULL = new Options(true, true, true);
         /**
          * The numbers of each scenario and of the inventory only, through the same code as
          * {@link #FULL}, so they are identical (the audit's screening path).
          */
-        public static final Options SCREENING = new Options(false, false);
+        public static final Options SCREENING = new Options(false, false, false);
     }
 
     /** Why the parts left out by {@link Options#SCREENING} are absent. */
@@ -408,7 +411,7 @@ public final class CaseCalculation {
         return FireLoadCurve.overLevels(c.in().level().percentOfVolumeIn(c.in().vessel()), LEVEL_CURVE_FROM_PERCENT,
                 LEVEL_CURVE_TO_PERCENT, LEVEL_CURVE_STEPS, pct -> {
                     MixtureFireResult r = MixtureFire.run(fireInput(c, f.fireFighting(), env, f.relieving(),
-                            Level.ofPercentOfVolume(pct)));
+                            Level.ofPercentOfVolume(pct)), null, false);
                     return new FireLoadCurve.Point(r.vessel().levelPercentVolume(), r.vessel().levelPercentHeight(),
                             r.vessel().levelM(), r.vessel().fire().area(), r.heat().heatW(), r.reliefLoadKgPerS(),
                             r.sizing().areaM2());
@@ -420,13 +423,14 @@ public final class CaseCalculation {
         if (f.factor() instanceof CaseInput.InsulationFactor) {
             // T1 does not depend on F: a first pass with any factor gives it.
             MixtureFireResult first = MixtureFire.run(fireInput(c, f.fireFighting(), EnvironmentFactors.byKey("bare"),
-                    f.relieving()));
+                    f.relieving()), null, false);
             env = factor(f.factor(), first.boiling().temperatureK());
         } else {
             env = factor(f.factor(), Double.NaN);
         }
         // the vessel at the case's level is the inventory's (same vessel, level and exposure)
-        MixtureFireResult r = MixtureFire.run(fireInput(c, f.fireFighting(), env, f.relieving()), c.level());
+        MixtureFireResult r = MixtureFire.run(fireInput(c, f.fireFighting(), env, f.relieving()), c.level(),
+                c.options().expansion());
         o.t1 = OptionalDouble.of(r.boiling().temperatureK());
         o.q = OptionalDouble.of(r.heat().heatW());
         o.latent = OptionalDouble.of(r.latentHeat().usedJPerKg());
@@ -471,7 +475,7 @@ public final class CaseCalculation {
         String at = "";
         if (f.factor() instanceof CaseInput.InsulationFactor) {
             MixtureFireResult first = MixtureFire.run(fireInput(c, f.fireFighting(), EnvironmentFactors.byKey("bare"),
-                    f.relieving()));
+                    f.relieving()), null, false);
             env = factor(f.factor(), first.boiling().temperatureK());
             at = "the initial bubble point at P1";
         } else {
@@ -538,7 +542,7 @@ public final class CaseCalculation {
     private static void gasFilled(Context c, CaseInput.GasFilledFire f, double p1, Out o) {
         GasFilledFireResult r = GasFilledFire.run(new GasFilledFireInput(c.liquid(), c.in().vessel(),
                 c.in().exposure(), GasFilledFireInput.AreaBasis.BELOW_FIRE_HEIGHT, p1, c.inv().pressurePa(),
-                c.inv().temperatureK(), f.wallTemperatureK(), c.in().device().gas()));
+                c.inv().temperatureK(), f.wallTemperatureK(), c.in().device().gas()), c.options().expansion());
         o.t1 = OptionalDouble.of(r.load().relievingTemperatureK());
         o.w = OptionalDouble.of(r.load().massFlowKgPerS());
         o.area = OptionalDouble.of(r.sizing().areaM2());

@@ -39,6 +39,14 @@ public final class GasFilledFire {
 
     /** Runs the case. */
     public static GasFilledFireResult run(GasFilledFireInput in) {
+        return run(in, true);
+    }
+
+    /**
+     * Runs the case; {@code expansion} false leaves out the isenthalpic expansion to the back
+     * pressure (step, warnings, result), which changes no load, area or orifice (a screening run).
+     */
+    public static GasFilledFireResult run(GasFilledFireInput in, boolean expansion) {
         LinkedHashSet<String> warnings = new LinkedHashSet<>(in.fluid().kijWarnings());
         Vessel v = in.vessel();
         double area;
@@ -77,9 +85,11 @@ public final class GasFilledFire {
         double fPrime = UnwettedVesselFire.fPrimeSi(gs.coefficientC(), in.device().kd(), in.wallTemperatureK(), t1);
         double aFPrimeMm2 = fPrime * area / Math.sqrt(in.relievingPressurePa() / 1000.0);
         double ratio = aFPrimeMm2 * 1e-6 / gs.areaM2();
-        IsenthalpicExpansion.Result ex = IsenthalpicExpansion.toBackPressure(in.fluid(), gas,
-                in.device().backPressurePa(), in.device().minimumDesignMetalTemperatureK());
-        warnings.addAll(ex.warnings());
+        java.util.Optional<IsenthalpicExpansion.Result> ex = expansion
+                ? java.util.Optional.of(IsenthalpicExpansion.toBackPressure(in.fluid(), gas,
+                        in.device().backPressurePa(), in.device().minimumDesignMetalTemperatureK()))
+                : java.util.Optional.empty();
+        ex.ifPresent(e -> warnings.addAll(e.warnings()));
         warnings.addAll(gas.warnings());
         List<TraceStep> trace = new ArrayList<>();
         trace.add(TraceStep.of("Exposed surface A'").equation("A' = inside surface exposed to the fire")
@@ -106,7 +116,7 @@ public final class GasFilledFire {
                 .out("Ratio to the EOS-based area", "%.4f", ratio)
                 .note("in critical flow with Kb = Kc = 1 the ratio is 1/sqrt(Z): what the ideal-gas form leaves out")
                 .build());
-        trace.add(ScenarioSupport.expansionStep(ex));
+        ex.ifPresent(e -> trace.add(ScenarioSupport.expansionStep(e)));
         return new GasFilledFireResult(in, area, rule, load, gas, gs, fPrime, aFPrimeMm2 * 1e-6, ratio, ex, trace,
                 new ArrayList<>(warnings));
     }

@@ -17,14 +17,14 @@ import org.ventcase.device.GasSizingResult;
  * @param fPrime             F' of the area form (SI)
  * @param areaFromFPrimeM2   A = F' A' / sqrt(P1), m2 (ideal gas, Z = 1, critical flow)
  * @param fPrimeRatio        areaFromFPrime / sizing area (equals 1/sqrt(Z) in critical flow with Kb = Kc = 1)
- * @param expansion          the gas after isenthalpic expansion to the back pressure
+ * @param expansion          the gas after isenthalpic expansion to the back pressure; empty in a screening run
  * @param trace              the calculation steps in order
  * @param warnings           what the user must know (always the wall-rupture caution)
  */
 public record GasFilledFireResult(GasFilledFireInput input, double exposedAreaM2, String areaRule,
                                   UnwettedVesselFireResult load, RelievedFluid relievedGas, GasSizingResult sizing,
                                   double fPrime, double areaFromFPrimeM2, double fPrimeRatio,
-                                  IsenthalpicExpansion.Result expansion, List<TraceStep> trace,
+                                  java.util.Optional<IsenthalpicExpansion.Result> expansion, List<TraceStep> trace,
                                   List<String> warnings) {
     public GasFilledFireResult {
         trace = List.copyOf(trace);

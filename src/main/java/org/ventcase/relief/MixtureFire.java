@@ -60,7 +60,7 @@ public final class MixtureFire {
 
     /** Runs the case. */
     public static MixtureFireResult run(MixtureFireInput in) {
-        return run(in, null);
+        return run(in, null, true);
     }
 
     /**
@@ -68,6 +68,16 @@ public final class MixtureFire {
      * level and exposure (the case calculation has it from the inventory); {@code null} evaluates it.
      */
     public static MixtureFireResult run(MixtureFireInput in, LevelState known) {
+        return run(in, known, true);
+    }
+
+    /**
+     * Runs the case as {@link #run(MixtureFireInput, LevelState)}; {@code expansion} false leaves out
+     * the isenthalpic expansion to the back pressure (its step, warnings and result), which changes
+     * no load, area or orifice: for callers that show none of it (the load-against-level points, the
+     * audit's screening run).
+     */
+    public static MixtureFireResult run(MixtureFireInput in, LevelState known, boolean expansion) {
         List<TraceStep> trace = new ArrayList<>();
         LinkedHashSet<String> warnings = new LinkedHashSet<>(in.fluid().kijWarnings());
         MixtureSpec spec = in.fluid();
@@ -149,10 +159,14 @@ public final class MixtureFire {
                 .source("API Std 526 effective orifice areas").out("Orifice", os.designation())
                 .note(os.ruleApplied()).build());
 
-        IsenthalpicExpansion.Result ex = IsenthalpicExpansion.toBackPressure(spec, vap, in.device().backPressurePa(),
-                in.device().minimumDesignMetalTemperatureK());
-        warnings.addAll(ex.warnings());
-        trace.add(ScenarioSupport.expansionStep(ex));
+        java.util.Optional<IsenthalpicExpansion.Result> ex = java.util.Optional.empty();
+        if (expansion) {
+            IsenthalpicExpansion.Result e = IsenthalpicExpansion.toBackPressure(spec, vap, in.device().backPressurePa(),
+                    in.device().minimumDesignMetalTemperatureK());
+            warnings.addAll(e.warnings());
+            trace.add(ScenarioSupport.expansionStep(e));
+            ex = java.util.Optional.of(e);
+        }
         warnings.addAll(vap.warnings());
         return new MixtureFireResult(in, rp, vs, heat, b, ld.latent(), ld.displacement(), ld.w(), vap, gs, os,
                 liquidMass, ex, trace, new ArrayList<>(warnings));

@@ -22,7 +22,8 @@ import org.ventcase.vessel.LevelState;
  * @param sizing           API 520 gas sizing
  * @param orifice          API 526 orifice selection
  * @param liquidMassKg     liquid in the vessel at the level, at relieving conditions, kg
- * @param expansion        the relieved vapour after isenthalpic expansion to the back pressure
+ * @param expansion        the relieved vapour after isenthalpic expansion to the back pressure; empty where the
+ *                         caller did not ask for it (the load-against-level points, a screening run)
  * @param trace            the calculation steps in order
  * @param warnings         everything the user must see
  */
@@ -30,7 +31,7 @@ public record MixtureFireResult(MixtureFireInput input, RelievingPressureResult 
                                 HeatInputResult heat, BoilingState boiling, LatentHeatGuard.Result latentHeat,
                                 double displacementFactor, double reliefLoadKgPerS, RelievedFluid relievedVapour,
                                 GasSizingResult sizing, OrificeSelection orifice, double liquidMassKg,
-                                IsenthalpicExpansion.Result expansion, List<TraceStep> trace, List<String> warnings) {
+                                java.util.Optional<IsenthalpicExpansion.Result> expansion, List<TraceStep> trace, List<String> warnings) {
     public MixtureFireResult {
         trace = List.copyOf(trace);
         warnings = List.copyOf(warnings);

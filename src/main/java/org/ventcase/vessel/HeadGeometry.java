@@ -233,8 +233,21 @@ final class HeadGeometry {
         if (head instanceof Head.Hemispherical) {
             return Math.PI * radius * h;
         }
-        return horizontalAreaByQuadrature(h);
+        // the wetted area and the fire-exposed area of one level ask for the same value: the last one
+        // is kept (an immutable pair, so a head shared between threads stays correct)
+        Memo m = lastArea;
+        if (m != null && m.h() == h) {
+            return m.value();
+        }
+        double a = horizontalAreaByQuadrature(h);
+        lastArea = new Memo(h, a);
+        return a;
     }
+
+    private record Memo(double h, double value) {
+    }
+
+    private volatile Memo lastArea;
 
     /** Quadrature path for the volume, whatever the head; package-private so tests can compare with closed forms. */
     double horizontalVolumeByQuadrature(double h) {
