@@ -97,22 +97,23 @@ def main():
     ap.add_argument("--jar", default="target/ventcase.jar")
     ap.add_argument("--java", default="java")
     ap.add_argument("--only", default="", help="comma-separated command names to run")
+    ap.add_argument("--via", default="both", choices=["jar", "launcher", "both"],
+                    help="start each command as 'java -jar JAR', through bin/ventcase (the launcher), or both")
     a = ap.parse_args()
     run = timed_gnu if os.path.exists("/usr/bin/time") else timed
     tmp = tempfile.mkdtemp(prefix="ventcase-bench-")
-    java = [a.java, "-jar", a.jar]
-    cmds = [("props", java + ["props", "--fluid", "propane", "--temperature", "40 C", "--pressure", "20 bara"]),
-            ("calc LPG sphere", java + ["calc", "demo-cases/lpg-sphere-mixture.json"]),
-            ("sheet LPG sphere", java + ["sheet", "demo-cases/lpg-sphere-mixture.json", "-o",
-                                         os.path.join(tmp, "sheet.pdf")])]
-    for n in [int(x) for x in a.rows.split(",") if x]:
-        reg = os.path.join(tmp, f"register-{n}.csv")
-        build_register(n, reg)
-        cmds.append((f"audit {n} rows", java + ["audit", reg, "-o", os.path.join(tmp, f"audit-{n}.csv")]))
+    starts = []
+    if a.via in ("jar", "both"):
+        starts.append(("", [a.java, "-jar", a.jar]))
+    if a.via in ("launcher", "both"):
+        starts.append(("bin/ventcase ", [os.path.join(ROOT, "bin", "ventcase")]))
+    cmds = []
+    for label, java in starts:
+        cmds += commands(label, java, tmp, a.rows)
     only = [s.strip() for s in a.only.split(",") if s.strip()]
-    print(f"{'command':22s} {'runs':>4s} {'min s':>8s} {'median s':>9s} {'max s':>8s} {'peak RSS MiB':>13s}")
+    print(f"{'command':34s} {'runs':>4s} {'min s':>8s} {'median s':>9s} {'max s':>8s} {'peak RSS MiB':>13s}")
     for name, cmd in cmds:
-        if only and not any(name.startswith(o) for o in only):
+        if only and not any(o in name for o in only):
             continue
         walls, rss = [], []
         for _ in range(a.runs):
@@ -123,9 +124,23 @@ def main():
             walls.append(wall)
             rss.append(m)
         if walls:
-            print(f"{name:22s} {len(walls):4d} {min(walls):8.2f} {statistics.median(walls):9.2f} {max(walls):8.2f} "
+            print(f"{name:34s} {len(walls):4d} {min(walls):8.2f} {statistics.median(walls):9.2f} {max(walls):8.2f} "
                   f"{max(rss) / 1024:13.0f}")
             sys.stdout.flush()
+
+
+def commands(label, java, tmp, rows):
+    """The benchmarked command lines, each started by `java` (a list)."""
+    cmds = [(label + "props", java + ["props", "--fluid", "propane", "--temperature", "40 C", "--pressure", "20 bara"]),
+            (label + "calc LPG sphere", java + ["calc", "demo-cases/lpg-sphere-mixture.json"]),
+            (label + "sheet LPG sphere", java + ["sheet", "demo-cases/lpg-sphere-mixture.json", "-o",
+                                                 os.path.join(tmp, "sheet.pdf")])]
+    for n in [int(x) for x in rows.split(",") if x]:
+        reg = os.path.join(tmp, f"register-{n}.csv")
+        if not os.path.exists(reg):
+            build_register(n, reg)
+        cmds.append((label + f"audit {n} rows", java + ["audit", reg, "-o", os.path.join(tmp, f"audit-{n}.csv")]))
+    return cmds
 
 
 if __name__ == "__main__":

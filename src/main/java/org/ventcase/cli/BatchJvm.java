@@ -14,7 +14,10 @@ import java.util.Optional;
  * machine the JVM picks G1 by default, which answers a high allocation rate by growing the heap:
  * a 100,000-row register peaked at 2.0-2.5 GB resident with G1 against 0.54 GB with the serial
  * collector, which was also faster (20.8 s against 24.2 s; whole-process runs,
- * tools/bench_whole_process.py). A jar cannot name JVM options, so the command starts itself once
+ * tools/bench_whole_process.py). The child also runs with the client (C1) compiler only
+ * ({@code -XX:TieredStopAtLevel=1}): on the 2-core machine the optimising compiler's work competed
+ * with the two workers, and a 10,000-row audit took 5.7-6.6 s with it against 2.9-3.7 s without it
+ * (100,000 rows: 25.1 s against 24.8 s; 2026-12-03, three runs each). A jar cannot name JVM options, so the command starts itself once
  * more with them; the child inherits the standard streams and its exit code is returned. Set
  * {@code VENTCASE_FORK=0} (or start java with your own -Xmx or -XX:+Use...GC) to run in the first
  * JVM instead.
@@ -59,12 +62,19 @@ final class BatchJvm {
         List<String> cmd = new ArrayList<>();
         cmd.add(java.get());
         // the user's own JVM options (system properties, agents) go to the child as well
-        for (String a : ManagementFactory.getRuntimeMXBean().getInputArguments()) {
+        List<String> jvmArgs = ManagementFactory.getRuntimeMXBean().getInputArguments();
+        for (String a : jvmArgs) {
             if (!a.startsWith("-D" + CHILD_PROPERTY)) {
                 cmd.add(a);
             }
         }
         cmd.add("-XX:+UseSerialGC");
+        if (jvmArgs.stream().noneMatch(a -> a.startsWith("-XX:TieredStopAtLevel")
+                || a.startsWith("-XX:-TieredCompilation"))) {
+            // the client compiler only: the optimising compiler's work competes with the workers on a
+            // small machine and does not pay back within an audit's run (measured, see the class comment)
+            cmd.add("-XX:TieredStopAtLevel=1");
+        }
         cmd.add("-D" + CHILD_PROPERTY + "=true");
         cmd.add("-cp");
         cmd.add(cp);

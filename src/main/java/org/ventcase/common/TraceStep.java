@@ -194,6 +194,12 @@ public final class TraceStep {
         }
 
         /** An output formatted as String.format(Locale.US, format, args) when it is read. */
+        /** An output made when it is read (see {@link LazyText}). */
+        public Builder out(String name, java.util.function.Supplier<String> value) {
+            put(outNames, outValues, name, new Made(value));
+            return this;
+        }
+
         public Builder out(String name, String format, Object... args) {
             put(outNames, outValues, name, new Deferred(format, args));
             return this;
@@ -207,6 +213,12 @@ public final class TraceStep {
         }
 
         /** A note formatted as String.format(Locale.US, format, args) when it is read. */
+        /** A note made when it is read (see {@link LazyText}). */
+        public Builder note(java.util.function.Supplier<String> n) {
+            notes.add(new Made(n));
+            return this;
+        }
+
         public Builder note(String format, Object... args) {
             notes.add(new Deferred(format, args));
             return this;

@@ -111,13 +111,13 @@ public final class GasSizing {
 
     /** Required area with the regime chosen from P2/P1. */
     public static GasSizingResult size(GasSizingInput in) {
-        List<String> trace = new ArrayList<>();
+        List<org.ventcase.common.LazyText> trace = new ArrayList<>();
         List<String> warnings = new ArrayList<>();
         double wKgH = in.massFlowKgPerS() * 3600.0;
         double p1 = in.p1Pa() / 1000.0;
         double p2 = in.p2Pa() / 1000.0;
         double r = in.p2Pa() / in.p1Pa();
-        trace.add(fmt("Units of the standard: W = %.6g kg/s x 3600 = %.6g kg/h; P1 = %.6g kPa abs; P2 = %.6g kPa abs",
+        trace.add(org.ventcase.common.LazyText.format("Units of the standard: W = %.6g kg/s x 3600 = %.6g kg/h; P1 = %.6g kPa abs; P2 = %.6g kPa abs",
                 in.massFlowKgPerS(), wKgH, p1, p2));
 
         double c;
@@ -126,18 +126,18 @@ public final class GasSizing {
             double k = in.k().getAsDouble();
             c = coefficientC(k);
             rc = criticalPressureRatio(k);
-            trace.add(fmt("C = 0.03948 sqrt(k (2/(k+1))^((k+1)/(k-1))) = %.6g (k = %.6g)", c, k));
-            trace.add(fmt("Critical pressure ratio (2/(k+1))^(k/(k-1)) = %.6g; P2/P1 = %.6g", rc, r));
+            trace.add(org.ventcase.common.LazyText.format("C = 0.03948 sqrt(k (2/(k+1))^((k+1)/(k-1))) = %.6g (k = %.6g)", c, k));
+            trace.add(org.ventcase.common.LazyText.format("Critical pressure ratio (2/(k+1))^(k/(k-1)) = %.6g; P2/P1 = %.6g", rc, r));
         } else {
             c = C_SI_UNKNOWN_K;
             rc = UNKNOWN_K_CRITICAL_RATIO;
-            trace.add(fmt("k unknown: C = %.4g (smallest C, largest area)", c));
+            trace.add(org.ventcase.common.LazyText.format("k unknown: C = %.4g (smallest C, largest area)", c));
             warnings.add("k unknown: C = 0.0239 used (conservative).");
             if (r > rc) {
                 throw InvalidInputException.missing("device.k", fmt("k is needed: P2/P1 = %.4g is above %.4g, the "
                         + "critical ratio at k = 5/3, so the flow may be subcritical", r, rc));
             }
-            trace.add(fmt("P2/P1 = %.6g <= %.6g (critical ratio at k = 5/3): critical for any ideal gas", r, rc));
+            trace.add(org.ventcase.common.LazyText.format("P2/P1 = %.6g <= %.6g (critical ratio at k = 5/3): critical for any ideal gas", r, rc));
         }
 
         boolean bellows = in.kb() < 1.0;
@@ -153,22 +153,22 @@ public final class GasSizing {
             }
             aMm2 = wKgH / (c * in.kd() * p1 * in.kb() * in.kc()) * Math.sqrt(zt / in.molarMass());
             equation = "A = W / (C Kd P1 Kb Kc) sqrt(T Z / M)";
-            trace.add(fmt("A = W / (C Kd P1 Kb Kc) sqrt(T Z / M) = %.6g / (%.6g x %.6g x %.6g x %.6g x %.6g) "
+            trace.add(org.ventcase.common.LazyText.format("A = W / (C Kd P1 Kb Kc) sqrt(T Z / M) = %.6g / (%.6g x %.6g x %.6g x %.6g x %.6g) "
                             + "x sqrt(%.6g x %.6g / %.6g) = %.6g mm2", wKgH, c, in.kd(), p1, in.kb(), in.kc(),
                     in.temperatureK(), in.z(), in.molarMass(), aMm2));
         } else {
             double k = in.k().getAsDouble();
             double f = f2(k, r);
             f2 = OptionalDouble.of(f);
-            trace.add(fmt("F2 = sqrt((k/(k-1)) r^(2/k) (1 - r^((k-1)/k)) / (1 - r)) = %.6g (r = %.6g)", f, r));
+            trace.add(org.ventcase.common.LazyText.format("F2 = sqrt((k/(k-1)) r^(2/k) (1 - r^((k-1)/k)) / (1 - r)) = %.6g (r = %.6g)", f, r));
             aMm2 = SUBCRITICAL_SI * wKgH / (f * in.kd() * in.kc())
                     * Math.sqrt(zt / (in.molarMass() * p1 * (p1 - p2)));
             equation = "A = 17.9 W / (F2 Kd Kc) sqrt(Z T / (M P1 (P1 - P2)))";
-            trace.add(fmt("A = 17.9 W / (F2 Kd Kc) sqrt(Z T / (M P1 (P1 - P2))) = 17.9 x %.6g / (%.6g x %.6g x %.6g) "
+            trace.add(org.ventcase.common.LazyText.format("A = 17.9 W / (F2 Kd Kc) sqrt(Z T / (M P1 (P1 - P2))) = 17.9 x %.6g / (%.6g x %.6g x %.6g) "
                             + "x sqrt(%.6g x %.6g / (%.6g x %.6g x %.6g)) = %.6g mm2", wKgH, f, in.kd(), in.kc(),
                     in.z(), in.temperatureK(), in.molarMass(), p1, p1 - p2, aMm2));
         }
-        trace.add(fmt("Regime: %s", regime));
+        trace.add(org.ventcase.common.LazyText.format("Regime: %s", regime));
         return new GasSizingResult(aMm2 * 1e-6, regime, rc, c, f2, equation, trace, warnings, SOURCE);
     }
 

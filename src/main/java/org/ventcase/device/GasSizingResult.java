@@ -13,16 +13,21 @@ import java.util.OptionalDouble;
  *                               (0.03948 x root; 0.0239 when k is unknown)
  * @param f2                     F2 of the subcritical equation, when that equation was used
  * @param equation               which equation, in words
- * @param trace                  each step with the substituted values, in order
+ * @param lines                  each step with the substituted values, in order (formatted when read)
  * @param warnings               validity notes to print
  * @param source                 standard, edition and equation
  */
 public record GasSizingResult(double areaM2, FlowRegime regime, double criticalPressureRatio, double coefficientC,
-                              OptionalDouble f2, String equation, List<String> trace, List<String> warnings,
-                              String source) {
+                              OptionalDouble f2, String equation, List<org.ventcase.common.LazyText> lines,
+                              List<String> warnings, String source) {
     public GasSizingResult {
-        trace = List.copyOf(trace);
+        lines = List.copyOf(lines);
         warnings = List.copyOf(warnings);
+    }
+
+    /** The substituted equations, as text. */
+    public List<String> trace() {
+        return lines.stream().map(org.ventcase.common.LazyText::get).toList();
     }
 
     /** Required area, mm2. */

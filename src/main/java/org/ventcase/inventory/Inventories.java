@@ -597,19 +597,20 @@ public final class Inventories {
         return m;
     }
 
-    static String kpa(double pa) {
-        return String.format(Locale.US, "%.2f kPa abs", pa / 1e3);
+    // trace texts, formatted when read (org.ventcase.common.LazyText)
+    static org.ventcase.common.LazyText kpa(double pa) {
+        return org.ventcase.common.LazyText.format("%.2f kPa abs", pa / 1e3);
     }
 
-    static String kelvinC(double k) {
-        return String.format(Locale.US, "%.2f K (%.2f C)", k, k - 273.15);
+    static org.ventcase.common.LazyText kelvinC(double k) {
+        return org.ventcase.common.LazyText.format("%.2f K (%.2f C)", k, k - 273.15);
     }
 
-    static String m3(double v) {
-        return String.format(Locale.US, "%.4f m3", v);
+    static org.ventcase.common.LazyText m3(double v) {
+        return org.ventcase.common.LazyText.format("%.4f m3", v);
     }
 
-    static String dens(double rho, DensityBasis b) {
-        return String.format(Locale.US, "%.3f kg/m3 (%s)", rho, b.label());
+    static org.ventcase.common.LazyText dens(double rho, DensityBasis b) {
+        return org.ventcase.common.LazyText.format("%.3f kg/m3 (%s)", rho, b.label());
     }
 }

@@ -130,11 +130,16 @@ public final class RelievingPressure {
                             + "open before the vessel exceeds its allowable accumulated pressure");
         }
         double p1 = maxAccumulated + in.atmosphericPa();
-        String rule = String.format(Locale.US,
+        String acc = accText;
+        String setText = setRule;
+        double atm = in.atmosphericPa();
+        double acc1 = accumulation;
+        // made when read: a screening run never prints it
+        org.ventcase.common.LazyText rule = org.ventcase.common.LazyText.of(() -> String.format(Locale.US,
                 "Accumulation on MAWP (%s) = %s kPa; P1 = MAWP + accumulation + Patm = %s + %s + %s = %s kPa abs; "
                         + "overpressure above set = %s kPa (%.2f %% of set); %s",
-                accText, fmt(accumulation), fmt(mawp), fmt(accumulation), fmt(in.atmosphericPa()), fmt(p1),
-                fmt(overpressure), 100 * overpressure / set, setRule);
+                acc, fmt(acc1), fmt(mawp), fmt(acc1), fmt(atm), fmt(p1),
+                fmt(overpressure), 100 * overpressure / set, setText));
         return new RelievingPressureResult(p1, overpressure, 100 * overpressure / set, accumulation, maxAccumulated,
                 maxSetFraction, rule, SOURCE, warnings);
     }
@@ -163,6 +168,6 @@ public final class RelievingPressure {
                 .out("Overpressure above set", "%.1f kPa (%.1f %% of set)", rp.overpressurePa() / 1e3,
                         rp.overpressurePercentOfSet())
                 .out("P1", "%.1f kPa abs", rp.relievingPressurePa() / 1e3)
-                .note(rp.ruleApplied()).build();
+                .note(rp.rule()).build();
     }
 }

@@ -11,16 +11,21 @@ import java.util.List;
  * @param accumulationPa           allowable accumulation above MAWP, Pa
  * @param maxAccumulatedGaugePa    MAWP + accumulation, Pa gauge
  * @param maxSetFractionOfMawp     largest set pressure allowed, as a fraction of MAWP (1.00, 1.05, 1.10)
- * @param ruleApplied              the rule, in words, with the numbers used
+ * @param rule                     the rule, in words, with the numbers used (made when read)
  * @param source                   where the rule comes from
  * @param warnings                 things a reviewer must see (e.g. set pressure above the limit with a reason)
  */
 public record RelievingPressureResult(double relievingPressurePa, double overpressurePa, double overpressurePercentOfSet,
                                       double accumulationPa,
                                       double maxAccumulatedGaugePa, double maxSetFractionOfMawp,
-                                      String ruleApplied, String source, List<String> warnings) {
+                                      org.ventcase.common.LazyText rule, String source, List<String> warnings) {
     public RelievingPressureResult {
         warnings = List.copyOf(warnings);
+    }
+
+    /** The rule, in words, with the numbers used. */
+    public String ruleApplied() {
+        return rule.get();
     }
 
 }

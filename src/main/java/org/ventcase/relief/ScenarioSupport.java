@@ -22,7 +22,7 @@ final class ScenarioSupport {
 
     static TraceStep sizingStep(GasSizingResult gs) {
         TraceStep.Builder sz = TraceStep.of("Required effective area").equation(gs.equation()).source(gs.source());
-        for (String line : gs.trace()) {
+        for (org.ventcase.common.LazyText line : gs.lines()) {
             sz.note(line);
         }
         return sz.out("Flow regime", gs.regime().name().toLowerCase(Locale.ROOT))
@@ -66,19 +66,23 @@ final class ScenarioSupport {
         return b.build();
     }
 
-    static String kpa(double pa) {
-        return String.format(Locale.US, "%.1f kPa", pa / 1e3);
+    // trace texts, formatted when read (org.ventcase.common.LazyText)
+    static org.ventcase.common.LazyText kpa(double pa) {
+        return org.ventcase.common.LazyText.format("%.1f kPa", pa / 1e3);
     }
 
-    static String kelvinC(double k) {
-        return String.format(Locale.US, "%.2f K (%.2f C)", k, k - 273.15);
+    static org.ventcase.common.LazyText kelvinC(double k) {
+        return org.ventcase.common.LazyText.format("%.2f K (%.2f C)", k, k - 273.15);
     }
 
-    static String fractions(double[] x) {
-        StringBuilder sb = new StringBuilder();
-        for (double v : x) {
-            sb.append(sb.length() == 0 ? "" : ", ").append(String.format(Locale.US, "%.4f", v));
-        }
-        return "[" + sb + "]";
+    static org.ventcase.common.LazyText fractions(double[] x) {
+        double[] copy = x.clone();
+        return org.ventcase.common.LazyText.of(() -> {
+            StringBuilder sb = new StringBuilder();
+            for (double v : copy) {
+                sb.append(sb.length() == 0 ? "" : ", ").append(String.format(Locale.US, "%.4f", v));
+            }
+            return "[" + sb + "]";
+        });
     }
 }

@@ -167,7 +167,7 @@ public final class WettedFire {
                 vap.z(), vap.molarMass(), java.util.OptionalDouble.of(vap.kIdeal()), in.kd(), in.kb(), in.kc()));
         warnings.addAll(gs.warnings());
         TraceStep.Builder sz = TraceStep.of("Required effective area").equation(gs.equation()).source(gs.source());
-        for (String line : gs.trace()) {
+        for (org.ventcase.common.LazyText line : gs.lines()) {
             sz.note(line);
         }
         sz.out("Flow regime", gs.regime().name().toLowerCase(Locale.ROOT))

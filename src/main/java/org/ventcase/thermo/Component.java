@@ -53,12 +53,14 @@ public record Component(String name, String formula, String cas, List<String> al
         }
     }
 
+    private static final java.util.regex.Pattern HYDROCARBON = java.util.regex.Pattern.compile("C\\d*H\\d*");
+
     /**
      * Whether the formula has carbon and hydrogen only (the scope of the published minimum
      * latent heat for near-critical hydrocarbons).
      */
     public boolean isHydrocarbon() {
-        return formula.matches("C\\d*H\\d*") && formula.startsWith("C") && formula.contains("H");
+        return HYDROCARBON.matcher(formula).matches();
     }
 
     /** Molar mass in kg/mol (SI inside the calculations). */

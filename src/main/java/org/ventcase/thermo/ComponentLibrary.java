@@ -331,7 +331,15 @@ public final class ComponentLibrary {
 
     /** Lower case with spaces, hyphens, underscores, commas and dots removed. */
     static String normalise(String s) {
-        return s.toLowerCase(Locale.ROOT).replaceAll("[\\s\\-_,.]", "");
+        StringBuilder out = new StringBuilder(s.length());
+        for (int i = 0; i < s.length(); i++) {
+            char ch = s.charAt(i);
+            boolean space = ch == ' ' || ch == '\t' || ch == '\n' || ch == '\u000B' || ch == '\f' || ch == '\r';
+            if (!(space || ch == '-' || ch == '_' || ch == ',' || ch == '.')) {
+                out.append(ch);
+            }
+        }
+        return out.toString().toLowerCase(Locale.ROOT);
     }
 
     /** All components, in file order. */

@@ -247,8 +247,10 @@ public final class Units {
         return new Parsed(v, m.group(1), m.group(2));
     }
 
+    private static final java.util.regex.Pattern SPACES = java.util.regex.Pattern.compile("\\s+");
+
     private static String normalise(String unit) {
-        return unit.trim().toLowerCase(Locale.ROOT).replaceAll("\\s+", " ");
+        return SPACES.matcher(unit.trim().toLowerCase(Locale.ROOT)).replaceAll(" ");
     }
 
     /** An example of a valid input for messages. */
