@@ -124,6 +124,39 @@ public final class Audit {
     }
 
     /**
+     * Runs the audit of items made a chunk at a time (a folder of case files: each chunk's files
+     * read when it is reached), computing each chunk in parallel and handing its rows to
+     * {@code sink} in input order, as the streamed register audit does; the result holds no rows.
+     *
+     * @param total the number of items, for progress
+     */
+    public static AuditResult run(java.util.Iterator<List<AuditItem>> chunks, int total, Thresholds thresholds,
+                                  int threads, Progress progress, Consumer<List<VesselAudit>> sink) {
+        if (threads < 1) {
+            throw InvalidInputException.invalid("threads", threads, "expected at least 1");
+        }
+        AuditResult.Builder acc = new AuditResult.Builder();
+        AtomicInteger done = new AtomicInteger();
+        int seen = 0;
+        ExecutorService pool = threads > 1 ? pool(threads) : null;
+        try {
+            while (chunks.hasNext()) {
+                List<AuditItem> items = chunks.next();
+                seen += items.size();
+                List<VesselAudit> out = Arrays.asList(compute(items.size(), items::get, pool, threads, done,
+                        Math.max(total, seen), progress));
+                sink.accept(out);
+                out.forEach(acc::add);
+            }
+        } finally {
+            if (pool != null) {
+                pool.shutdownNow();
+            }
+        }
+        return acc.build(thresholds, List.of());
+    }
+
+    /**
      * Runs the audit of n items, item i made by {@code item} on the worker thread that computes it.
      *
      * @param threads  worker threads, at least 1 (1 computes in the calling thread)

@@ -120,12 +120,12 @@ final class AuditCommand implements Callable<Integer> {
             throw new java.nio.file.NoSuchFileException(input.toString());
         }
         MessageDigest hash = sha256();
-        List<AuditItem> items = null;
+        FolderItems items = null;
         Register.Stream register = null;
         int registerRows = 0;
         String registerName = input.getFileName() == null ? input.toString() : input.getFileName().toString();
         if (Files.isDirectory(input)) {
-            items = folder(input, hash);
+            items = new FolderItems(input, hash);
         } else {
             byte[] bytes = org.ventcase.common.BoundedRead.bytes(input, Register.MAX_BYTES).orElseThrow(() ->
                     InvalidInputException.invalid(input.toString(), "more than " + Register.MAX_BYTES + " bytes",
@@ -152,21 +152,15 @@ final class AuditCommand implements Callable<Integer> {
                     + String.join(", ", register.ignoredColumns()));
         }
         AuditResult r;
-        if (register != null) {
-            // streamed: each chunk's rows go to the CSV spool and the summaries, then are dropped, so
-            // memory does not grow with the register
-            try (AuditCsv.Spool spool = csv == null ? null : new AuditCsv.Spool(csv)) {
-                r = Audit.run(register, registerRows, th, n, pb, spool == null ? rows -> { } : spool);
-                pb.finish();
-                if (spool != null) {
-                    spool.finish();
-                }
-            }
-        } else {
-            r = Audit.run(items, th, n, pb);
+        // streamed: each chunk's rows go to the CSV spool and the summaries, then are dropped, so
+        // memory does not grow with the register or the folder
+        try (AuditCsv.Spool spool = csv == null ? null : new AuditCsv.Spool(csv)) {
+            java.util.function.Consumer<List<VesselAudit>> sink = spool == null ? rows -> { } : spool;
+            r = register != null ? Audit.run(register, registerRows, th, n, pb, sink)
+                    : Audit.run(items, items.size(), th, n, pb, sink);
             pb.finish();
-            if (csv != null) {
-                AuditCsv.write(r, csv);
+            if (spool != null) {
+                spool.finish();
             }
         }
         if (pdf != null) {
@@ -192,20 +186,57 @@ final class AuditCommand implements Callable<Integer> {
         }
     }
 
-    /** A folder of case files: each *.json in path order, the area is its sub-folder. */
-    private static List<AuditItem> folder(Path dir, MessageDigest hash) throws IOException {
-        List<Path> files;
-        try (Stream<Path> s = Files.walk(dir)) {
-            files = s.filter(p -> Files.isRegularFile(p) && p.getFileName().toString().endsWith(".json")).sorted()
-                    .toList();
+    /**
+     * A folder of case files: each *.json in path order, the area is its sub-folder; read
+     * {@link Audit#CHUNK_ROWS} files at a time, in order (the hash takes each file's relative path and
+     * bytes in that order).
+     */
+    private static final class FolderItems implements java.util.Iterator<List<AuditItem>> {
+        private final Path dir;
+        private final MessageDigest hash;
+        private final List<Path> files;
+        private int next;
+
+        FolderItems(Path dir, MessageDigest hash) throws IOException {
+            this.dir = dir;
+            this.hash = hash;
+            try (Stream<Path> s = Files.walk(dir)) {
+                files = s.filter(p -> Files.isRegularFile(p) && p.getFileName().toString().endsWith(".json"))
+                        .sorted().toList();
+            }
+            if (files.isEmpty()) {
+                throw InvalidInputException.invalid(dir.toString(), "(no *.json)",
+                        "expected a folder holding case files");
+            }
         }
-        if (files.isEmpty()) {
-            throw InvalidInputException.invalid(dir.toString(), "(no *.json)", "expected a folder holding case files");
+
+        int size() {
+            return files.size();
         }
-        List<AuditItem> items = new ArrayList<>();
-        int row = 0;
-        for (Path f : files) {
-            row++;
+
+        @Override
+        public boolean hasNext() {
+            return next < files.size();
+        }
+
+        @Override
+        public List<AuditItem> next() {
+            if (!hasNext()) {
+                throw new java.util.NoSuchElementException();
+            }
+            List<AuditItem> items = new ArrayList<>();
+            int end = Math.min(files.size(), next + Audit.CHUNK_ROWS);
+            for (; next < end; next++) {
+                try {
+                    items.add(item(next + 1, files.get(next)));
+                } catch (IOException e) {
+                    throw new java.io.UncheckedIOException(e);
+                }
+            }
+            return items;
+        }
+
+        private AuditItem item(int row, Path f) throws IOException {
             String rel = dir.relativize(f).toString().replace('\\', '/');
             Path parent = dir.relativize(f).getParent();
             String area = parent == null ? "(top folder)" : parent.toString().replace('\\', '/');
@@ -213,20 +244,19 @@ final class AuditCommand implements Callable<Integer> {
             hash.update(Files.readAllBytes(f));
             try {
                 CaseInput ci = CaseInputs.from(CaseFiles.load(f));
-                items.add(AuditItem.of(row, rel, ci.tag(), area, fluidLabel(ci), ScreeningCase.of(ci),
-                        java.util.Optional.empty(), java.util.OptionalDouble.empty(), List.of()));
+                return AuditItem.of(row, rel, ci.tag(), area, fluidLabel(ci), ScreeningCase.of(ci),
+                        java.util.Optional.empty(), java.util.OptionalDouble.empty(), List.of());
             } catch (CaseValidationException e) {
                 Problem p = e.problems().get(0);
                 String more = e.problems().size() > 1 ? " (and " + (e.problems().size() - 1) + " more: 'ventcase check "
                         + rel + "' lists them)" : "";
-                items.add(AuditItem.failed(row, rel, "", area, "", new AuditError(p.path(), p.value(),
-                        p.accepted() + more)));
+                return AuditItem.failed(row, rel, "", area, "", new AuditError(p.path(), p.value(),
+                        p.accepted() + more));
             } catch (InvalidInputException e) {
-                items.add(AuditItem.failed(row, rel, "", area, "", new AuditError(e.field(), e.value(),
-                        e.accepted())));
+                return AuditItem.failed(row, rel, "", area, "", new AuditError(e.field(), e.value(),
+                        e.accepted()));
             }
         }
-        return items;
     }
 
     private static String fluidLabel(CaseInput ci) {
