@@ -34,7 +34,7 @@ public final class TraceStep {
 
     private final String title;
     private final String equation;
-    private final String source;
+    private final Object source;
     private final List<String> inNames;
     private final List<Object> inValues;
     private final List<String> outNames;
@@ -44,7 +44,7 @@ public final class TraceStep {
     private volatile Map<String, String> outputs;
     private volatile List<String> notes;
 
-    private TraceStep(String title, String equation, String source, List<String> inNames, List<Object> inValues,
+    private TraceStep(String title, String equation, Object source, List<String> inNames, List<Object> inValues,
                       List<String> outNames, List<Object> outValues, List<Object> noteValues) {
         this.title = title;
         this.equation = equation;
@@ -73,7 +73,7 @@ public final class TraceStep {
 
     /** Publication, edition and equation or table. */
     public String source() {
-        return source;
+        return text(source);
     }
 
     /** Name -> value with unit, in order. */
@@ -131,18 +131,18 @@ public final class TraceStep {
     @Override
     public boolean equals(Object o) {
         return o instanceof TraceStep t && title.equals(t.title) && equation.equals(t.equation)
-                && source.equals(t.source) && inputs().equals(t.inputs()) && outputs().equals(t.outputs())
+                && source().equals(t.source()) && inputs().equals(t.inputs()) && outputs().equals(t.outputs())
                 && notes().equals(t.notes());
     }
 
     @Override
     public int hashCode() {
-        return Objects.hash(title, equation, source, inputs(), outputs(), notes());
+        return Objects.hash(title, equation, source(), inputs(), outputs(), notes());
     }
 
     @Override
     public String toString() {
-        return "TraceStep[title=" + title + ", equation=" + equation + ", source=" + source + ", inputs=" + inputs()
+        return "TraceStep[title=" + title + ", equation=" + equation + ", source=" + source() + ", inputs=" + inputs()
                 + ", outputs=" + outputs() + ", notes=" + notes() + "]";
     }
 
@@ -150,7 +150,7 @@ public final class TraceStep {
     public static final class Builder {
         private final String title;
         private String equation = "";
-        private String source = "";
+        private Object source = "";
         private final List<String> inNames = new ArrayList<>();
         private final List<Object> inValues = new ArrayList<>();
         private final List<String> outNames = new ArrayList<>();
@@ -168,6 +168,12 @@ public final class TraceStep {
 
         public Builder source(String s) {
             this.source = s;
+            return this;
+        }
+
+        /** A source made when it is read (see {@link LazyText}). */
+        public Builder source(java.util.function.Supplier<String> s) {
+            this.source = new Made(s);
             return this;
         }
 

@@ -400,7 +400,7 @@ public final class Inventories {
                     .in("Temperature", kelvinC(t)).in("Pressure", kpa(p)).in("Composition", z.toString())
                     .out("Gas density", dens(pv.density(), pv.densityBasis())
                             + String.format(Locale.US, ", Z = %.5f", pv.z()))
-                    .out("Phase", pv.phase().label()).note(pv.rootReason());
+                    .out("Phase", pv.phase().label()).note(pv.rootChoice());
             vapourCondensationCheck(t, p, z, st, "gas");
             trace.add(st.build());
             PhaseInventory vap = PhaseInventory.of("vapour", vs.vapourVolume(), pv.density(), pv.densityBasis(),

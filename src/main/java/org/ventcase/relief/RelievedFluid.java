@@ -31,7 +31,7 @@ import org.ventcase.thermo.FluidProperties;
  * @param viscosityPaS          dynamic viscosity where a liquid is relieved, Pa s
  * @param viscositySource       where the viscosity came from, or empty
  * @param eos                   equation of state
- * @param provenance            root chosen and why; ideal-gas Cp source
+ * @param provenanceText        root chosen and why; ideal-gas Cp source (made when read)
  * @param warnings              what the user must know about these numbers
  * @param realRoots             every physical real root of the cubic in Z at (T, P1), ascending
  *                              (the selected one is {@code z})
@@ -40,7 +40,7 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
                             double[] composition, double molarMass, double z, double density,
                             DensityBasis densityBasis, double kIdeal, double isentropicExponent,
                             OptionalDouble latentHeatJPerKg, String latentHeatDefinition,
-                            OptionalDouble viscosityPaS, String viscositySource, EosVariant eos, String provenance,
+                            OptionalDouble viscosityPaS, String viscositySource, EosVariant eos, org.ventcase.common.LazyText provenanceText,
                             List<String> warnings, double[] realRoots) {
 
     /** What leaves through the device. */
@@ -97,9 +97,10 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
     static RelievedFluid of(Phase phase, MixtureSpec spec, FluidProperties fp, OptionalDouble latent,
                             String latentDefinition, OptionalDouble viscosity, String viscositySource) {
         List<String> w = new ArrayList<>(fp.warnings());
-        String prov = String.format(Locale.US, "%s (%s); %s; density basis %s; ideal-gas Cp: %s",
-                spec.eos().displayName(), spec.eos().citation(), fp.rootReason(), fp.densityBasis().label(),
-                cpSources(spec, fp.composition()));
+        double[] x = fp.composition();
+        org.ventcase.common.LazyText prov = org.ventcase.common.LazyText.of(() -> String.format(Locale.US,
+                "%s (%s); %s; density basis %s; ideal-gas Cp: %s", spec.eos().displayName(), spec.eos().citation(),
+                fp.rootReason(), fp.densityBasis().label(), cpSources(spec, x)));
         return new RelievedFluid(phase, fp.temperatureK(), fp.pressurePa(), spec.names(), fp.composition(),
                 fp.molarMass(), fp.z(), fp.density(), fp.densityBasis(), fp.kIdeal(), fp.isentropicExponent(), latent,
                 latentDefinition, viscosity, viscositySource, spec.eos(), prov, w, fp.roots().physical());
@@ -116,29 +117,54 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
         return sb.toString();
     }
 
-    /** One line per property, for a reviewer's table. */
+    /** Root chosen and why; ideal-gas Cp source. */
+    public String provenance() {
+        return provenanceText.get();
+    }
+
+    /** One property for a reviewer's table: its name and its value, made when read. */
+    public record Row(String name, org.ventcase.common.LazyText value) {
+    }
+
+    /** One row per property, for a reviewer's table (values formatted when read). */
+    public List<Row> rows() {
+        List<Row> out = new ArrayList<>();
+        out.add(new Row("Relieved phase", org.ventcase.common.LazyText.fixed(phase.label())));
+        out.add(new Row("T", org.ventcase.common.LazyText.format("%.2f K (%.2f C)", temperatureK,
+                temperatureK - 273.15)));
+        out.add(new Row("P", org.ventcase.common.LazyText.format("%.1f kPa abs", pressurePa / 1e3)));
+        out.add(new Row("Composition (mole fractions)", org.ventcase.common.LazyText.of(() -> {
+            StringBuilder c = new StringBuilder();
+            for (int i = 0; i < composition.length; i++) {
+                c.append(i == 0 ? "" : ", ").append(componentNames.get(i)).append(' ')
+                        .append(String.format(Locale.US, "%.5f", composition[i]));
+            }
+            return c.toString();
+        })));
+        out.add(new Row("M", org.ventcase.common.LazyText.format("%.3f kg/kmol", molarMass)));
+        out.add(new Row("Z", org.ventcase.common.LazyText.of(() -> String.format(Locale.US,
+                "%.5f (cubic root; real roots of the cubic: %s)", z, realRootsText()))));
+        out.add(new Row("Density", org.ventcase.common.LazyText.format("%.4g kg/m3 (%s basis)", density,
+                densityBasis.label())));
+        out.add(new Row("k", org.ventcase.common.LazyText.format("Cp/Cv ideal gas = %.4f", kIdeal)));
+        out.add(new Row("Real-fluid isentropic exponent", org.ventcase.common.LazyText.format("%.4f",
+                isentropicExponent)));
+        latentHeatJPerKg.ifPresent(l -> out.add(new Row("Latent heat", org.ventcase.common.LazyText.format(
+                "%.2f kJ/kg (%s)", l / 1e3, latentHeatDefinition))));
+        viscosityPaS.ifPresent(v -> out.add(new Row("Viscosity", org.ventcase.common.LazyText.format(
+                "%.4g mPa s (%s)", v * 1e3, viscositySource))));
+        out.add(new Row("Model", provenanceText));
+        return out;
+    }
+
+    /** One line per property ("name = value" or "name: value"), for a reviewer's table. */
     public List<String> table() {
         List<String> out = new ArrayList<>();
-        out.add("Relieved phase: " + phase.label());
-        out.add(String.format(Locale.US, "T = %.2f K (%.2f C)", temperatureK, temperatureK - 273.15));
-        out.add(String.format(Locale.US, "P = %.1f kPa abs", pressurePa / 1e3));
-        StringBuilder c = new StringBuilder("Composition (mole fractions): ");
-        for (int i = 0; i < composition.length; i++) {
-            c.append(i == 0 ? "" : ", ").append(componentNames.get(i)).append(' ')
-                    .append(String.format(Locale.US, "%.5f", composition[i]));
+        for (Row r : rows()) {
+            boolean colon = r.name().equals("Relieved phase") || r.name().startsWith("Composition")
+                    || r.name().equals("Model");
+            out.add(r.name() + (colon ? ": " : " = ") + r.value().get());
         }
-        out.add(c.toString());
-        out.add(String.format(Locale.US, "M = %.3f kg/kmol", molarMass));
-        out.add(String.format(Locale.US, "Z = %.5f (cubic root; real roots of the cubic: %s)", z,
-                realRootsText()));
-        out.add(String.format(Locale.US, "Density = %.4g kg/m3 (%s basis)", density, densityBasis.label()));
-        out.add(String.format(Locale.US, "k = Cp/Cv ideal gas = %.4f", kIdeal));
-        out.add(String.format(Locale.US, "Real-fluid isentropic exponent = %.4f", isentropicExponent));
-        latentHeatJPerKg.ifPresent(l -> out.add(String.format(Locale.US, "Latent heat = %.2f kJ/kg (%s)", l / 1e3,
-                latentHeatDefinition)));
-        viscosityPaS.ifPresent(v -> out.add(String.format(Locale.US, "Viscosity = %.4g mPa s (%s)", v * 1e3,
-                viscositySource)));
-        out.add("Model: " + provenance);
         return out;
     }
 }

@@ -33,13 +33,9 @@ final class ScenarioSupport {
     static TraceStep fluidStep(String title, RelievedFluid f) {
         TraceStep.Builder b = TraceStep.of(title)
                 .equation("cubic EOS at relieving conditions; k = Cp_ig/Cv_ig per API 520")
-                .source(f.provenance());
-        for (String line : f.table()) {
-            // "Name = value" or "Name: value"; the first separator splits (each line's name is distinct)
-            int eq = line.indexOf('=');
-            int colon = line.indexOf(':');
-            int cut = eq < 0 ? colon : colon < 0 ? eq : Math.min(eq, colon);
-            b.out(cut < 0 ? "Item" : line.substring(0, cut).trim(), cut < 0 ? line : line.substring(cut + 1).trim());
+                .source(f.provenanceText());
+        for (RelievedFluid.Row r : f.rows()) {
+            b.out(r.name(), r.value());
         }
         return b.build();
     }

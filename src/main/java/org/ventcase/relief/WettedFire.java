@@ -160,7 +160,7 @@ public final class WettedFire {
                 .out("k = Cp/Cv ideal gas", "%.4f", vap.kIdeal())
                 .out("Real-gas isentropic exponent", "%.4f", vap.isentropicExponent())
                 .out("Density", "%.3f kg/m3", vap.density())
-                .note(vap.rootReason()).build());
+                .note(vap.rootChoice()).build());
 
         // 7. Sizing
         GasSizingResult gs = GasSizing.size(new GasSizingInput(w, p1, in.backPressurePa(), rel.temperatureK(),

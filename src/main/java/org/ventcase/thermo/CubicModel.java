@@ -848,7 +848,7 @@ public final class CubicModel {
             warnings.add("The chosen root is mechanically unstable ((dP/dv)_T >= 0); heat capacities and speed of "
                     + "sound are not meaningful there.");
         }
-        return new FluidProperties(variant, t, p, x, sel.roots(), sel.z(), sel.reason(), label,
+        return new FluidProperties(variant, t, p, x, sel.roots(), sel.z(), org.ventcase.common.LazyText.of(sel::reason), label,
                 labelCriterion(), vCubic, v, used, mw / 1e3 / v, mw, lnPhi, hR, sR, gR, cpIg, cp, cv, kIdeal, kReal,
                 isentropic, sound2 > 0 ? Math.sqrt(sound2) : Double.NaN, jt, List.copyOf(warnings));
     }

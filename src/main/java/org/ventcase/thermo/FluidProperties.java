@@ -12,7 +12,7 @@ import java.util.List;
  * @param composition         mole fractions (normalised copy)
  * @param roots               all real roots of the cubic
  * @param z                   the selected root, before any volume translation
- * @param rootReason          which root was chosen and why
+ * @param rootChoice          which root was chosen and why (made when read)
  * @param phase               liquid, vapour or supercritical (criterion in {@code phaseCriterion})
  * @param phaseCriterion      the rule that named the phase
  * @param molarVolumeCubic    Z R T / P, m3/mol
@@ -35,7 +35,7 @@ import java.util.List;
  * @param warnings            what the user must know about these numbers
  */
 public record FluidProperties(EosVariant variant, double temperatureK, double pressurePa, double[] composition,
-                              CubicRoots roots, double z, String rootReason, PhaseLabel phase, String phaseCriterion,
+                              CubicRoots roots, double z, org.ventcase.common.LazyText rootChoice, PhaseLabel phase, String phaseCriterion,
                               double molarVolumeCubic, double molarVolume, DensityBasis densityBasis, double density,
                               double molarMass, double[] lnPhi, double residualEnthalpy, double residualEntropy,
                               double residualGibbs, double cpIdeal, double cp, double cv, double kIdeal, double kReal,
@@ -56,6 +56,11 @@ public record FluidProperties(EosVariant variant, double temperatureK, double pr
     @Override
     public double[] lnPhi() {
         return lnPhi.clone();
+    }
+
+    /** Which root was chosen and why. */
+    public String rootReason() {
+        return rootChoice.get();
     }
 
     /** Fugacity coefficient of component i. */
