@@ -124,9 +124,55 @@ public final class Main implements Callable<Integer> {
         return ex.getMessage() == null ? "cannot read or write a file" : ex.getMessage();
     }
 
+    /** The sub-commands by name, in the order of the help listing (the @Command annotation's). */
+    private static final java.util.Map<String, java.util.function.Supplier<Object>> COMMANDS = commands();
+
+    private static java.util.Map<String, java.util.function.Supplier<Object>> commands() {
+        java.util.Map<String, java.util.function.Supplier<Object>> m = new java.util.LinkedHashMap<>();
+        m.put("demo", DemoCommand::new);
+        m.put("sheet", SheetCommand::new);
+        m.put("props", PropsCommand::new);
+        m.put("sat", SatCommand::new);
+        m.put("vessel", VesselCommand::new);
+        m.put("inventory", InventoryCommand::new);
+        m.put("flash", FlashCommand::new);
+        m.put("envelope", EnvelopeCommand::new);
+        m.put("new", NewCommand::new);
+        m.put("check", CheckCommand::new);
+        m.put("calc", CalcCommand::new);
+        m.put("review", ReviewCommand::new);
+        m.put("audit", AuditCommand::new);
+        return java.util.Collections.unmodifiableMap(m);
+    }
+
+    /** The root command when one sub-command is run: the same name and options, that one sub-command only. */
+    @Command(name = "ventcase", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
+            footer = ExitCode.HELP_LIST)
+    static final class One implements Callable<Integer> {
+        @Override
+        public Integer call() {
+            return ExitCode.OK;
+        }
+    }
+
+    /**
+     * The command line for these arguments: for a known sub-command only that one is built (picocli
+     * reads every command's annotations when it builds one, most of a short command's start), else
+     * the whole command with its help listing.
+     */
+    static CommandLine commandLine(String... args) {
+        java.util.function.Supplier<Object> one = args.length > 0 ? COMMANDS.get(args[0]) : null;
+        if (one == null) {
+            return new CommandLine(new Main());
+        }
+        CommandLine cl = new CommandLine(new One());
+        cl.addSubcommand(args[0], one.get());
+        return cl;
+    }
+
     /** Runs the command line with the given writers; returns the exit code. */
     public static int run(PrintWriter out, PrintWriter err, String... args) {
-        CommandLine cl = new CommandLine(new Main());
+        CommandLine cl = commandLine(args);
         cl.setOut(out);
         cl.setErr(err);
         cl.setParameterExceptionHandler((ex, a) -> {
