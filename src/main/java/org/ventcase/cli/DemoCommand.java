@@ -67,10 +67,13 @@ final class DemoCommand implements Callable<Integer> {
             out.println("ventcase demo: opening the case wizard with the demo case "
                     + "(for the printed demo: 'ventcase demo --text').");
             out.flush();
-            org.ventcase.ui.WizardLauncher.launchDemo();
-            return ExitCode.OK;
-        }
-        if (!text && !display) {
+            if (org.ventcase.ui.WizardLauncher.launchDemo()) {
+                return ExitCode.OK;
+            }
+            spec.commandLine().getErr().println(org.ventcase.ui.WizardLauncher.NO_WINDOW);
+            out.println("ventcase demo: the demo is printed instead.");
+            out.println();
+        } else if (!text && !display) {
             out.println("ventcase demo: no display is available, so the demo is printed instead of opening the "
                     + "case wizard.");
             out.println();

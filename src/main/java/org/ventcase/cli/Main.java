@@ -62,8 +62,10 @@ public final class Main implements Callable<Integer> {
         }
         if (args.length == 0) {
             if (displayAvailableHere()) {
-                org.ventcase.ui.WizardLauncher.launch();
-                System.exit(ExitCode.OK);
+                if (org.ventcase.ui.WizardLauncher.launch()) {
+                    System.exit(ExitCode.OK);
+                }
+                err.println(org.ventcase.ui.WizardLauncher.NO_WINDOW);
             }
             out.println(NO_DISPLAY);
             out.println();
