@@ -398,12 +398,18 @@ public final class CalculationSheet {
                 }
                 t.text(cells[i][0], x + 5, gridTop - 8, regular, 6f, PdfCanvas.MUTED);
                 String v = cells[i][1];
-                // a long entry is set smaller to fit its cell (down to 5.5 pt), and cut with an ellipsis only beyond that
+                // a long entry is set smaller to fit its cell (down to 6.5 pt), then on two lines at 6 pt (a long
+                // file name as the audit's tag), and cut with an ellipsis only beyond that
                 float vw = PdfCanvas.width(bold, 8f, v);
-                float sz = vw <= cw - 10 ? 8f : Math.max(5.5f, 8f * (cw - 10) / vw);
+                float sz = vw <= cw - 10 ? 8f : Math.max(6.5f, 8f * (cw - 10) / vw);
                 List<String> lines = PdfCanvas.wrap(v, bold, sz, cw - 10);
-                t.text(lines.isEmpty() ? "" : lines.get(0) + (lines.size() > 1 ? "…" : ""), x + 5, yb + 5, bold, sz,
-                        PdfCanvas.INK);
+                if (lines.size() <= 1) {
+                    t.text(lines.isEmpty() ? "" : lines.get(0), x + 5, yb + 5, bold, sz, PdfCanvas.INK);
+                } else {
+                    List<String> two = PdfCanvas.wrap(v, bold, 6f, cw - 10);
+                    t.text(two.get(0), x + 5, yb + 10.5f, bold, 6f, PdfCanvas.INK);
+                    t.text(two.get(1) + (two.size() > 2 ? "…" : ""), x + 5, yb + 3.5f, bold, 6f, PdfCanvas.INK);
+                }
                 x += cw;
             }
             // footer
