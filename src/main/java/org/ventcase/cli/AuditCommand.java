@@ -2,36 +2,19 @@ package org.ventcase.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
-import java.time.LocalDate;
-import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
-import java.util.stream.Stream;
 
+import org.ventcase.app.AuditRunner;
 import org.ventcase.audit.Audit;
-import org.ventcase.audit.AuditCsv;
 import org.ventcase.audit.AuditError;
-import org.ventcase.audit.AuditItem;
 import org.ventcase.audit.AuditResult;
-import org.ventcase.audit.Register;
-import org.ventcase.audit.RegisterCases;
-import org.ventcase.audit.ScreeningCase;
 import org.ventcase.audit.Thresholds;
 import org.ventcase.audit.VesselAudit;
-import org.ventcase.calc.CaseInput;
-import org.ventcase.casefile.CaseFiles;
-import org.ventcase.casefile.CaseInputs;
-import org.ventcase.casefile.CaseValidationException;
-import org.ventcase.casefile.Problem;
 import org.ventcase.common.InvalidInputException;
-import org.ventcase.report.AuditSheet;
 import org.ventcase.report.CalculationSheet;
 
 import picocli.CommandLine.Command;
@@ -119,54 +102,20 @@ final class AuditCommand implements Callable<Integer> {
         if (!Files.exists(input)) {
             throw new java.nio.file.NoSuchFileException(input.toString());
         }
-        MessageDigest hash = sha256();
-        FolderItems items = null;
-        Register.Stream register = null;
-        int registerRows = 0;
-        String registerName = input.getFileName() == null ? input.toString() : input.getFileName().toString();
-        if (Files.isDirectory(input)) {
-            items = new FolderItems(input, hash);
-        } else {
-            byte[] bytes = org.ventcase.common.BoundedRead.bytes(input, Register.MAX_BYTES).orElseThrow(() ->
-                    InvalidInputException.invalid(input.toString(), "more than " + Register.MAX_BYTES + " bytes",
-                            "expected a register of at most " + Register.MAX_BYTES + " bytes"));
-            hash.update(bytes);
-            String text = org.ventcase.common.Utf8.decode(bytes, registerName);
-            bytes = null;
-            registerRows = Register.countRows(text, registerName);
-            register = Register.stream(text, registerName);
-        }
-        Thresholds th = Thresholds.none();
-        if (thresholdsFile != null) {
-            byte[] bytes = org.ventcase.common.BoundedRead.bytes(thresholdsFile, Register.MAX_BYTES).orElseThrow(() ->
-                    InvalidInputException.invalid("--thresholds", "more than " + Register.MAX_BYTES + " bytes",
-                            "expected a thresholds file of at most " + Register.MAX_BYTES + " bytes"));
-            hash.update(bytes);
-            th = Thresholds.parse(org.ventcase.common.Utf8.decode(bytes, thresholdsFile.getFileName().toString()),
-                    thresholdsFile.getFileName().toString());
-        }
         boolean bar = progress || System.console() != null;
         ProgressBar pb = new ProgressBar(err, bar);
-        if (register != null && !register.ignoredColumns().isEmpty()) {
+        java.util.Optional<AuditRunner.Input> th = thresholdsFile == null ? java.util.Optional.empty()
+                : java.util.Optional.of(AuditRunner.Input.file(thresholdsFile));
+        AuditRunner.Outcome o = new AuditRunner().stream(input, th, n, pb, java.util.Optional.ofNullable(csv));
+        pb.finish();
+        if (!o.ignoredColumns().isEmpty()) {
             err.println("ventcase: columns not used (not register columns, docs/audit.md): "
-                    + String.join(", ", register.ignoredColumns()));
+                    + String.join(", ", o.ignoredColumns()));
         }
-        AuditResult r;
-        // streamed: each chunk's rows go to the CSV spool and the summaries, then are dropped, so
-        // memory does not grow with the register or the folder
-        try (AuditCsv.Spool spool = csv == null ? null : new AuditCsv.Spool(csv)) {
-            java.util.function.Consumer<List<VesselAudit>> sink = spool == null ? rows -> { } : spool;
-            r = register != null ? Audit.run(register, registerRows, th, n, pb, sink)
-                    : Audit.run(items, items.size(), th, n, pb, sink);
-            pb.finish();
-            if (spool != null) {
-                spool.finish();
-            }
-        }
+        AuditResult r = o.result();
+        String registerName = o.registerName();
         if (pdf != null) {
-            String t = title != null ? title : "Inventory audit of the vessel register " + registerName;
-            AuditSheet.write(r, new AuditSheet.Info(t, registerName, HexFormat.of().formatHex(hash.digest()),
-                    LocalDate.now(), preparer, Main.version()), pdf, size);
+            AuditRunner.writePdf(o, pdf, size, Main.version(), java.util.Optional.ofNullable(title), preparer);
         }
         print(out, r, registerName);
         if (csv != null) {
@@ -176,100 +125,6 @@ final class AuditCommand implements Callable<Integer> {
             out.println("Summary PDF written to " + pdf);
         }
         return r.count(VesselAudit.Status.ERROR) > 0 ? ExitCode.INVALID_INPUT : ExitCode.OK;
-    }
-
-    private static MessageDigest sha256() {
-        try {
-            return MessageDigest.getInstance("SHA-256");
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is missing from this Java runtime", e);
-        }
-    }
-
-    /**
-     * A folder of case files: each *.json in path order, the area is its sub-folder; read
-     * {@link Audit#CHUNK_ROWS} files at a time, in order (the hash takes each file's relative path and
-     * bytes in that order).
-     */
-    private static final class FolderItems implements java.util.Iterator<List<AuditItem>> {
-        private final Path dir;
-        private final MessageDigest hash;
-        private final List<Path> files;
-        private int next;
-
-        FolderItems(Path dir, MessageDigest hash) throws IOException {
-            this.dir = dir;
-            this.hash = hash;
-            try (Stream<Path> s = Files.walk(dir)) {
-                files = s.filter(p -> Files.isRegularFile(p) && p.getFileName().toString().endsWith(".json"))
-                        .sorted().toList();
-            }
-            if (files.isEmpty()) {
-                throw InvalidInputException.invalid(dir.toString(), "(no *.json)",
-                        "expected a folder holding case files");
-            }
-        }
-
-        int size() {
-            return files.size();
-        }
-
-        @Override
-        public boolean hasNext() {
-            return next < files.size();
-        }
-
-        @Override
-        public List<AuditItem> next() {
-            if (!hasNext()) {
-                throw new java.util.NoSuchElementException();
-            }
-            List<AuditItem> items = new ArrayList<>();
-            int end = Math.min(files.size(), next + Audit.CHUNK_ROWS);
-            for (; next < end; next++) {
-                try {
-                    items.add(item(next + 1, files.get(next)));
-                } catch (IOException e) {
-                    throw new java.io.UncheckedIOException(e);
-                }
-            }
-            return items;
-        }
-
-        private AuditItem item(int row, Path f) throws IOException {
-            String rel = dir.relativize(f).toString().replace('\\', '/');
-            Path parent = dir.relativize(f).getParent();
-            String area = parent == null ? "(top folder)" : parent.toString().replace('\\', '/');
-            hash.update(rel.getBytes(StandardCharsets.UTF_8));
-            hash.update(Files.readAllBytes(f));
-            try {
-                CaseInput ci = CaseInputs.from(CaseFiles.load(f));
-                return AuditItem.of(row, rel, ci.tag(), area, fluidLabel(ci), ScreeningCase.of(ci),
-                        java.util.Optional.empty(), java.util.OptionalDouble.empty(), List.of());
-            } catch (CaseValidationException e) {
-                Problem p = e.problems().get(0);
-                String more = e.problems().size() > 1 ? " (and " + (e.problems().size() - 1) + " more: 'ventcase check "
-                        + rel + "' lists them)" : "";
-                return AuditItem.failed(row, rel, "", area, "", new AuditError(p.path(), p.value(),
-                        p.accepted() + more));
-            } catch (InvalidInputException e) {
-                return AuditItem.failed(row, rel, "", area, "", new AuditError(e.field(), e.value(),
-                        e.accepted()));
-            }
-        }
-    }
-
-    private static String fluidLabel(CaseInput ci) {
-        var x = ci.fluid().composition();
-        int[] present = x.present();
-        if (present.length == 1) {
-            return x.components().get(present[0]).name();
-        }
-        List<String> parts = new ArrayList<>();
-        for (int i : present) {
-            parts.add(x.components().get(i).name() + ":" + String.format(Locale.ROOT, "%.4g", x.fraction(i)));
-        }
-        return String.join(",", parts);
     }
 
     private static void print(PrintWriter out, AuditResult r, String register) {
