@@ -100,7 +100,7 @@ final class ChartDrawing {
         float yl = PdfCanvas.width(c.regular, 7.5f, ch.yLabel());
         c.cs.setTextMatrix(org.apache.pdfbox.util.Matrix.getRotateInstance(Math.PI / 2, bx + 7,
                 py + ph / 2 - yl / 2));
-        c.cs.showText(PdfCanvas.clean(ch.yLabel()));
+        c.cs.showText(PdfCanvas.printable(c.regular, ch.yLabel()));
         c.cs.endText();
 
         Mapper m = (x, y) -> new float[] {(float) (px + (x - xa.lo()) / (xa.hi() - xa.lo()) * pw),

@@ -48,9 +48,59 @@ final class PdfCanvas {
         return sb.toString();
     }
 
+    /** Shown for a character the font cannot draw (or a broken UTF-16 surrogate). */
+    static final String MISSING = "\uFFFD";
+
+    /** Per font: code points found drawable (true) or not (false). */
+    private static final java.util.Map<PDFont, java.util.Map<Integer, Boolean>> DRAWABLE =
+            java.util.Collections.synchronizedMap(new java.util.WeakHashMap<>());
+
+    /**
+     * {@link #clean}, and every character the font cannot draw replaced by U+FFFD (or '?' where the
+     * font lacks that too): a sheet never fails on a character its fonts do not have, and the reader
+     * sees that one was there.
+     */
+    static String printable(PDFont font, String s) {
+        String c = clean(s);
+        StringBuilder sb = null;
+        for (int i = 0; i < c.length(); ) {
+            int cp = c.codePointAt(i);
+            int len = Character.charCount(cp);
+            boolean ok = !(Character.isSurrogate(c.charAt(i)) && len == 1) && drawable(font, cp);
+            if (!ok && sb == null) {
+                sb = new StringBuilder(c.length()).append(c, 0, i);
+            }
+            if (sb != null) {
+                if (ok) {
+                    sb.appendCodePoint(cp);
+                } else {
+                    sb.append(drawable(font, 0xFFFD) ? MISSING : "?");
+                }
+            }
+            i += len;
+        }
+        return sb == null ? c : sb.toString();
+    }
+
+    private static boolean drawable(PDFont font, int cp) {
+        if (cp < 0x80 && cp >= 0x20) {
+            return true;
+        }
+        java.util.Map<Integer, Boolean> m = DRAWABLE.computeIfAbsent(font,
+                f -> new java.util.concurrent.ConcurrentHashMap<>());
+        return m.computeIfAbsent(cp, k -> {
+            try {
+                font.encode(new String(Character.toChars(k)));
+                return true;
+            } catch (IOException | IllegalArgumentException e) {
+                return false;
+            }
+        });
+    }
+
     static float width(PDFont font, float size, String s) {
         try {
-            return font.getStringWidth(clean(s)) / 1000f * size;
+            return font.getStringWidth(printable(font, s)) / 1000f * size;
         } catch (IOException e) {
             throw new java.io.UncheckedIOException(e);
         }
@@ -96,7 +146,7 @@ final class PdfCanvas {
     }
 
     void text(String s, float x, float y, PDFont font, float size, float[] color) throws IOException {
-        String t = clean(s);
+        String t = printable(font, s);
         if (t.isEmpty()) {
             return;
         }

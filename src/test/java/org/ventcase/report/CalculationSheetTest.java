@@ -128,6 +128,26 @@ class CalculationSheetTest {
         assertTrue(s.body().contains("largest: "), "chart marker key");
     }
 
+    /**
+     * A character the sheet's fonts do not have (CJK in the title and preparer, a box-drawing mix in a
+     * warning) is drawn as U+FFFD instead of failing the sheet (it used to end in "No glyph for
+     * U+6F22"). Invariant, no external values.
+     */
+    @Test
+    void charactersTheFontsLackAreReplacedNotFatal() throws IOException {
+        SheetModel m = SheetFixtures.bullet().model();
+        SheetIdentity id = m.identity();
+        SheetIdentity odd = new SheetIdentity("Bullet \u6f22\u5b57 check", id.tag(), id.revision(), id.date(),
+                "\u738b \u8fb2", id.checker(), id.toolName(), id.toolVersion(), id.inputHash());
+        java.util.List<String> warnings = new java.util.ArrayList<>(m.warnings());
+        warnings.add("A remark with \u6f22 inside");
+        SheetModel m2 = new SheetModel(odd, m.units(), m.revisions(), m.signOff(), m.inputs(), m.loads(), m.results(),
+                warnings, m.figures(), m.method(), m.cautions(), m.deferral(), m.unitNote(), m.banner());
+        Sheet s = write(m2, CalculationSheet.PageSize.A4, "odd.pdf");
+        assertTrue(s.all().contains("Bullet \uFFFD\uFFFD check"), "title with the replacement character");
+        assertTrue(s.all().contains("A remark with \uFFFD inside"), "warning with the replacement character");
+    }
+
     @Test
     void cautionsAndCodeDeferralAreOnTheSheet() throws IOException {
         SheetModel m = SheetFixtures.bullet().model();
