@@ -465,7 +465,7 @@ public final class CaseCalculation {
                 .in("Environment factor F", "%.4g (%s)", env.f(), env.description())
                 .in("Drainage and fire-fighting", ff == FireFighting.INADEQUATE ? "inadequate" : "adequate")
                 .out("Q", "%.1f kW", h.heatW() / 1e3)
-                .note(c.level().fire().ruleApplied()).build());
+                .note(c.level().fire()::ruleApplied).build());
         o.q = OptionalDouble.of(h.heatW());
         return h;
     }

@@ -35,8 +35,13 @@ final class VesselCommand implements Callable<Integer> {
     @Option(names = "--json", description = "Print the documented JSON result instead of the table.")
     boolean json;
 
+    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
+            description = "Unit system of the printed table: si or us (JSON is always SI). Default: ${DEFAULT-VALUE}.")
+    String units;
+
     @Override
     public Integer call() {
+        org.ventcase.report.UnitSystem system = org.ventcase.report.UnitSystem.parse("--units", units);
         Vessel v = vesselOptions.vessel();
         double z = vesselOptions.elevationM();
         double hf = vesselOptions.fireHeightM();
@@ -47,6 +52,24 @@ final class VesselCommand implements Callable<Integer> {
             return ExitCode.OK;
         }
         Text tx = new Text(out);
+        if (system == org.ventcase.report.UnitSystem.US) {
+            org.ventcase.report.DisplayUnits u = new org.ventcase.report.DisplayUnits(system);
+            org.ventcase.vessel.Words w = u.words();
+            tx.title(v.describe(w));
+            tx.row("Inside height", w.length().apply(v.totalHeight()));
+            tx.row("Total volume", Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.VOLUME, s.totalVolume())));
+            tx.row("Total inside area", w.area().apply(s.totalInsideArea()));
+            tx.row("Liquid level", w.length().apply(s.levelM()) + String.format(Locale.ROOT,
+                    " = %.2f %% of height = %.2f %% of volume", s.levelPercentHeight(), s.levelPercentVolume()));
+            tx.row("Liquid / vapour volume", Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.VOLUME,
+                    s.liquidVolume())) + " / " + Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.VOLUME,
+                    s.vapourVolume())));
+            tx.row("Wetted inside area", w.area().apply(s.wettedArea()));
+            tx.row("Fire-exposed wetted area", w.area().apply(s.fire().area()));
+            tx.row("Rule applied", s.fire().ruleApplied(w));
+            v.outsideArea().ifPresent(a -> tx.row("Total outside area", w.area().apply(a)));
+            return ExitCode.OK;
+        }
         tx.title(v.describe());
         tx.row("Inside height", "%.4f m", v.totalHeight());
         tx.row("Total volume", "%.4f m3", s.totalVolume());

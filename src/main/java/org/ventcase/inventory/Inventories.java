@@ -166,7 +166,7 @@ public final class Inventories {
                     .out("Liquid volume", m3(vs.liquidVolume()))
                     .out("Vapour volume", m3(vs.vapourVolume()))
                     .out("Fire-exposed wetted area", "%.4f m2", vs.fire().area())
-                    .note(vs.fire().ruleApplied()).build());
+                    .note(vs.fire()::ruleApplied).build());
         }
 
         void outage() {

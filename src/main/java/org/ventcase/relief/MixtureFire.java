@@ -96,7 +96,7 @@ public final class MixtureFire {
                 .in("Vessel", in.vessel()::describe)
                 .out("Liquid volume", "%.3f m3", vs.liquidVolume())
                 .out("Fire-exposed wetted area", "%.3f m2", vs.fire().area())
-                .note(vs.fire().ruleApplied()).build());
+                .note(vs.fire()::ruleApplied).build());
 
         HeatInputResult heat = FireHeatInput.wettedVessel(vs.fire().area(), in.environment().f(), in.fireFighting());
         warnings.addAll(heat.warnings());

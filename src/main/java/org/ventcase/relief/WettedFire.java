@@ -66,7 +66,7 @@ public final class WettedFire {
                 .out("Liquid volume", "%.3f m3", vs.liquidVolume())
                 .out("Wetted area", "%.3f m2", vs.wettedArea())
                 .out("Fire-exposed wetted area", "%.3f m2", vs.fire().area())
-                .note(vs.fire().ruleApplied()).build());
+                .note(vs.fire()::ruleApplied).build());
         if (vs.levelPercentVolume() > 95.0) {
             warnings.add(String.format(Locale.US, "The liquid fills %.1f %% of the vessel: less than the usual 5 %% "
                     + "vapour space (outage) is left.", vs.levelPercentVolume()));

@@ -313,7 +313,8 @@ final class CaseSheet {
                         + "(%.2f %% of height, %.2f %% of volume)", vs.levelPercentHeight(), vs.levelPercentVolume())),
                 Row.of("Total inside area", u.plain(Kind.AREA, vs.totalInsideArea())),
                 Row.of("Wetted area at the liquid level", u.plain(Kind.AREA, vs.wettedArea())),
-                Row.of("Fire-exposed wetted area", u.plain(Kind.AREA, vs.fire().area()))), vs.fire().ruleApplied()));
+                Row.of("Fire-exposed wetted area", u.plain(Kind.AREA, vs.fire().area()))),
+                vs.fire().ruleApplied(u.words())));
         t.addAll(inventoryTables());
         for (CaseResult.ScenarioResult s : r.scenarios()) {
             s.relievedFluid().ifPresent(fl -> t.add(fluidTable(s, fl)));

@@ -49,6 +49,19 @@ public final class DisplayUnits {
         return main + " [" + single(k, si, other) + "]";
     }
 
+    /**
+     * How the vessel's descriptions and rule texts write lengths and areas in this system: SI as the
+     * domain writes them ("3.2 m"); US customary in ft and ft2 with four significant digits.
+     */
+    public org.ventcase.vessel.Words words() {
+        if (system == UnitSystem.SI) {
+            return org.ventcase.vessel.Words.SI;
+        }
+        return new org.ventcase.vessel.Words(
+                m -> String.format(Locale.ROOT, "%.4g ft", convert(Kind.LENGTH, m, UnitSystem.US)),
+                a -> String.format(Locale.ROOT, "%.4g ft2", convert(Kind.AREA, a, UnitSystem.US)));
+    }
+
     /** Value and unit in the sheet's system only. */
     public String plain(Kind k, double si) {
         return single(k, si, system);

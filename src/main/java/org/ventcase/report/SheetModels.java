@@ -39,7 +39,7 @@ public final class SheetModels {
     /** The rows that describe a vessel's inside geometry, shared by every sheet that shows a vessel. */
     static List<Row> vesselGeometryRows(Vessel v, DisplayUnits u) {
         List<Row> vessel = new ArrayList<>();
-        vessel.add(Row.of("Arrangement", v.describe()));
+        vessel.add(Row.of("Arrangement", v.describe(u.words())));
         vessel.add(Row.of("Inside diameter", u.plain(Kind.LENGTH, v.diameter())));
         if (v.shape() != Vessel.Shape.SPHERE) {
             vessel.add(Row.of("Tangent-to-tangent length", u.plain(Kind.LENGTH, v.tangentLength())));

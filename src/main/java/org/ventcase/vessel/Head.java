@@ -26,7 +26,12 @@ public sealed interface Head permits Head.Flat, Head.Hemispherical, Head.Ellipso
     double depth(double diameter);
 
     /** A short name for a calculation sheet, e.g. {@code "ellipsoidal, depth 0.5 m"}. */
-    String describe();
+    default String describe() {
+        return describe(Words.SI);
+    }
+
+    /** {@link #describe()} with lengths written as {@code w} writes them. */
+    String describe(Words w);
 
     /** A flat plate closure. */
     static Flat flat() {
@@ -85,7 +90,7 @@ public sealed interface Head permits Head.Flat, Head.Hemispherical, Head.Ellipso
         }
 
         @Override
-        public String describe() {
+        public String describe(Words w) {
             return "flat";
         }
     }
@@ -98,7 +103,7 @@ public sealed interface Head permits Head.Flat, Head.Hemispherical, Head.Ellipso
         }
 
         @Override
-        public String describe() {
+        public String describe(Words w) {
             return "hemispherical";
         }
     }
@@ -121,8 +126,8 @@ public sealed interface Head permits Head.Flat, Head.Hemispherical, Head.Ellipso
         }
 
         @Override
-        public String describe() {
-            return "ellipsoidal, depth " + Fmt.g(depth) + " m";
+        public String describe(Words w) {
+            return "ellipsoidal, depth " + w.m(depth);
         }
     }
 
@@ -147,9 +152,8 @@ public sealed interface Head permits Head.Flat, Head.Hemispherical, Head.Ellipso
         }
 
         @Override
-        public String describe() {
-            return "torispherical, crown radius " + Fmt.g(crownRadius) + " m, knuckle radius "
-                    + Fmt.g(knuckleRadius) + " m";
+        public String describe(Words w) {
+            return "torispherical, crown radius " + w.m(crownRadius) + ", knuckle radius " + w.m(knuckleRadius);
         }
     }
 
@@ -173,7 +177,7 @@ public sealed interface Head permits Head.Flat, Head.Hemispherical, Head.Ellipso
         }
 
         @Override
-        public String describe() {
+        public String describe(Words w) {
             return "conical, half-angle " + Fmt.g(halfAngleDeg) + " deg";
         }
     }

@@ -379,37 +379,36 @@ public final class Vessel {
                             + shape.name().toLowerCase(java.util.Locale.ROOT).replace('_', ' '));
         }
         double zone = fire.fireHeight() - fire.bottomElevation();
-        String base = "API Std 521 / ISO 23251 fire case: wetted area within " + Fmt.g(fire.fireHeight())
-                + " m above grade (the base of the pool fire); vessel bottom (lowest inside point) "
-                + Fmt.g(fire.bottomElevation()) + " m above grade; liquid level " + Fmt.g(h)
-                + " m above the vessel bottom. ";
+        double fireHeight = fire.fireHeight();
+        double bottom = fire.bottomElevation();
+        // the rule's words are written when read, in the units asked for (FireExposedArea.Rule)
+        java.util.function.Function<Words, String> base = w -> "API Std 521 / ISO 23251 fire case: wetted area "
+                + "within " + w.m(fireHeight) + " above grade (the base of the pool fire); vessel bottom (lowest "
+                + "inside point) " + w.m(bottom) + " above grade; liquid level " + w.m(h) + " above the vessel "
+                + "bottom. ";
         if (!(zone > 0)) {
-            return new FireExposedArea(0.0, 0.0, base + "The vessel bottom is at or above the fire height, so no "
-                    + "wetted area lies within the fire zone: wetted area 0. Consider the gas-filled "
-                    + "(unwetted) vessel case.");
+            return new FireExposedArea(0.0, 0.0, new FireExposedArea.Rule(w -> base.apply(w) + "The vessel bottom is "
+                    + "at or above the fire height, so no wetted area lies within the fire zone: wetted area 0. "
+                    + "Consider the gas-filled (unwetted) vessel case."));
         }
-        double limit;
-        String rule;
-        if (shape == Shape.SPHERE) {
-            limit = Math.max(radius, zone);
-            rule = "Sphere: wetted area up to the maximum horizontal diameter (" + Fmt.g(radius)
-                    + " m above the bottom) or the fire height (" + Fmt.g(zone)
-                    + " m above the bottom), whichever is greater, limited by the liquid level";
-        } else {
-            limit = zone;
-            rule = "Wetted area below the lower of the liquid level and the fire height (" + Fmt.g(zone)
-                    + " m above the vessel bottom)";
-        }
+        double limit = shape == Shape.SPHERE ? Math.max(radius, zone) : zone;
+        boolean sphere = shape == Shape.SPHERE;
+        double r = radius;
         double hEff = Math.min(h, Math.min(limit, totalHeight));
-        rule += "; effective level " + Fmt.g(hEff) + " m ("
-                + (hEff == h ? "liquid level governs" : "fire zone governs") + ").";
         double area = wettedArea(hEff);
+        double excluded = fire.excludeSkirtedBottomHead() ? bottomHeadWettedArea(hEff) : Double.NaN;
         if (fire.excludeSkirtedBottomHead()) {
-            double excluded = bottomHeadWettedArea(hEff);
             area = Math.max(0.0, area - excluded);
-            rule += " Bottom head inside the skirt excluded (" + Fmt.g(excluded) + " m2).";
         }
-        return new FireExposedArea(area, hEff, base + rule);
+        boolean skirt = fire.excludeSkirtedBottomHead();
+        return new FireExposedArea(area, hEff, new FireExposedArea.Rule(w -> base.apply(w) + (sphere
+                ? "Sphere: wetted area up to the maximum horizontal diameter (" + w.m(r) + " above the bottom) or "
+                        + "the fire height (" + w.m(zone) + " above the bottom), whichever is greater, limited by the "
+                        + "liquid level"
+                : "Wetted area below the lower of the liquid level and the fire height (" + w.m(zone)
+                        + " above the vessel bottom)")
+                + "; effective level " + w.m(hEff) + " (" + (hEff == h ? "liquid level governs" : "fire zone governs")
+                + ")." + (skirt ? " Bottom head inside the skirt excluded (" + w.m2(excluded) + ")." : "")));
     }
 
     private void checkLevel(double h) {
@@ -418,17 +417,22 @@ public final class Vessel {
 
     /** One line for a calculation sheet. */
     public String describe() {
+        return describe(Words.SI);
+    }
+
+    /** {@link #describe()} with lengths written as {@code w} writes them. */
+    public String describe(Words w) {
         switch (shape) {
             case SPHERE:
-                return "sphere, inside diameter " + Fmt.g(diameter) + " m";
+                return "sphere, inside diameter " + w.m(diameter);
             case HORIZONTAL_CYLINDER:
-                return "horizontal cylinder, inside diameter " + Fmt.g(diameter) + " m, tangent length "
-                        + Fmt.g(tangentLength) + " m, heads: " + firstHead.orElseThrow().describe() + " / "
-                        + secondHead.orElseThrow().describe();
+                return "horizontal cylinder, inside diameter " + w.m(diameter) + ", tangent length "
+                        + w.m(tangentLength) + ", heads: " + firstHead.orElseThrow().describe(w) + " / "
+                        + secondHead.orElseThrow().describe(w);
             default:
-                return "vertical cylinder, inside diameter " + Fmt.g(diameter) + " m, tangent length "
-                        + Fmt.g(tangentLength) + " m, bottom head " + firstHead.orElseThrow().describe()
-                        + ", top head " + secondHead.orElseThrow().describe();
+                return "vertical cylinder, inside diameter " + w.m(diameter) + ", tangent length "
+                        + w.m(tangentLength) + ", bottom head " + firstHead.orElseThrow().describe(w)
+                        + ", top head " + secondHead.orElseThrow().describe(w);
         }
     }
 

@@ -181,6 +181,35 @@ class CliTest {
         assertFalse(r6.err().isBlank());
     }
 
+    /**
+     * vessel --units us: every printed length, area and volume in ft, ft2 and ft3, the words of the
+     * description and the fire rule too. Check values: the JSON's SI figures converted with the
+     * international foot, 0.3048 m exactly (definition of the unit).
+     */
+    @Test
+    void vesselPrintsCustomaryUnitsWhenAsked() throws Exception {
+        String[] base = {"vessel", "--shape", "horizontal", "--diameter", "3.2 m", "--length", "12 m", "--heads", "2:1",
+            "--level", "65 %", "--elevation", "1.2 m"};
+        JsonNode n = json(run(concat(base, "--json")).out());
+        Run us = run(concat(base, "--units", "us"));
+        assertEquals(0, us.code(), us.err());
+        double ft = 0.3048;
+        assertTrue(us.out().contains("inside diameter 10.50 ft, tangent length 39.37 ft"), us.out());
+        assertTrue(us.out().contains(String.format(java.util.Locale.ROOT, "%.4g ft2",
+                n.get("wettedArea_m2").asDouble() / (ft * ft))), us.out());
+        assertTrue(us.out().contains("ft3"), us.out());
+        assertTrue(us.out().contains("wetted area within 24.93 ft above grade"), "fire height 7.6 m: " + us.out());
+        assertTrue(!us.out().matches("(?s).*\\d m\\b.*") && !us.out().contains(" m2") && !us.out().contains(" m3"),
+                "no SI unit left: " + us.out());
+        assertEquals(2, run(concat(base, "--units", "imperial")).code());
+    }
+
+    private static String[] concat(String[] a, String... b) {
+        String[] out = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, out, a.length, b.length);
+        return out;
+    }
+
     @Test
     void vesselJsonAndMessages() throws Exception {
         Run r = run("vessel", "--shape", "horizontal", "--diameter", "3.2 m", "--length", "12 m", "--heads", "2:1",
