@@ -471,8 +471,31 @@ public final class WizardViewModel {
 
     /** A problem as one line for a person: what was wrong and what is accepted. */
     public static String describe(Problem p) {
-        return p.value() == null ? Messages.get("field.missing", p.accepted())
-                : Messages.get("field.notAccepted", p.value(), p.accepted());
+        String accepted = onScreen(p.path(), p.accepted());
+        return p.value() == null ? Messages.get("field.missing", accepted)
+                : Messages.get("field.notAccepted", p.value(), accepted);
+    }
+
+    private static final java.util.regex.Pattern MEMBER = java.util.regex.Pattern.compile("\\b[a-z][A-Za-z]*\\b");
+
+    /**
+     * The validator names a section's members as the case file spells them ("expected the vessel:
+     * shape, insideDiameter, ..."); on screen the fields carry labels ("Inside diameter"), so each
+     * member name after the colon that has a field label under this path is replaced by the label.
+     */
+    static String onScreen(String path, String accepted) {
+        int colon = accepted.indexOf(": ");
+        if (colon < 0) {
+            return accepted;
+        }
+        java.util.regex.Matcher m = MEMBER.matcher(accepted.substring(colon + 2));
+        StringBuilder out = new StringBuilder(accepted.substring(0, colon + 2));
+        while (m.find()) {
+            String label = Messages.orElse("label." + Messages.fieldKey(path + "." + m.group()), m.group());
+            m.appendReplacement(out, java.util.regex.Matcher.quoteReplacement(label));
+        }
+        m.appendTail(out);
+        return out.toString();
     }
 
     /** Problems that stop the engineer leaving {@code s}. */

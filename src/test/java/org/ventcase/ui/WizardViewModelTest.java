@@ -24,6 +24,27 @@ class WizardViewModelTest {
         return new WizardViewModel(CaseRunner.standard(), new UserFiles(tmp.resolve("home")));
     }
 
+    /**
+     * A section the new case has not filled yet is reported with the labels on screen, not the case
+     * file's member names (issue: "Required: ... shape, insideDiameter, tangentLength"). Invariant of
+     * the project's own texts.
+     */
+    @Test
+    void sectionProblemsNameTheFieldsAsTheScreenDoes() {
+        WizardViewModel vm = vm();
+        vm.newCase();
+        String vessel = WizardViewModel.describe(org.ventcase.casefile.Problem.missing("$.vessel",
+                "expected the vessel: shape, insideDiameter, tangentLength, heads, bottomElevation"));
+        assertEquals("Required: expected the vessel: Shape, Inside diameter, Tangent-to-tangent length, Heads, "
+                + "Bottom above grade", vessel);
+        String storage = WizardViewModel.describe(org.ventcase.casefile.Problem.missing("$.storage",
+                "expected the storage state: mode, temperature, liquidLevel (and pressure)"));
+        assertEquals("Required: expected the storage state: Storage mode, Storage temperature, Liquid level (and "
+                + "Storage pressure)", storage);
+        assertFalse(vm.problems().stream().map(WizardViewModel::describe)
+                .anyMatch(t -> t.contains("insideDiameter") || t.contains("densityBasis")), "no member names shown");
+    }
+
     @Test
     void aBadValueGetsTheValidatorsMessageBesideItsField() {
         WizardViewModel vm = vm();
