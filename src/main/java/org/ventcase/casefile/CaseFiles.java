@@ -201,7 +201,54 @@ public final class CaseFiles {
             return Problem.of(path, msg.replaceAll("^Duplicate field '(.*)'$", "$1"),
                     "each field may appear once in an object; this one is repeated" + where);
         }
-        return Problem.of(path, "not valid JSON", (msg == null ? "syntax error" : msg) + where);
+        String[] fe = jsonSyntax(msg == null ? "" : msg);
+        return Problem.of(path, fe[0], fe[1] + where);
+    }
+
+    private static final java.util.regex.Pattern UNEXPECTED_CHAR = java.util.regex.Pattern.compile(
+            "(?s)Unexpected character \\('(.+?)' \\(code \\d+\\)\\)[^:]*: was expecting (.*)");
+    private static final java.util.regex.Pattern UNRECOGNIZED = java.util.regex.Pattern.compile(
+            "(?s)Unrecognized token '(.*?)'.*");
+
+    /**
+     * The parser's complaint in the user's terms: what was found and what was expected (the parser's
+     * own wording names its internals, e.g. character codes and limits by their setting names).
+     */
+    static String[] jsonSyntax(String msg) {
+        String m = msg.strip();
+        if (m.startsWith("Unexpected end-of-input")) {
+            return new String[] {"end of file", "expected the JSON to go on: the file is cut short (a string, an "
+                    + "object { } or an array [ ] is not closed)"};
+        }
+        if (m.contains("nesting depth")) {
+            return new String[] {"nested more than 1000 levels deep", "expected a case nested at most 1000 levels"};
+        }
+        java.util.regex.Matcher u = UNEXPECTED_CHAR.matcher(m);
+        if (u.matches()) {
+            String want = u.group(2).strip();
+            String expected;
+            if (want.startsWith("double-quote to start field name")) {
+                expected = "expected a field name in double quotes (a comma too many before it?)";
+            } else if (want.startsWith("comma to separate Object entries")) {
+                expected = "expected a comma between two fields, or } to close the object";
+            } else if (want.startsWith("comma to separate Array entries")) {
+                expected = "expected a comma between two items, or ] to close the list";
+            } else if (want.startsWith("a colon to separate field name and value")
+                    || want.startsWith("colon to separate field name and value")) {
+                expected = "expected a colon after the field name";
+            } else {
+                expected = "expected a JSON value: a number, \"text\" in double quotes, true, false, null, { } or [ ]";
+            }
+            return new String[] {u.group(1), expected};
+        }
+        java.util.regex.Matcher t = UNRECOGNIZED.matcher(m);
+        if (t.matches()) {
+            return new String[] {t.group(1), "expected a JSON value: a number, \"text\" in double quotes, "
+                    + "true, false, null, { } or [ ] (text needs its double quotes)"};
+        }
+        String plain = m.replaceAll(" \\(code \\d+\\)", "").replaceAll("\\(.*?`.*?`.*?\\)", "")
+                .replaceAll("\\s+", " ").strip();
+        return new String[] {"not valid JSON", plain.isEmpty() ? "expected valid JSON" : plain};
     }
 
     private static String jsonPath(JsonStreamContext ctx) {

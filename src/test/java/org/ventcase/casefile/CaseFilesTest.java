@@ -142,6 +142,33 @@ class CaseFilesTest {
         assertTrue(p.accepted().contains("repeated"), p.accepted());
     }
 
+    /**
+     * Broken JSON is reported in the user's terms, with the line and column: a file cut short, a
+     * comma too many, a bare word, nesting beyond the limit, never the parser's internal wording
+     * (character codes, setting names). Invariant of the project's own texts.
+     */
+    @Test
+    void brokenJsonIsDescribedWithoutTheParsersInternals() {
+        String whole = Fixtures.bulletWith("\"tangentLength\"", "\"tangentLength\"");
+        CaseValidationException cut = assertThrows(CaseValidationException.class,
+                () -> CaseFiles.read(whole.substring(0, whole.length() / 2), "cut"));
+        Problem p = cut.problems().get(0);
+        assertTrue(p.accepted().contains("cut short") && p.accepted().contains("line "), p.accepted());
+        CaseValidationException comma = assertThrows(CaseValidationException.class,
+                () -> CaseFiles.read("{\"schemaVersion\": 1, \"identity\": {\"title\": \"x\",}}", "comma"));
+        assertEquals("}", comma.problems().get(0).value());
+        assertTrue(comma.problems().get(0).accepted().contains("a comma too many"), comma.problems().get(0).accepted());
+        CaseValidationException word = assertThrows(CaseValidationException.class,
+                () -> CaseFiles.read("{\"schemaVersion\": 1, \"identity\": {\"title\": x}}", "word"));
+        assertEquals("x", word.problems().get(0).value());
+        String deep = "[".repeat(2000) + "]".repeat(2000);
+        CaseValidationException nested = assertThrows(CaseValidationException.class, () -> CaseFiles.read(deep, "deep"));
+        for (CaseValidationException e : java.util.List.of(cut, comma, word, nested)) {
+            String text = e.problems().get(0).value() + " " + e.problems().get(0).accepted();
+            assertTrue(!text.contains("code ") && !text.contains("`") && !text.contains("Constraints"), text);
+        }
+    }
+
     @Test
     void unknownFieldIsReportedWithTheNearestKnownName() {
         String json = Fixtures.bulletWith("\"tangentLength\"", "\"tangentLenght\"");
