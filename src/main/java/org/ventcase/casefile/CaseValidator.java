@@ -102,9 +102,23 @@ public final class CaseValidator {
                     p = m.getValue();
                 }
             }
-            problems.add(Problem.from(p, e));
+            Problem pr = Problem.from(p, e);
+            // echo what the user wrote ("105 %v", "30 barg"), not the domain's restatement of it, and
+            // name the case file's fields, not the domain's
+            String typed = typed(p);
+            pr = new Problem(pr.path(), typed != null ? typed : pr.value(),
+                    pr.accepted().replace("give relief.setAboveLimitReason", "give device.setAboveLimitReason"),
+                    pr.domainField());
+            problems.add(pr);
             return Optional.empty();
         }
+    }
+
+    /** The text the user wrote at each path read so far (quantities and levels). */
+    private final Map<String, String> typed = new java.util.HashMap<>();
+
+    private String typed(String path) {
+        return typed.get(path);
     }
 
     private <T> Optional<T> attempt(String path, Supplier<T> s) {
@@ -118,6 +132,7 @@ public final class CaseValidator {
             }
             return Optional.empty();
         }
+        typed.put(path, text);
         return attempt(path, () -> Units.parse(path, text, d));
     }
 
@@ -129,6 +144,7 @@ public final class CaseValidator {
             }
             return Optional.empty();
         }
+        typed.put(path, text);
         return attempt(path, () -> Units.parsePressure(path, text, atmPa));
     }
 
@@ -714,6 +730,7 @@ public final class CaseValidator {
             level = Level.ofHeight(0.0);
             h = 0.0;
             if (s.liquidLevel() != null) {
+                typed.put("$.storage.liquidLevel", s.liquidLevel());
                 Optional<Level> given = attempt("$.storage.liquidLevel",
                         () -> Specs.level("$.storage.liquidLevel", s.liquidLevel()));
                 if (given.isEmpty()) {
@@ -731,6 +748,7 @@ public final class CaseValidator {
                         + "('70 %v')");
                 return Optional.empty();
             }
+            typed.put("$.storage.liquidLevel", s.liquidLevel());
             Optional<Level> given = attempt("$.storage.liquidLevel",
                     () -> Specs.level("$.storage.liquidLevel", s.liquidLevel()));
             if (given.isEmpty() || vessel.isEmpty()) {

@@ -96,12 +96,23 @@ final class FlashCommand implements Callable<Integer> {
                 tx.row("  Molar mass", "%.3f kg/kmol", ph.molarMass());
             }
             double[] x = ph.composition();
+            // y for a vapour, x for a liquid (z is the feed), as the trade writes them
+            String sym = ph.label() == org.ventcase.thermo.PhaseLabel.VAPOR ? "y" : ph.label()
+                    == org.ventcase.thermo.PhaseLabel.LIQUID ? "x" : "z";
             for (int i = 0; i < x.length; i++) {
-                tx.row("  x " + mm.model().components().get(i).name(), "%.6f", x[i]);
+                tx.row("  " + sym + " " + mm.model().components().get(i).name(), "%.6f", x[i]);
             }
         }
         tx.blank();
         tx.row("Method", f.method());
+        java.util.List<org.ventcase.thermo.Component> cs = mm.model().components();
+        double[][] k = mm.kij().kij();
+        String[][] src = mm.kij().sources();
+        for (int i = 0; i < cs.size(); i++) {
+            for (int j = i + 1; j < cs.size(); j++) {
+                tx.row("k_ij " + cs.get(i).name() + " / " + cs.get(j).name(), "%.4f (%s)", k[i][j], src[i][j]);
+            }
+        }
         java.util.List<String> w = new java.util.ArrayList<>(mm.kij().warnings());
         w.addAll(f.warnings());
         tx.warnings(w);

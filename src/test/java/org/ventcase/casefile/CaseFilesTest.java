@@ -169,6 +169,30 @@ class CaseFilesTest {
         }
     }
 
+    /**
+     * A refused quantity is echoed as the user wrote it ("105 %v", not the domain's "105 %"; a set
+     * pressure in barg, not in kPa gauge), and the hint names the case file's field. Invariant.
+     */
+    @Test
+    void refusedValuesAreEchoedAsWritten() {
+        String level = Fixtures.bulletWith(LEVEL_FROM, "\"liquidLevel\": \"105 %v\"");
+        CaseValidationException e = assertThrows(CaseValidationException.class, () -> CaseFiles.load(level, "l"));
+        Problem p = e.problems().stream().filter(q -> q.path().equals("$.storage.liquidLevel")).findFirst()
+                .orElseThrow();
+        assertEquals("105 %v", p.value(), e.getMessage());
+    }
+
+    private static final String LEVEL_FROM = levelFrom();
+
+    private static String levelFrom() {
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\"liquidLevel\": \"[^\"]*\"")
+                .matcher(Fixtures.bulletWith("\"tangentLength\"", "\"tangentLength\""));
+        if (!m.find()) {
+            throw new IllegalStateException("the bullet template has no liquidLevel");
+        }
+        return m.group();
+    }
+
     @Test
     void unknownFieldIsReportedWithTheNearestKnownName() {
         String json = Fixtures.bulletWith("\"tangentLength\"", "\"tangentLenght\"");
