@@ -2,7 +2,6 @@ package org.ventcase.ui;
 
 import java.nio.file.Path;
 import java.util.Optional;
-import java.util.concurrent.atomic.AtomicBoolean;
 
 import javafx.beans.property.ReadOnlyIntegerProperty;
 import javafx.beans.property.ReadOnlyIntegerWrapper;
@@ -13,7 +12,6 @@ import javafx.beans.property.ReadOnlyStringWrapper;
 
 import org.ventcase.report.CalculationSheet;
 import org.ventcase.app.AuditRunner;
-import org.ventcase.app.CaseRunner;
 
 /**
  * State and actions of the wizard's audit mode: the register and thresholds chosen, the audit of
@@ -53,8 +51,8 @@ public final class AuditViewModel {
             "thresholds", Optional.empty());
     private Optional<AuditRunner.Input> register = Optional.empty();
 
-    private long generation;
-    private AtomicBoolean cancelled = new AtomicBoolean(false);
+    /** The audit run in progress. */
+    private final BackgroundJob job;
 
     /**
      * @param runner  reads and runs the audit (off the application thread)
@@ -64,6 +62,7 @@ public final class AuditViewModel {
     public AuditViewModel(AuditRunner runner, LiveCalculation.Env env, int threads) {
         this.runner = runner;
         this.env = env;
+        this.job = new BackgroundJob(env);
         this.threads = threads;
     }
 
@@ -91,49 +90,32 @@ public final class AuditViewModel {
         if (state.get() != State.RUNNING) {
             return;
         }
-        generation++;
-        cancelled.set(true);
+        job.supersede();
         setState(State.CANCELLED, Messages.get("audit.state.cancelled"));
     }
 
     private void start(AuditRunner.Input reg) {
-        generation++;
-        cancelled.set(true);
+        job.supersede();
         register = Optional.of(reg);
-        long g = generation;
-        AtomicBoolean stop = new AtomicBoolean(false);
-        cancelled = stop;
         Optional<AuditRunner.Input> th = thresholds.get();
         outcome.set(Optional.empty());
         exportMessage.set("");
         done.set(0);
         total.set(0);
         setState(State.RUNNING, Messages.get("audit.state.running", reg.name()));
-        env.background(() -> {
-            try {
-                AuditRunner.Outcome o = runner.run(reg, th, threads, (d, n) -> env.ui(() -> {
-                    if (g == generation && state.get() == State.RUNNING && d >= done.get()) {
-                        total.set(n);
-                        done.set(d);
+        job.<AuditRunner.Outcome, int[]>start((p, cancelled) -> runner.run(reg, th, threads,
+                (d, n) -> p.accept(new int[] {d, n}), cancelled),
+                dn -> {
+                    if (state.get() == State.RUNNING && dn[0] >= done.get()) {
+                        total.set(dn[1]);
+                        done.set(dn[0]);
                     }
-                }), stop::get);
-                env.ui(() -> {
-                    if (g == generation) {
-                        outcome.set(Optional.of(o));
-                        setState(State.DONE, "");
-                    }
-                });
-            } catch (CaseRunner.Cancelled e) {
-                // Cancel or a newer run owns the state now
-            } catch (RuntimeException e) {
-                env.ui(() -> {
-                    if (g == generation) {
-                        setState(State.FAILED, Messages.get("audit.failed", reg.name(),
-                                ReviewViewModel.describe(e)));
-                    }
-                });
-            }
-        });
+                },
+                o -> {
+                    outcome.set(Optional.of(o));
+                    setState(State.DONE, "");
+                },
+                e -> setState(State.FAILED, Messages.get("audit.failed", reg.name(), ReviewViewModel.describe(e))));
     }
 
     /** Writes the per-vessel CSV off the application thread; {@link #exportMessage()} reports. */

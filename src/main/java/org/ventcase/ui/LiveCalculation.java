@@ -2,7 +2,6 @@ package org.ventcase.ui;
 
 import java.util.Optional;
 import java.util.concurrent.ExecutorService;
-import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.function.Supplier;
 
 import javafx.animation.PauseTransition;
@@ -127,16 +126,15 @@ public final class LiveCalculation {
     private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
     private final ReadOnlyIntegerWrapper runs = new ReadOnlyIntegerWrapper(this, "runs", 0);
 
-    /** Increases with every change of the case; a run belongs to the generation it started in. */
-    private long generation;
-    private Cancellable pending = () -> { };
-    private AtomicBoolean running = new AtomicBoolean(true);
+    /** The run in progress or pending; a change of the case supersedes it. */
+    private final BackgroundJob job;
 
     public LiveCalculation(CaseRunner runner, Env env, Supplier<Optional<ValidatedCase>> cases, long debounceMs) {
         this.runner = runner;
         this.env = env;
         this.cases = cases;
         this.debounceMs = debounceMs;
+        this.job = new BackgroundJob(env);
     }
 
     /**
@@ -144,40 +142,30 @@ public final class LiveCalculation {
      * waits the debounce time, or reports the case invalid at once.
      */
     public void changed() {
-        restart();
+        job.supersede();
         if (cases.get().isEmpty()) {
             setState(State.INVALID, "");
             return;
         }
-        long g = generation;
         setState(State.WAITING, "");
-        pending = env.after(debounceMs, () -> {
-            if (g == generation) {
-                start();
-            }
-        });
+        job.startAfter(debounceMs, this::start);
     }
 
     /** Another case was loaded: forgets the last result and computes the new case without waiting. */
     public void loaded() {
-        restart();
+        job.supersede();
         summary.set(Optional.empty());
         if (cases.get().isEmpty()) {
             setState(State.INVALID, "");
             return;
         }
-        long g = generation;
         setState(State.WAITING, "");
-        pending = env.after(0, () -> {
-            if (g == generation) {
-                start();
-            }
-        });
+        job.startAfter(0, this::start);
     }
 
     /** Recalculates now (the Recalculate button): cancels what is pending or running first. */
     public void recalculate() {
-        restart();
+        job.supersede();
         start();
     }
 
@@ -186,15 +174,8 @@ public final class LiveCalculation {
         if (state.get() != State.RUNNING && state.get() != State.WAITING) {
             return;
         }
-        restart();
+        job.supersede();
         setState(State.CANCELLED, Messages.get("results.cancelled"));
-    }
-
-    private void restart() {
-        generation++;
-        pending.cancel();
-        pending = () -> { };
-        running.set(true);
     }
 
     private void start() {
@@ -203,38 +184,27 @@ public final class LiveCalculation {
             setState(State.INVALID, "");
             return;
         }
-        long g = generation;
-        AtomicBoolean cancelled = new AtomicBoolean(false);
-        running = cancelled;
         progress.set(0);
         setState(State.RUNNING, Messages.get("results.running"));
         runs.set(runs.get() + 1);
         ValidatedCase k = kase.get();
-        env.background(() -> {
-            try {
-                CaseSummary s = runner.run(k, (f, m) -> env.ui(() -> {
-                    if (g == generation && state.get() == State.RUNNING) {
-                        progress.set(f);
-                        message.set(m);
+        job.<CaseSummary, Step>start((p, cancelled) -> runner.run(k, (f, m) -> p.accept(new Step(f, m)), cancelled),
+                st -> {
+                    if (state.get() == State.RUNNING) {
+                        progress.set(st.fraction());
+                        message.set(st.what());
                     }
-                }), cancelled::get);
-                env.ui(() -> {
-                    if (g == generation) {
-                        summary.set(Optional.of(s));
-                        progress.set(1);
-                        setState(State.CURRENT, "");
-                    }
-                });
-            } catch (CaseRunner.Cancelled e) {
-                // a newer edit or the Cancel button owns the state now
-            } catch (RuntimeException e) {
-                env.ui(() -> {
-                    if (g == generation) {
-                        setState(State.FAILED, Messages.get("results.failed", String.valueOf(e.getMessage())));
-                    }
-                });
-            }
-        });
+                },
+                s -> {
+                    summary.set(Optional.of(s));
+                    progress.set(1);
+                    setState(State.CURRENT, "");
+                },
+                e -> setState(State.FAILED, Messages.get("results.failed", String.valueOf(e.getMessage()))));
+    }
+
+    /** One progress report of a run: the fraction done and what is being computed. */
+    record Step(double fraction, String what) {
     }
 
     private void setState(State s, String m) {

@@ -6,7 +6,6 @@ import java.util.EnumMap;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
-import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
 
@@ -22,7 +21,6 @@ import javafx.beans.property.StringProperty;
 import org.ventcase.report.CalculationSheet;
 import org.ventcase.review.ReviewQuantity;
 import org.ventcase.review.Tolerances;
-import org.ventcase.app.CaseRunner;
 import org.ventcase.app.ReviewRunner;
 
 /**
@@ -107,9 +105,8 @@ public final class ReviewViewModel {
     private ReviewRunner.OpenCase lastOpen;
     private boolean resetting;
 
-    private long generation;
-    private LiveCalculation.Cancellable pending = () -> { };
-    private AtomicBoolean cancelled = new AtomicBoolean(false);
+    /** The review run in progress or pending. */
+    private final BackgroundJob job;
 
     /**
      * @param runner     reads claimed files and runs the review (off the application thread)
@@ -123,6 +120,7 @@ public final class ReviewViewModel {
         this.env = env;
         this.openCase = openCase;
         this.debounceMs = debounceMs;
+        this.job = new BackgroundJob(env);
         for (ReviewQuantity q : ReviewQuantity.values()) {
             if (q.kind() == ReviewQuantity.Kind.EXACT) {
                 continue;
@@ -155,7 +153,7 @@ public final class ReviewViewModel {
 
     /** Runs the review again now (cancels what is pending or running first). */
     public void rerun() {
-        restart();
+        job.supersede();
         start();
     }
 
@@ -164,7 +162,7 @@ public final class ReviewViewModel {
         if (state.get() != State.RUNNING && state.get() != State.WAITING) {
             return;
         }
-        restart();
+        job.supersede();
         setState(State.CANCELLED, Messages.get("review.state.cancelled"));
     }
 
@@ -223,27 +221,15 @@ public final class ReviewViewModel {
         if (shown.isPresent() && state.get() != State.RUNNING && lastOpen == openCase.get()) {
             // The case and the claimed values are unchanged: judge the computed review again with the
             // new tolerances, here and now (no case is computed again; ReviewRunner.Outcome.withTolerances).
-            restart();
+            job.supersede();
             outcome.set(Optional.of(shown.get().withTolerances(tolerances)));
             progress.set(1);
             setState(State.CURRENT, "");
             return;
         }
-        restart();
-        long g = generation;
+        job.supersede();
         setState(State.WAITING, Messages.get("review.state.waiting"));
-        pending = env.after(debounceMs, () -> {
-            if (g == generation) {
-                start();
-            }
-        });
-    }
-
-    private void restart() {
-        generation++;
-        pending.cancel();
-        pending = () -> { };
-        cancelled.set(true);
+        job.startAfter(debounceMs, this::start);
     }
 
     private void start() {
@@ -251,39 +237,25 @@ public final class ReviewViewModel {
         if (s.isEmpty()) {
             return;
         }
-        long g = generation;
-        AtomicBoolean stop = new AtomicBoolean(false);
-        cancelled = stop;
         Tolerances tol = tolerances;
         ReviewRunner.OpenCase open = openCase.get();
         progress.set(0);
         setState(State.RUNNING, Messages.get("review.state.running", s.get().name()));
-        env.background(() -> {
-            try {
-                ReviewRunner.Outcome o = runner.run(s.get(), open, tol, (f, m) -> env.ui(() -> {
-                    if (g == generation && state.get() == State.RUNNING) {
-                        progress.set(f);
-                        message.set(Messages.get("review.state.step", m));
+        job.<ReviewRunner.Outcome, LiveCalculation.Step>start((p, cancelled) -> runner.run(s.get(), open, tol,
+                (f, m) -> p.accept(new LiveCalculation.Step(f, m)), cancelled),
+                st -> {
+                    if (state.get() == State.RUNNING) {
+                        progress.set(st.fraction());
+                        message.set(Messages.get("review.state.step", st.what()));
                     }
-                }), stop::get);
-                env.ui(() -> {
-                    if (g == generation) {
-                        lastOpen = open;
-                        outcome.set(Optional.of(o));
-                        progress.set(1);
-                        setState(State.CURRENT, "");
-                    }
-                });
-            } catch (CaseRunner.Cancelled e) {
-                // a newer request or the Cancel button owns the state now
-            } catch (RuntimeException e) {
-                env.ui(() -> {
-                    if (g == generation) {
-                        setState(State.FAILED, Messages.get("review.failed", s.get().name(), describe(e)));
-                    }
-                });
-            }
-        });
+                },
+                o -> {
+                    lastOpen = open;
+                    outcome.set(Optional.of(o));
+                    progress.set(1);
+                    setState(State.CURRENT, "");
+                },
+                e -> setState(State.FAILED, Messages.get("review.failed", s.get().name(), describe(e))));
     }
 
     /** The message of a failure as the engineer needs it (the field and what is accepted). */

@@ -1,0 +1,90 @@
+package org.ventcase.ui;
+
+import java.util.concurrent.atomic.AtomicBoolean;
+import java.util.function.BooleanSupplier;
+import java.util.function.Consumer;
+
+import org.ventcase.app.CaseRunner;
+
+/**
+ * One background job at a time for a view model (the wizard's live calculation, the review and the
+ * audit modes): a newer start, a debounced start or a cancel supersedes the job in progress. A job's
+ * progress, result and failure reach the application thread only while it is the current job, so a
+ * superseded run can never overwrite what a newer one shows.
+ *
+ * <p>The contract with the work: it receives a progress sink and a cancel flag; a runner that sees
+ * the flag stops by throwing {@link CaseRunner.Cancelled}, which the job drops (whoever superseded it
+ * owns the state now). Any other runtime exception is a failure, reported to {@code onFailed}.
+ * Not thread-safe: call it from the application thread.
+ */
+final class BackgroundJob {
+
+    /** What a job computes off the application thread. */
+    @FunctionalInterface
+    interface Work<T, P> {
+        T run(Consumer<P> progress, BooleanSupplier cancelled);
+    }
+
+    private final LiveCalculation.Env env;
+    private long generation;
+    private LiveCalculation.Cancellable pending = () -> { };
+    private AtomicBoolean cancelled = new AtomicBoolean(false);
+
+    BackgroundJob(LiveCalculation.Env env) {
+        this.env = env;
+    }
+
+    /** Supersedes what is pending or running: its progress and result are dropped, its run is asked to stop. */
+    void supersede() {
+        generation++;
+        pending.cancel();
+        pending = () -> { };
+        cancelled.set(true);
+    }
+
+    /** Supersedes what is pending or running, then calls {@code start} after {@code delayMs} unless superseded again. */
+    void startAfter(long delayMs, Runnable start) {
+        supersede();
+        long g = generation;
+        pending = env.after(delayMs, () -> {
+            if (g == generation) {
+                start.run();
+            }
+        });
+    }
+
+    /**
+     * Runs {@code work} off the application thread as the current job (superseding any other);
+     * {@code onProgress}, {@code onDone} and {@code onFailed} run on the application thread, each only
+     * while this job is still current.
+     */
+    <T, P> void start(Work<T, P> work, Consumer<P> onProgress, Consumer<T> onDone,
+                      Consumer<RuntimeException> onFailed) {
+        supersede();
+        long g = generation;
+        AtomicBoolean stop = new AtomicBoolean(false);
+        cancelled = stop;
+        env.background(() -> {
+            try {
+                T result = work.run(p -> env.ui(() -> {
+                    if (g == generation) {
+                        onProgress.accept(p);
+                    }
+                }), stop::get);
+                env.ui(() -> {
+                    if (g == generation) {
+                        onDone.accept(result);
+                    }
+                });
+            } catch (CaseRunner.Cancelled e) {
+                // superseded: a newer request or the Cancel button owns the state now
+            } catch (RuntimeException e) {
+                env.ui(() -> {
+                    if (g == generation) {
+                        onFailed.accept(e);
+                    }
+                });
+            }
+        });
+    }
+}
