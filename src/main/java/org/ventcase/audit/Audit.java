@@ -97,21 +97,46 @@ public final class Audit {
      */
     public static AuditResult run(Register.Stream register, int total, Thresholds thresholds, int threads,
                                   Progress progress, Consumer<List<VesselAudit>> sink) {
+        RegisterCases rc = new RegisterCases(register.origin());
+        java.util.Iterator<Chunk> chunks = new java.util.Iterator<>() {
+            private List<RegisterRow> next = register.next(CHUNK_ROWS);
+
+            @Override
+            public boolean hasNext() {
+                return !next.isEmpty();
+            }
+
+            @Override
+            public Chunk next() {
+                List<RegisterRow> rows = next;
+                next = register.next(CHUNK_ROWS);
+                // each row is read into its case by the worker that computes it
+                return new Chunk(rows.size(), i -> rc.item(rows.get(i)));
+            }
+        };
+        return stream(chunks, total, thresholds, threads, progress, sink);
+    }
+
+    /** One chunk of a streamed audit: its size and how item i is made (on the worker that computes it). */
+    private record Chunk(int size, java.util.function.IntFunction<AuditItem> item) {
+    }
+
+    /** The streamed audit: chunk by chunk, computed in parallel, rows handed on in input order. */
+    private static AuditResult stream(java.util.Iterator<Chunk> chunks, int total, Thresholds thresholds, int threads,
+                                      Progress progress, Consumer<List<VesselAudit>> sink) {
         if (threads < 1) {
             throw InvalidInputException.invalid("threads", threads, "expected at least 1");
         }
-        RegisterCases rc = new RegisterCases(register.origin());
         AuditResult.Builder acc = new AuditResult.Builder();
         AtomicInteger done = new AtomicInteger();
         int seen = 0;
         ExecutorService pool = threads > 1 ? pool(threads) : null;
         try {
-            for (List<RegisterRow> chunk = register.next(CHUNK_ROWS); !chunk.isEmpty();
-                 chunk = register.next(CHUNK_ROWS)) {
-                List<RegisterRow> rows = chunk;
-                seen += rows.size();
-                List<VesselAudit> out = Arrays.asList(compute(rows.size(), i -> rc.item(rows.get(i)), pool, threads,
-                        done, Math.max(total, seen), progress));
+            while (chunks.hasNext()) {
+                Chunk c = chunks.next();
+                seen += c.size();
+                List<VesselAudit> out = Arrays.asList(compute(c.size(), c.item(), pool, threads, done,
+                        Math.max(total, seen), progress));
                 sink.accept(out);
                 out.forEach(acc::add);
             }
@@ -132,28 +157,19 @@ public final class Audit {
      */
     public static AuditResult run(java.util.Iterator<List<AuditItem>> chunks, int total, Thresholds thresholds,
                                   int threads, Progress progress, Consumer<List<VesselAudit>> sink) {
-        if (threads < 1) {
-            throw InvalidInputException.invalid("threads", threads, "expected at least 1");
-        }
-        AuditResult.Builder acc = new AuditResult.Builder();
-        AtomicInteger done = new AtomicInteger();
-        int seen = 0;
-        ExecutorService pool = threads > 1 ? pool(threads) : null;
-        try {
-            while (chunks.hasNext()) {
+        java.util.Iterator<Chunk> c = new java.util.Iterator<>() {
+            @Override
+            public boolean hasNext() {
+                return chunks.hasNext();
+            }
+
+            @Override
+            public Chunk next() {
                 List<AuditItem> items = chunks.next();
-                seen += items.size();
-                List<VesselAudit> out = Arrays.asList(compute(items.size(), items::get, pool, threads, done,
-                        Math.max(total, seen), progress));
-                sink.accept(out);
-                out.forEach(acc::add);
+                return new Chunk(items.size(), items::get);
             }
-        } finally {
-            if (pool != null) {
-                pool.shutdownNow();
-            }
-        }
-        return acc.build(thresholds, List.of());
+        };
+        return stream(c, total, thresholds, threads, progress, sink);
     }
 
     /**
