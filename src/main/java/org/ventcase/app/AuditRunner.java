@@ -82,7 +82,7 @@ public final class AuditRunner {
                     return in.readAllBytes();
                 }
             } catch (IOException e) {
-                throw new UncheckedIOException("cannot read " + name + ": " + e.getMessage(), e);
+                throw new UncheckedIOException("cannot read " + name + ": " + org.ventcase.common.FileErrors.reason(e), e);
             }
         }
     }

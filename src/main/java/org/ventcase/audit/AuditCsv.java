@@ -185,7 +185,7 @@ public final class AuditCsv {
                 }
             } catch (IOException e) {
                 throw new java.io.UncheckedIOException("cannot write the scratch file beside " + target + ": "
-                        + e.getMessage(), e);
+                        + org.ventcase.common.FileErrors.reason(e), e);
             }
         }
 

@@ -146,7 +146,7 @@ public final class CaseFiles {
                     .orElseThrow(() -> tooLarge(file.toString(), MAX_BYTES + 1));
             return org.ventcase.common.Utf8.decode(b, file.toString());
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read case file " + file + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot read case file " + file + ": " + org.ventcase.common.FileErrors.reason(e), e);
         }
     }
 
@@ -345,7 +345,7 @@ public final class CaseFiles {
         try {
             org.ventcase.common.AtomicFiles.writeText(text, target);
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot write " + target + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot write " + target + ": " + org.ventcase.common.FileErrors.reason(e), e);
         }
     }
 

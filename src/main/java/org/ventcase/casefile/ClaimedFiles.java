@@ -131,7 +131,7 @@ public final class ClaimedFiles {
                             "expected a claimed-value file of at most " + MAX_BYTES + " bytes"));
             return org.ventcase.common.Utf8.decode(b, file.toString());
         } catch (IOException e) {
-            throw new UncheckedIOException("cannot read " + file + ": " + e.getMessage(), e);
+            throw new UncheckedIOException("cannot read " + file + ": " + org.ventcase.common.FileErrors.reason(e), e);
         }
     }
 

@@ -270,7 +270,7 @@ public final class ReviewViewModel {
             try {
                 ReviewRunner.writePdf(o, target, size, Texts.version());
             } catch (java.io.IOException e) {
-                throw new java.io.UncheckedIOException("cannot write " + target + ": " + e.getMessage(), e);
+                throw new java.io.UncheckedIOException("cannot write " + target + ": " + org.ventcase.common.FileErrors.reason(e), e);
             }
         }, target);
     }
