@@ -156,15 +156,4 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
         out.add(new Row("Model", provenanceText));
         return out;
     }
-
-    /** One line per property ("name = value" or "name: value"), for a reviewer's table. */
-    public List<String> table() {
-        List<String> out = new ArrayList<>();
-        for (Row r : rows()) {
-            boolean colon = r.name().equals("Relieved phase") || r.name().startsWith("Composition")
-                    || r.name().equals("Model");
-            out.add(r.name() + (colon ? ": " : " = ") + r.value().get());
-        }
-        return out;
-    }
 }

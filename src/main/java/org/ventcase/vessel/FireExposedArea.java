@@ -21,14 +21,6 @@ public record FireExposedArea(double area, double effectiveLevel, Rule rule) {
         Objects.requireNonNull(rule, "rule");
     }
 
-    /** A rule given in words directly (SI). */
-    public FireExposedArea(double area, double effectiveLevel, String ruleApplied) {
-        this(area, effectiveLevel, new Rule(w -> ruleApplied));
-        if (ruleApplied.isBlank()) {
-            throw new IllegalArgumentException("ruleApplied must not be blank");
-        }
-    }
-
     /** The rule in words, SI. */
     public String ruleApplied() {
         return rule.text(Words.SI);
