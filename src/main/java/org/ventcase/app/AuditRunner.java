@@ -52,7 +52,7 @@ public final class AuditRunner {
     private static final String DEMO_DIR = "/org/ventcase/demo-cases/register/";
 
     /** Vessels listed in each "largest" table (as on the summary sheet). */
-    public static final int TOP = AuditSheet.TOP;
+    public static final int TOP = AuditResult.TOP;
 
     /** A CSV input: a file on disk, or a packaged demo file by name. */
     public record Input(String name, Optional<Path> path) {
@@ -105,36 +105,6 @@ public final class AuditRunner {
 
         public long count(VesselAudit.Status s) {
             return result.count(s);
-        }
-
-        /** The computed vessels, largest inventory first, at most {@link #TOP}. */
-        public List<VesselAudit> topByInventory() {
-            return result.topByInventory();
-        }
-
-        /** The vessels with a screening fire load, largest first, at most {@link #TOP}. */
-        public List<VesselAudit> topByFireLoad() {
-            return result.topByFireLoad();
-        }
-
-        /** The first {@link AuditResult#LISTED} rows not (fully) computed, in input order. */
-        public List<VesselAudit> notComputed() {
-            return result.notComputed();
-        }
-
-        /** All rows not (fully) computed. */
-        public long notComputedCount() {
-            return result.digest().notComputedCount();
-        }
-
-        /** The first {@link AuditResult#LISTED} rows whose installed valves are short, in input order. */
-        public List<VesselAudit> installedShort() {
-            return result.installedShort();
-        }
-
-        /** All rows whose installed valves are short. */
-        public long installedShortCount() {
-            return result.digest().installedShortCount();
         }
     }
 

@@ -238,14 +238,14 @@ final class AuditView {
                 v.fire().map(VesselAudit.FireLoad::selectedOrifice).orElse(""));
         body.getChildren().addAll(
                 section(Messages.get("audit.top.inventory", AuditRunner.TOP),
-                        table("audit-top-inventory", vesselCols, o.topByInventory(), vessel, 4, 6)),
+                        table("audit-top-inventory", vesselCols, o.result().topByInventory(), vessel, 4, 6)),
                 section(Messages.get("audit.top.fire", AuditRunner.TOP),
-                        table("audit-top-fire", vesselCols, o.topByFireLoad(), vessel, 4, 6)));
+                        table("audit-top-fire", vesselCols, o.result().topByFireLoad(), vessel, 4, 6)));
 
-        List<VesselAudit> bad = o.notComputed();
+        List<VesselAudit> bad = o.result().notComputed();
         Node badNode = bad.isEmpty() ? new Label(Messages.get("audit.notComputed.none"))
                 : table("audit-not-computed", List.of("row", "tag", "area", "status", "field", "reason"),
-                        limit(bad), v -> {
+                        bad, v -> {
                             List<Label> cs = cells(Integer.toString(v.row()), v.tag(), v.area(), v.status().word(),
                                     v.error().map(e -> e.field() + (e.value().isEmpty() ? "" : " '" + e.value() + "'"))
                                             .orElse(""), v.error().map(org.ventcase.audit.AuditError::reason)
@@ -254,23 +254,19 @@ final class AuditView {
                             cs.get(5).setMaxWidth(640);
                             return cs;
                         }, 0, 0);
-        body.getChildren().add(section("audit.notComputed", badNode, more(o.notComputedCount())));
+        body.getChildren().add(section("audit.notComputed", badNode, more(o.result().digest().notComputedCount())));
 
-        List<VesselAudit> shorts = o.installedShort();
+        List<VesselAudit> shorts = o.result().installedShort();
         Node shortNode = shorts.isEmpty() ? new Label(Messages.get("audit.short.none"))
                 : table("audit-installed-short", List.of("row", "tag", "area", "required", "installed", "margin"),
-                        limit(shorts), v -> {
+                        shorts, v -> {
                             VesselAudit.FireLoad f = v.fire().orElseThrow();
                             VesselAudit.InstalledCheck ic = f.installed().orElseThrow();
                             return cells(Integer.toString(v.row()), v.tag(), v.area(), mm2(f.requiredAreaM2()),
                                     ic.designation() + " (" + mm2(ic.areaM2()) + ")",
                                     String.format(Locale.ROOT, "%+.0f %%", ic.marginPercent()));
                         }, 3, 5);
-        body.getChildren().add(section("audit.short", shortNode, more(o.installedShortCount())));
-    }
-
-    private static <T> List<T> limit(List<T> rows) {
-        return rows.size() > AuditSheet.MAX_LISTED ? rows.subList(0, AuditSheet.MAX_LISTED) : rows;
+        body.getChildren().add(section("audit.short", shortNode, more(o.result().digest().installedShortCount())));
     }
 
     private static Label more(long n) {

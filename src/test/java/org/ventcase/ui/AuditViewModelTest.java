@@ -85,14 +85,14 @@ class AuditViewModelTest {
         assertEquals(Optional.of(AuditRunner.DEMO_THRESHOLDS), o.thresholdsName());
         assertFalse(o.result().thresholds().isEmpty());
 
-        VesselAudit err = o.notComputed().stream().filter(v -> v.status() == VesselAudit.Status.ERROR).findFirst()
+        VesselAudit err = o.result().notComputed().stream().filter(v -> v.status() == VesselAudit.Status.ERROR).findFirst()
                 .orElseThrow();
         assertFalse(err.error().orElseThrow().field().isBlank());
         assertFalse(err.error().orElseThrow().reason().isBlank());
         assertTrue(err.row() > 0);
-        assertTrue(o.topByInventory().size() <= AuditRunner.TOP && !o.topByInventory().isEmpty());
-        double first = o.topByInventory().get(0).inventory().orElseThrow().totalMassKg();
-        assertTrue(o.topByInventory().stream().allMatch(v -> v.inventory().get().totalMassKg() <= first));
+        assertTrue(o.result().topByInventory().size() <= AuditRunner.TOP && !o.result().topByInventory().isEmpty());
+        double first = o.result().topByInventory().get(0).inventory().orElseThrow().totalMassKg();
+        assertTrue(o.result().topByInventory().stream().allMatch(v -> v.inventory().get().totalMassKg() <= first));
 
         Path csv = tmp.resolve("audit.csv");
         Path pdf = tmp.resolve("audit.pdf");
