@@ -126,24 +126,20 @@ public final class Main implements Callable<Integer> {
         return ex.getMessage() == null ? "cannot read or write a file" : ex.getMessage();
     }
 
-    /** The sub-commands by name, in the order of the help listing (the @Command annotation's). */
-    private static final java.util.Map<String, java.util.function.Supplier<Object>> COMMANDS = commands();
+    /**
+     * The sub-commands by name, read from this class's @Command annotation (the one list): the
+     * annotation is read directly, without picocli building a model of every command.
+     */
+    private static final java.util.Map<String, Class<?>> COMMANDS = commands();
 
-    private static java.util.Map<String, java.util.function.Supplier<Object>> commands() {
-        java.util.Map<String, java.util.function.Supplier<Object>> m = new java.util.LinkedHashMap<>();
-        m.put("demo", DemoCommand::new);
-        m.put("sheet", SheetCommand::new);
-        m.put("props", PropsCommand::new);
-        m.put("sat", SatCommand::new);
-        m.put("vessel", VesselCommand::new);
-        m.put("inventory", InventoryCommand::new);
-        m.put("flash", FlashCommand::new);
-        m.put("envelope", EnvelopeCommand::new);
-        m.put("new", NewCommand::new);
-        m.put("check", CheckCommand::new);
-        m.put("calc", CalcCommand::new);
-        m.put("review", ReviewCommand::new);
-        m.put("audit", AuditCommand::new);
+    private static java.util.Map<String, Class<?>> commands() {
+        java.util.Map<String, Class<?>> m = new java.util.LinkedHashMap<>();
+        for (Class<?> c : Main.class.getAnnotation(Command.class).subcommands()) {
+            Command cmd = c.getAnnotation(Command.class);
+            if (cmd != null && c != CommandLine.HelpCommand.class) {
+                m.put(cmd.name(), c);
+            }
+        }
         return java.util.Collections.unmodifiableMap(m);
     }
 
@@ -163,12 +159,12 @@ public final class Main implements Callable<Integer> {
      * the whole command with its help listing.
      */
     static CommandLine commandLine(String... args) {
-        java.util.function.Supplier<Object> one = args.length > 0 ? COMMANDS.get(args[0]) : null;
+        Class<?> one = args.length > 0 ? COMMANDS.get(args[0]) : null;
         if (one == null) {
             return new CommandLine(new Main());
         }
         CommandLine cl = new CommandLine(new One());
-        cl.addSubcommand(args[0], one.get());
+        cl.addSubcommand(args[0], one);
         return cl;
     }
 
