@@ -52,35 +52,28 @@ final class VesselCommand implements Callable<Integer> {
             return ExitCode.OK;
         }
         Text tx = new Text(out);
-        if (system == org.ventcase.report.UnitSystem.US) {
-            org.ventcase.report.DisplayUnits u = new org.ventcase.report.DisplayUnits(system);
-            org.ventcase.vessel.Words w = u.words();
-            tx.title(v.describe(w));
-            tx.row("Inside height", w.length().apply(v.totalHeight()));
-            tx.row("Total volume", Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.VOLUME, s.totalVolume())));
-            tx.row("Total inside area", w.area().apply(s.totalInsideArea()));
-            tx.row("Liquid level", w.length().apply(s.levelM()) + String.format(Locale.ROOT,
-                    " = %.2f %% of height = %.2f %% of volume", s.levelPercentHeight(), s.levelPercentVolume()));
-            tx.row("Liquid / vapour volume", Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.VOLUME,
-                    s.liquidVolume())) + " / " + Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.VOLUME,
-                    s.vapourVolume())));
-            tx.row("Wetted inside area", w.area().apply(s.wettedArea()));
-            tx.row("Fire-exposed wetted area", w.area().apply(s.fire().area()));
-            tx.row("Rule applied", s.fire().ruleApplied(w));
-            v.outsideArea().ifPresent(a -> tx.row("Total outside area", w.area().apply(a)));
-            return ExitCode.OK;
-        }
-        tx.title(v.describe());
-        tx.row("Inside height", "%.4f m", v.totalHeight());
-        tx.row("Total volume", "%.4f m3", s.totalVolume());
-        tx.row("Total inside area", "%.4f m2", s.totalInsideArea());
-        tx.row("Liquid level", "%.4f m = %.2f %% of height = %.2f %% of volume", s.levelM(), s.levelPercentHeight(),
-                s.levelPercentVolume());
-        tx.row("Liquid / vapour volume", "%.4f / %.4f m3", s.liquidVolume(), s.vapourVolume());
-        tx.row("Wetted inside area", "%.4f m2", s.wettedArea());
-        tx.row("Fire-exposed wetted area", "%.4f m2", s.fire().area());
-        tx.row("Rule applied", s.fire().ruleApplied());
-        v.outsideArea().ifPresent(a -> tx.row("Total outside area", String.format(Locale.ROOT, "%.4f m2", a)));
+        // how this table writes a length, an area and a volume in the system asked for (SI as before)
+        boolean us = system == org.ventcase.report.UnitSystem.US;
+        org.ventcase.report.DisplayUnits u = new org.ventcase.report.DisplayUnits(system);
+        org.ventcase.vessel.Words w = u.words();
+        java.util.function.DoubleFunction<String> len = us ? w.length() : m -> String.format(Locale.ROOT, "%.4f m", m);
+        java.util.function.DoubleFunction<String> area = us ? w.area()
+                : a -> String.format(Locale.ROOT, "%.4f m2", a);
+        java.util.function.DoubleFunction<String> vol = us
+                ? x -> Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.VOLUME, x))
+                : x -> String.format(Locale.ROOT, "%.4f m3", x);
+        tx.title(v.describe(w));
+        tx.row("Inside height", len.apply(v.totalHeight()));
+        tx.row("Total volume", vol.apply(s.totalVolume()));
+        tx.row("Total inside area", area.apply(s.totalInsideArea()));
+        tx.row("Liquid level", len.apply(s.levelM()) + String.format(Locale.ROOT,
+                " = %.2f %% of height = %.2f %% of volume", s.levelPercentHeight(), s.levelPercentVolume()));
+        tx.row("Liquid / vapour volume", us ? vol.apply(s.liquidVolume()) + " / " + vol.apply(s.vapourVolume())
+                : String.format(Locale.ROOT, "%.4f / %.4f m3", s.liquidVolume(), s.vapourVolume()));
+        tx.row("Wetted inside area", area.apply(s.wettedArea()));
+        tx.row("Fire-exposed wetted area", area.apply(s.fire().area()));
+        tx.row("Rule applied", s.fire().ruleApplied(w));
+        v.outsideArea().ifPresent(a -> tx.row("Total outside area", area.apply(a)));
         return ExitCode.OK;
     }
 }
