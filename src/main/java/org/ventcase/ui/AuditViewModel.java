@@ -103,12 +103,12 @@ public final class AuditViewModel {
         done.set(0);
         total.set(0);
         setState(State.RUNNING, Messages.get("audit.state.running", reg.name()));
-        job.<AuditRunner.Outcome, int[]>start((p, cancelled) -> runner.run(reg, th, threads,
-                (d, n) -> p.accept(new int[] {d, n}), cancelled),
-                dn -> {
-                    if (state.get() == State.RUNNING && dn[0] >= done.get()) {
-                        total.set(dn[1]);
-                        done.set(dn[0]);
+        job.<AuditRunner.Outcome, RowsDone>start((p, cancelled) -> runner.run(reg, th, threads,
+                (d, n) -> p.accept(new RowsDone(d, n)), cancelled),
+                r -> {
+                    if (state.get() == State.RUNNING && r.done() >= done.get()) {
+                        total.set(r.total());
+                        done.set(r.done());
                     }
                 },
                 o -> {
@@ -194,5 +194,9 @@ public final class AuditViewModel {
     /** The register chosen. */
     public Optional<AuditRunner.Input> register() {
         return register;
+    }
+
+    /** One progress report of an audit run. */
+    private record RowsDone(int done, int total) {
     }
 }
