@@ -52,6 +52,7 @@ class AuditStreamTest {
      * The command line's streamed audit keeps no rows, yet writes the same CSV byte for byte and the
      * same totals and summaries as an audit that keeps them (a register longer than a chunk, with
      * error rows and more than one fluid, so that component columns appear after the first chunk).
+     * Invariant of the project's own code, no external values (invented demo register rows).
      */
     @Test
     void streamedAuditWritesTheSameCsvAndSummariesWithoutKeepingRows(@org.junit.jupiter.api.io.TempDir Path dir)
@@ -95,7 +96,7 @@ class AuditStreamTest {
         }
     }
 
-    /** The summaries of the kept rows are what sorting and filtering all rows gives. */
+    /** The summaries of the kept rows are what sorting and filtering all rows gives. Invariant, no external values. */
     @Test
     void digestListsEqualSortingAllRows() throws Exception {
         String text = Files.readString(Path.of("demo-cases/register/kestrel-point-register.csv"));
