@@ -381,7 +381,17 @@ public final class CubicModel {
         double c2 = (u - 1.0) * bb - 1.0;
         double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
         double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
-        return CubicSolver.solve(c2, c1, c0, bb, 1.0 + bb + 1e-12);
+        return CubicSolver.solve(c2, c1, c0, bb, newtonStart(aa, bb, c2, c1, c0));
+    }
+
+    /**
+     * Where Newton's method starts from above for the largest root: Z = 1 + B - A/(1 + 2B), close
+     * above the vapour root at ordinary states, where CubicSolver.startAbove proves it is above
+     * every root; else the bound 1 + B (the attraction term only lowers Z below v/(v - b)). Every
+     * root path starts here, so all of them give identical roots.
+     */
+    private static double newtonStart(double aa, double bb, double c2, double c1, double c0) {
+        return CubicSolver.startAbove(c2, c1, c0, 1.0 + bb - aa / (1.0 + 2.0 * bb), 1.0 + bb + 1e-12);
     }
 
     /**
@@ -622,22 +632,46 @@ public final class CubicModel {
         double c2 = (u - 1.0) * bb - 1.0;
         double c1 = aa + w * bb * bb - u * bb * bb - u * bb;
         double c0 = -(aa * bb + w * bb * bb + w * bb * bb * bb);
-        double[] all = new double[3];
-        int nAll = CubicSolver.count(CubicSolver.rootsCoded(c2, c1, c0, 1.0 + bb + 1e-12, all));
-        int nPhys = 0;
-        for (int i = 0; i < nAll; i++) {
-            if (all[i] > bb) {
-                if (nPhys == 0) {
-                    ends[0] = all[i];
-                }
-                ends[1] = all[i];
-                nPhys++;
-            }
+        double start = newtonStart(aa, bb, c2, c1, c0);
+        // The common case (Newton from above finds the largest root) uses its own scratch array
+        // and calls only small methods, with constant indices, so that the JIT can keep it in
+        // registers; the rare analytic fallback has another.
+        double zTop = CubicSolver.largestRootByNewton(c2, c1, c0, start);
+        int code;
+        double lo;
+        double mid;
+        double hi;
+        if (!Double.isNaN(zTop)) {
+            double[] all = new double[3];
+            code = CubicSolver.deflated(zTop, c2, c1, c0, all);
+            lo = all[0];
+            mid = all[1];
+            hi = all[2];
+        } else {
+            double[] all = new double[3];
+            code = CubicSolver.rootsCoded(c2, c1, c0, start, all);
+            lo = all[0];
+            mid = all[1];
+            hi = all[2];
+        }
+        if (code == 0) {
+            hi = lo;
+        }
+        int nPhys;
+        if (code == 0) {
+            nPhys = lo > bb ? 1 : 0;
+        } else if (lo > bb) {
+            nPhys = 3;
+        } else {
+            nPhys = hi > bb ? (mid > bb ? 2 : 1) : 0;
+            lo = mid > bb ? mid : hi;
         }
         if (nPhys == 0) {
             throw new IllegalStateException("no physical root of the cubic (Z > B) at T = " + t + " K, P = " + p
                     + " Pa");
         }
+        ends[0] = lo;
+        ends[1] = hi;
         return nPhys;
     }
 
