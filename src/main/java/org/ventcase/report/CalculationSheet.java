@@ -75,6 +75,11 @@ public final class CalculationSheet {
     private static final byte[] BOLD_TTF = resource(FONT_DIR + "DejaVuSans-Bold.ttf");
     private static final Pattern FORBIDDEN = Pattern.compile("\\b(NaN|null|Infinity)\\b");
 
+    /** A method step's value as printed: as computed (SI), with US customary values bracketed on a US sheet. */
+    static String stepText(SheetModel m, String value) {
+        return m.units() == UnitSystem.US ? QuantityText.usBracketed(value) : value;
+    }
+
     static final float MARGIN_X = 40f;
     static final float MARGIN_TOP = 30f;
     static final float MARGIN_BOTTOM = 34f;
@@ -140,13 +145,13 @@ public final class CalculationSheet {
                 all.add(st.source());
                 st.inputs().forEach((k, v) -> {
                     all.add(k);
-                    all.add(v);
+                    all.add(stepText(m, v));
                 });
                 st.outputs().forEach((k, v) -> {
                     all.add(k);
-                    all.add(v);
+                    all.add(stepText(m, v));
                 });
-                all.addAll(st.notes());
+                st.notes().forEach(n -> all.add(stepText(m, n)));
             }
         }
         for (Figure f : m.figures()) {
@@ -660,13 +665,13 @@ public final class CalculationSheet {
                 rows.add(Row.of("", "Equation", st.equation()));
                 rows.add(Row.of("", "Source", st.source()));
                 for (Map.Entry<String, String> e : st.inputs().entrySet()) {
-                    rows.add(Row.of("in", e.getKey(), e.getValue()));
+                    rows.add(Row.of("in", e.getKey(), stepText(m, e.getValue())));
                 }
                 for (Map.Entry<String, String> e : st.outputs().entrySet()) {
-                    rows.add(new Row(List.of("out", e.getKey(), e.getValue()), false));
+                    rows.add(new Row(List.of("out", e.getKey(), stepText(m, e.getValue())), false));
                 }
                 for (String note : st.notes()) {
-                    rows.add(Row.of("note", "Rule applied", note));
+                    rows.add(Row.of("note", "Rule applied", stepText(m, note)));
                 }
                 table(new Table("Step " + i++ + ". " + st.title(), List.of("", "Item", "Value"),
                         List.of(0.45, 2.1, 4.7), rows, ""));

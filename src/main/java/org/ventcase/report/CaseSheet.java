@@ -90,7 +90,10 @@ final class CaseSheet {
         String unitNote = (units == UnitSystem.SI
                 ? "Inputs and results in SI units, with US customary units in brackets for key values. "
                 : "Inputs and results in US customary units, with SI in brackets for key values. ")
-                + "The method steps are printed as computed, in SI; pressures are absolute unless marked gauge. "
+                + (units == UnitSystem.SI ? "The method steps are printed as computed, in SI; "
+                        : "The method steps are printed as computed, in SI (the units their equations are written "
+                        + "for), with US customary values in brackets; ")
+                + "pressures are absolute unless marked gauge. "
                 + "The inventory's steps open the method of scenario 1. " + r.governingRule();
         return new SheetModel(id, units, revisions, signOff, inputs(), loads, results(), warnings(), figures(), method,
                 cautions, deferral, unitNote);
@@ -156,7 +159,7 @@ final class CaseSheet {
             // The constants the equation of state uses (a published parameter set brings its own).
             org.ventcase.thermo.EosVariant.Constants k = in.fluid().variant().constants(c);
             cells.addAll(List.of(u.plain(Kind.TEMPERATURE, k.tcK()), u.plain(Kind.PRESSURE_ABS, k.pcPa()),
-                    f("%.4f", k.omega()), f("%.3f kg/kmol", c.molarMass())));
+                    f("%.4f", k.omega()), u.plain(Kind.MOLAR_MASS, c.molarMass())));
             rows.add(new Row(cells, false));
             sources.append(sources.length() == 0 ? "" : " ").append(c.name()).append(": Tc, Pc, omega ")
                     .append(k.source())
@@ -173,10 +176,10 @@ final class CaseSheet {
             org.ventcase.thermo.EosVariant.ComponentModel d = in.fluid().variant().describe(c);
             eos.add(Row.of("Alpha function, " + c.name(), d.alpha()));
             if (in.fluid().densityBasis() == org.ventcase.thermo.DensityBasis.TRANSLATED) {
-                eos.add(Row.of("Volume translation, " + c.name(), d.translation()));
+                eos.add(Row.of("Volume translation, " + c.name(), said(d.translation())));
             }
             for (String note : d.notes()) {
-                eos.add(Row.of("Note, " + c.name(), note));
+                eos.add(Row.of("Note, " + c.name(), said(note)));
             }
         }
         KijTable.Matrix m = in.fluid().kij();
@@ -192,7 +195,7 @@ final class CaseSheet {
             eos.add(Row.of("k_ij", "none (one component)"));
         }
         t.add(Table.keyValue("Equation of state, density basis and interaction parameters", eos,
-                String.join(" ", m.warnings())));
+                said(String.join(" ", m.warnings()))));
         Vessel v = in.vessel();
         LevelState vs = r.vessel();
         List<Row> vessel = new ArrayList<>();
@@ -395,11 +398,11 @@ final class CaseSheet {
         }
         for (PhaseInventory p : phases) {
             ph.add(Row.of(p.phase(), u.plain(Kind.VOLUME, p.volumeM3()), u.plain(Kind.DENSITY, p.densityKgM3())
-                    + " (" + p.densityBasis().label() + ")", f("%.5f", p.z()), f("%.3f kg/kmol", p.molarMassKgKmol()),
-                    u.plain(Kind.MASS, p.massKg()), f("%.2f kmol", p.moles() / 1e3)));
+                    + " (" + p.densityBasis().label() + ")", f("%.5f", p.z()), u.plain(Kind.MOLAR_MASS, p.molarMassKgKmol()),
+                    u.plain(Kind.MASS, p.massKg()), u.plain(Kind.AMOUNT, p.moles())));
         }
         ph.add(new Row(List.of("total", u.plain(Kind.VOLUME, r.vessel().totalVolume()), NONE, NONE, NONE,
-                u.plain(Kind.MASS, inv.totalMassKg()), f("%.2f kmol", inv.totalMoles() / 1e3)), true));
+                u.plain(Kind.MASS, inv.totalMassKg()), u.plain(Kind.AMOUNT, inv.totalMoles())), true));
         String note = "At " + u.format(Kind.TEMPERATURE, inv.temperatureK()) + " and "
                 + u.format(Kind.PRESSURE_ABS, inv.pressurePa()) + " (" + inv.mode().label() + ")."
                 + inv.rackettLiquidDensity().stream().mapToObj(d -> " Rackett liquid density (cross-check, not used): "
@@ -440,7 +443,7 @@ final class CaseSheet {
             c.append(i == 0 ? "" : ", ").append(fl.componentNames().get(i)).append(' ').append(f("%.5f", x[i]));
         }
         rows.add(Row.of("Composition (mole fractions)", c.toString()));
-        rows.add(Row.of("Molar mass M", f("%.3f kg/kmol", fl.molarMass())));
+        rows.add(Row.of("Molar mass M", u.plain(Kind.MOLAR_MASS, fl.molarMass())));
         rows.add(Row.of("Compressibility Z (selected root)", f("%.5f", fl.z())));
         rows.add(Row.of("Real roots of the cubic", fl.realRootsText()));
         if (fl.phase() != org.ventcase.relief.RelievedFluid.Phase.LIQUID) {
@@ -472,7 +475,7 @@ final class CaseSheet {
                 + u.format(Kind.PRESSURE_ABS, env.cricondenbar().pressurePa())));
         rows.add(Row.of("Cricondentherm", u.format(Kind.TEMPERATURE, env.cricondentherm().temperatureK()) + ", "
                 + u.format(Kind.PRESSURE_ABS, env.cricondentherm().pressurePa())));
-        return Table.keyValue("Phase envelope of the stored liquid", rows, String.join(" ", env.warnings()));
+        return Table.keyValue("Phase envelope of the stored liquid", rows, said(String.join(" ", env.warnings())));
     }
 
     // ------------------------------------------------------------------------------ warnings
@@ -480,10 +483,15 @@ final class CaseSheet {
     private List<String> warnings() {
         List<String> out = new ArrayList<>();
         for (CaseResult.CaseWarning w : r.warnings()) {
-            out.add(w.scenarios().isEmpty() ? w.message()
-                    : "[" + String.join("; ", w.scenarios()) + "] " + w.message());
+            out.add(w.scenarios().isEmpty() ? said(w.message())
+                    : "[" + String.join("; ", w.scenarios()) + "] " + said(w.message()));
         }
         return out;
+    }
+
+    /** A sentence of the calculation (written in SI) in the sheet's units: US first on a US sheet. */
+    private String said(String text) {
+        return u.system() == UnitSystem.US ? QuantityText.usFirst(text) : text;
     }
 
     // ------------------------------------------------------------------------------ figures

@@ -16,7 +16,7 @@ public final class DisplayUnits {
     /** The kinds of quantity the sheet prints. */
     public enum Kind {
         PRESSURE_ABS, PRESSURE_GAUGE, PRESSURE_DIFFERENCE, TEMPERATURE, LENGTH, AREA, ORIFICE_AREA, VOLUME, MASS,
-        MASS_FLOW, DENSITY, SPECIFIC_ENERGY, POWER
+        MASS_FLOW, DENSITY, SPECIFIC_ENERGY, POWER, MOLAR_MASS, AMOUNT
     }
 
     private final UnitSystem system;
@@ -117,6 +117,10 @@ public final class DisplayUnits {
                 return us ? si / CustomaryUnits.J_PER_KG_PER_BTU_PER_LB : si / 1e3;
             case POWER:
                 return us ? si / CustomaryUnits.W_PER_BTU_PER_H : si / 1e3;
+            case MOLAR_MASS:
+                return si; // kg/kmol and lb/lbmol are the same number
+            case AMOUNT:
+                return us ? si / CustomaryUnits.MOL_PER_LBMOL : si / 1e3;
             default:
                 throw new IllegalStateException(k.name());
         }
@@ -151,6 +155,10 @@ public final class DisplayUnits {
                 return us ? "Btu/lb" : "kJ/kg";
             case POWER:
                 return us ? "Btu/h" : "kW";
+            case MOLAR_MASS:
+                return us ? "lb/lbmol" : "kg/kmol";
+            case AMOUNT:
+                return us ? "lbmol" : "kmol";
             default:
                 throw new IllegalStateException(k.name());
         }
@@ -180,6 +188,7 @@ public final class DisplayUnits {
             case DENSITY:
                 return us ? 4 : 3;
             case SPECIFIC_ENERGY:
+            case AMOUNT:
                 return 2;
             default:
                 return 3;

@@ -32,6 +32,7 @@ import org.ventcase.casefile.ValidatedCase;
 import org.ventcase.relief.EnvironmentFactor;
 import org.ventcase.relief.EnvironmentFactors;
 import org.ventcase.report.CalculationSheet;
+import org.ventcase.report.QuantityText;
 import org.ventcase.report.UnitSystem;
 import org.ventcase.app.CaseSummary;
 import org.ventcase.app.SheetOutcome;
@@ -457,7 +458,8 @@ final class StepViews {
             out.getChildren().add(new Label(Messages.get("results.warnings.none")));
         }
         for (String w : s.warnings()) {
-            Label l = new Label("\u2022 " + w);
+            // the calculation writes its warnings in SI; with US units chosen they lead with US units
+            Label l = new Label("\u2022 " + (u == UnitSystem.US ? QuantityText.usFirst(w) : w));
             l.setWrapText(true);
             l.getStyleClass().add("warning");
             out.getChildren().add(l);

@@ -126,6 +126,14 @@ class CalculationSheetTest {
         assertTrue(s.body().contains("[" + f("%.1f kg/h", w * 3600) + "]"));
         assertTrue(s.body().contains(f("%.2f psia", g.relievingPressurePa().getAsDouble() / 6894.757293168361)));
         assertTrue(s.body().contains("largest: "), "chart marker key");
+        // issue 18 item 4: warnings lead with US units, method steps bracket them, amounts in lbmol
+        SheetModel us = c.model(UnitSystem.US);
+        for (String warning : us.warnings()) {
+            assertFalse(warning.matches(".*\\d kPa abs(?! ?\\]).*"), "SI pressure leads a US warning: " + warning);
+        }
+        assertTrue(s.body().contains(" psia]"), "a method step brackets its pressure in psia");
+        assertTrue(s.body().contains("lbmol"), "amounts in lbmol");
+        assertFalse(s.body().contains(" kmol "), "no kmol column on a US sheet");
     }
 
     /**

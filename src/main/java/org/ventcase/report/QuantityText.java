@@ -1,0 +1,156 @@
+package org.ventcase.report;
+
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+import org.ventcase.common.PhysicalConstants;
+import org.ventcase.units.CustomaryUnits;
+
+/**
+ * US customary equivalents for the SI quantities written inside free text: the warnings and the
+ * method steps, which the calculation writes as sentences and substituted equations in SI. A
+ * quantity is a number followed by one of the SI units the calculation writes ("1916.33 kPa abs",
+ * "298.15 K (25.00 C)", "6751.8 kg/h"); anything else (percentages, ratios, Tr, Z) is left as it
+ * is. Two forms:
+ * <ul>
+ * <li>{@link #usFirst}: the US value first and the SI text in brackets, for warnings on a sheet or
+ * screen in US units;</li>
+ * <li>{@link #usBracketed}: the SI text kept first and the US value bracketed after it, for the
+ * method steps, whose equations are written for SI values (the sheet says so).</li>
+ * </ul>
+ * A temperature written as a difference ("within 0.5 K of") converts by 1.8 to a difference in
+ * degrees Fahrenheit. Factors from {@link CustomaryUnits} (exact, NIST SP 811). Text already
+ * carrying a bracket right after a quantity ("... kPa abs [277.94 psia]") is left alone.
+ */
+public final class QuantityText {
+
+    private static final String NUMBER = "(-?\\d+(?:\\.\\d+)?(?:[eE][-+]?\\d+)?)";
+    // Longest units first, so that "kPa abs" wins over "kPa" and "kg/m3" over "kg".
+    private static final Pattern QUANTITY = Pattern.compile("(?<![\\w.-])" + NUMBER + "(?:-(\\d+(?:\\.\\d+)?))?"
+            + "[ \u00A0](K \\((-?\\d+(?:\\.\\d+)?) C\\)|kPa abs|kPa gauge|kPa|Pa abs|Pa gauge|Pa|K|C|kg/kmol|kmol"
+            + "|kg/m3|kg/h|kg/s|kg|kJ/kg|kW|mm2|m3/kmol|m3/h|m3/s|m3|m2|mol|m|L/min)(?![\\w/\\[])(?! \\[)");
+
+    private QuantityText() {
+    }
+
+    /** The text with each SI quantity written in US customary units, the SI text bracketed after it. */
+    public static String usFirst(String text) {
+        return rewrite(text, true);
+    }
+
+    /** The text with each SI quantity kept, its US customary value bracketed after it. */
+    public static String usBracketed(String text) {
+        return rewrite(text, false);
+    }
+
+    private static String rewrite(String text, boolean usFirst) {
+        if (text == null || text.isEmpty()) {
+            return text;
+        }
+        Matcher m = QUANTITY.matcher(text);
+        StringBuilder out = new StringBuilder(text.length() + 32);
+        while (m.find()) {
+            double v;
+            try {
+                v = Double.parseDouble(m.group(1));
+            } catch (NumberFormatException e) {
+                continue;
+            }
+            String unit = m.group(3);
+            String us;
+            if (m.group(2) != null) {
+                // a range "lo-hi unit": both ends converted, the unit once
+                String lo = us(v, unit, false);
+                String hi = us(Double.parseDouble(m.group(2)), unit, false);
+                us = lo.substring(0, lo.indexOf(' ')) + " to " + hi;
+            } else {
+                us = us(v, unit, difference(text, m.start()));
+            }
+            String si = m.group();
+            m.appendReplacement(out, Matcher.quoteReplacement(usFirst ? us + " [" + si + "]" : si + " [" + us + "]"));
+        }
+        m.appendTail(out);
+        return out.toString();
+    }
+
+    /** A temperature after "within" or "by" is a difference, not a temperature. */
+    private static boolean difference(String text, int start) {
+        String before = text.substring(Math.max(0, start - 7), start).toLowerCase(Locale.ROOT);
+        return before.endsWith("within ") || before.endsWith("by ");
+    }
+
+    private static String us(double v, String unit, boolean difference) {
+        if (unit.startsWith("K (")) {
+            unit = "K";
+        }
+        switch (unit) {
+            case "kPa abs":
+                return f(CustomaryUnits.paToPsi(v * 1e3), 2) + " psia";
+            case "kPa gauge":
+                return f(CustomaryUnits.paToPsi(v * 1e3), 2) + " psig";
+            case "kPa":
+                return f(CustomaryUnits.paToPsi(v * 1e3), 2) + " psi";
+            case "Pa abs":
+                return g(CustomaryUnits.paToPsi(v)) + " psia";
+            case "Pa gauge":
+                return g(CustomaryUnits.paToPsi(v)) + " psig";
+            case "Pa":
+                return g(CustomaryUnits.paToPsi(v)) + " psi";
+            case "K":
+                return difference ? g(CustomaryUnits.kDiffToF(v)) + " °F"
+                        : f(CustomaryUnits.kToRankine(v) - 459.67, 2) + " °F";
+            case "C":
+                return f(CustomaryUnits.kToRankine(v + PhysicalConstants.ZERO_CELSIUS_K) - 459.67, 2) + " °F";
+            case "kg/kmol":
+                return g(v) + " lb/lbmol";
+            case "kmol":
+                return g(v * 1e3 / CustomaryUnits.MOL_PER_LBMOL) + " lbmol";
+            case "mol":
+                return g(v / CustomaryUnits.MOL_PER_LBMOL) + " lbmol";
+            case "kg/m3":
+                return g(v * Math.pow(CustomaryUnits.M_PER_FT, 3) / CustomaryUnits.KG_PER_LB) + " lb/ft3";
+            case "kg/h":
+                return g(v / CustomaryUnits.KG_PER_LB) + " lb/h";
+            case "kg/s":
+                return g(v / CustomaryUnits.KG_PER_LB) + " lb/s";
+            case "kg":
+                return g(v / CustomaryUnits.KG_PER_LB) + " lb";
+            case "kJ/kg":
+                return g(v * 1e3 / CustomaryUnits.J_PER_KG_PER_BTU_PER_LB) + " Btu/lb";
+            case "kW":
+                return g(v * 1e3 / CustomaryUnits.W_PER_BTU_PER_H) + " Btu/h";
+            case "mm2":
+                return g(v / CustomaryUnits.MM2_PER_IN2) + " in2";
+            case "m3/kmol":
+                return g(CustomaryUnits.m3PerMolToFt3PerLbmol(v / 1e3)) + " ft3/lbmol";
+            case "m3/h":
+                return g(v / Math.pow(CustomaryUnits.M_PER_FT, 3)) + " ft3/h";
+            case "m3/s":
+                return g(v / CustomaryUnits.M3_PER_US_GAL * 60) + " US gal/min";
+            case "m3":
+                return g(v / Math.pow(CustomaryUnits.M_PER_FT, 3)) + " ft3";
+            case "m2":
+                return g(v / CustomaryUnits.M2_PER_FT2) + " ft2";
+            case "m":
+                return g(v / CustomaryUnits.M_PER_FT) + " ft";
+            case "L/min":
+                return g(v * 1e-3 / CustomaryUnits.M3_PER_US_GAL) + " US gal/min";
+            default:
+                throw new IllegalStateException(unit);
+        }
+    }
+
+    private static String f(double v, int decimals) {
+        return String.format(Locale.ROOT, "%." + decimals + "f", v);
+    }
+
+    /** Five significant digits, without an exponent in the usual range. */
+    private static String g(double v) {
+        double a = Math.abs(v);
+        if (a != 0 && (a < 1e-3 || a >= 1e7)) {
+            return String.format(Locale.ROOT, "%.5g", v);
+        }
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(5)).stripTrailingZeros().toPlainString();
+    }
+}
