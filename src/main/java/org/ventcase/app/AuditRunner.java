@@ -220,15 +220,19 @@ public final class AuditRunner {
     /** Writes the summary PDF atomically. */
     public static void writePdf(Outcome o, Path target, CalculationSheet.PageSize size, String toolVersion)
             throws IOException {
-        writePdf(o, target, size, toolVersion, Optional.empty(), "");
+        writePdf(o, target, size, toolVersion, Optional.empty(), "", org.ventcase.report.UnitSystem.SI);
     }
 
-    /** Writes the summary PDF atomically, with the title (default: the register's name) and preparer given. */
+    /**
+     * Writes the summary PDF atomically, with the title (default: the register's name) and preparer
+     * given, in the unit system given.
+     */
     public static void writePdf(Outcome o, Path target, CalculationSheet.PageSize size, String toolVersion,
-                                Optional<String> title, String preparer) throws IOException {
+                                Optional<String> title, String preparer, org.ventcase.report.UnitSystem units)
+            throws IOException {
         AuditSheet.write(o.result(), new AuditSheet.Info(title.orElse("Inventory audit of the vessel register "
                 + o.registerName()), o.registerName(), o.inputHash(), LocalDate.now(), preparer, toolVersion), target,
-                size);
+                size, units);
     }
 
     /**

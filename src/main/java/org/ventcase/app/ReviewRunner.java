@@ -178,8 +178,14 @@ public final class ReviewRunner {
     /** Writes the review PDF atomically. */
     public static void writePdf(Outcome o, Path target, CalculationSheet.PageSize size, String toolVersion)
             throws IOException {
+        writePdf(o, target, size, toolVersion, org.ventcase.report.UnitSystem.SI);
+    }
+
+    /** Writes the review PDF atomically, its values in the unit system given. */
+    public static void writePdf(Outcome o, Path target, CalculationSheet.PageSize size, String toolVersion,
+                                org.ventcase.report.UnitSystem units) throws IOException {
         CalculationSheet.write(ReviewSheets.from(o.result(), CaseSheets.identity(o.kase(), toolVersion), o.caseName(),
-                o.claimedName()), target, size);
+                o.claimedName(), units), target, size);
     }
 
     /** Writes the review JSON atomically. */

@@ -16,6 +16,7 @@ import org.ventcase.audit.Thresholds;
 import org.ventcase.audit.VesselAudit;
 import org.ventcase.common.InvalidInputException;
 import org.ventcase.report.CalculationSheet;
+import org.ventcase.report.UnitSystem;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -71,6 +72,11 @@ final class AuditCommand implements Callable<Integer> {
     @Option(names = "--page", paramLabel = "SIZE", defaultValue = "a4", description = "PDF page size: a4 or letter.")
     String page;
 
+    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
+            description = "Units of the printed summary and the PDF: si or us. The per-vessel CSV stays in SI (units "
+                    + "in its column headers). Default: ${DEFAULT-VALUE}.")
+    String units;
+
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all processors).")
     Integer threads;
 
@@ -83,6 +89,7 @@ final class AuditCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         CalculationSheet.PageSize size = CalculationSheet.PageSize.parse("--page", page);
+        UnitSystem system = UnitSystem.parse("--units", units);
         int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
         if (n < 1) {
             throw InvalidInputException.invalid("--threads", n, "expected at least 1");
@@ -115,9 +122,9 @@ final class AuditCommand implements Callable<Integer> {
         AuditResult r = o.result();
         String registerName = o.registerName();
         if (pdf != null) {
-            AuditRunner.writePdf(o, pdf, size, Main.version(), java.util.Optional.ofNullable(title), preparer);
+            AuditRunner.writePdf(o, pdf, size, Main.version(), java.util.Optional.ofNullable(title), preparer, system);
         }
-        print(out, r, registerName);
+        print(out, r, registerName, system == UnitSystem.US);
         if (csv != null) {
             out.println("Per-vessel CSV written to " + csv);
         }
@@ -127,26 +134,33 @@ final class AuditCommand implements Callable<Integer> {
         return r.count(VesselAudit.Status.ERROR) > 0 ? ExitCode.INVALID_INPUT : ExitCode.OK;
     }
 
-    private static void print(PrintWriter out, AuditResult r, String register) {
+    private static void print(PrintWriter out, AuditResult r, String register, boolean us) {
+        // masses in t (SI) or lb (US customary, CustomaryUnits.KG_PER_LB exact)
+        double per = us ? org.ventcase.units.CustomaryUnits.KG_PER_LB : 1e3;
+        String mu = us ? "lb" : "t";
+        String mf = us ? "%.0f" : "%.1f";
         out.println("VENTCASE AUDIT: " + register);
         DemoCommand.CAUTIONS.forEach(out::println);
         out.println();
         out.printf(Locale.ROOT, "Rows %d: ok %d, partial %d, error %d%n", r.rowCount(),
                 r.count(VesselAudit.Status.OK), r.count(VesselAudit.Status.PARTIAL), r.count(VesselAudit.Status.ERROR));
-        out.printf(Locale.ROOT, "Site inventory: %.1f t (liquid %.1f t, vapour %.1f t)%n", r.site().totalMassKg() / 1e3,
-                r.site().liquidMassKg() / 1e3, r.site().vapourMassKg() / 1e3);
+        out.printf(Locale.ROOT, "Site inventory: " + mf + " %s (liquid " + mf + " %s, vapour " + mf + " %s)%n",
+                r.site().totalMassKg() / per, mu, r.site().liquidMassKg() / per, mu, r.site().vapourMassKg() / per, mu);
         out.println();
         out.println("BY AREA");
         for (AuditResult.Group g : r.byArea()) {
-            out.printf(Locale.ROOT, "   %-32s %5d vessels %12.1f t%n", g.name(), g.vessels(), g.totalMassKg() / 1e3);
+            out.printf(Locale.ROOT, "   %-32s %5d vessels %12" + mf.substring(1) + " %s%n", g.name(), g.vessels(),
+                    g.totalMassKg() / per, mu);
         }
         out.println("BY COMPONENT");
-        r.site().massPerComponentKg().forEach((k, v) -> out.printf(Locale.ROOT, "   %-32s %12.1f t%n", k, v / 1e3));
+        r.site().massPerComponentKg().forEach((k, v) -> out.printf(Locale.ROOT, "   %-32s %12" + mf.substring(1)
+                + " %s%n", k, v / per, mu));
         if (!r.thresholds().isEmpty()) {
             out.println("THRESHOLDS (user-entered)");
             for (AuditResult.ThresholdCheck c : r.thresholds()) {
-                out.printf(Locale.ROOT, "   %-20s site %10.1f t of %10.1f t  %s%s%n", c.entry().component().name(),
-                        c.siteKg() / 1e3, c.entry().thresholdKg() / 1e3, c.siteExceeds() ? "EXCEEDED" : "below",
+                out.printf(Locale.ROOT, "   %-20s site %10" + mf.substring(1) + " %s of %10" + mf.substring(1)
+                        + " %s  %s%s%n", c.entry().component().name(), c.siteKg() / per, mu,
+                        c.entry().thresholdKg() / per, mu, c.siteExceeds() ? "EXCEEDED" : "below",
                         c.areasExceeding().isEmpty() ? "" : "; areas above: " + String.join(", ",
                                 c.areasExceeding().keySet()));
             }

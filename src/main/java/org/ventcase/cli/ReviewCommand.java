@@ -16,6 +16,9 @@ import org.ventcase.casefile.Problem;
 import org.ventcase.casefile.ValidatedCase;
 import org.ventcase.common.InvalidInputException;
 import org.ventcase.report.CalculationSheet;
+import org.ventcase.report.QuantityText;
+import org.ventcase.report.UnitSystem;
+import org.ventcase.review.ReviewCells;
 import org.ventcase.review.ReviewQuantity;
 import org.ventcase.review.ReviewResult;
 import org.ventcase.review.Tolerances;
@@ -68,11 +71,17 @@ final class ReviewCommand implements Callable<Integer> {
             description = "Paper size of the PDF: a4 or letter. Default: ${DEFAULT-VALUE}.")
     String page;
 
+    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
+            description = "Units of the printed values and the PDF: si or us. The JSON stays in SI. "
+                    + "Default: ${DEFAULT-VALUE}.")
+    String units;
+
     @Override
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         CalculationSheet.PageSize size = CalculationSheet.PageSize.parse("--page", page);
+        UnitSystem system = UnitSystem.parse("--units", units);
         Tolerances tol = Tolerances.defaults();
         for (String t : tolerances) {
             tol = tol.with(t);
@@ -99,13 +108,13 @@ final class ReviewCommand implements Callable<Integer> {
         ReviewRunner.Outcome o = ReviewRunner.review(vc, kase.getFileName().toString(),
                 caseFile != null ? "given on the command line" : "named in " + claimedFile, claimed,
                 claimedFile.getFileName().toString(), tol);
-        print(out, o.result(), kase, claimedFile);
+        print(out, o.result(), kase, claimedFile, system == UnitSystem.US);
         if (json != null) {
             ReviewRunner.writeJson(o, json, Main.version());
             out.println("Review JSON written to " + json);
         }
         if (pdf != null) {
-            ReviewRunner.writePdf(o, pdf, size, Main.version());
+            ReviewRunner.writePdf(o, pdf, size, Main.version(), system);
             out.println("Review PDF written to " + pdf);
         }
         return ExitCode.OK;
@@ -115,7 +124,7 @@ final class ReviewCommand implements Callable<Integer> {
         return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize());
     }
 
-    static void print(PrintWriter out, ReviewResult r, Path kase, Path claimed) {
+    static void print(PrintWriter out, ReviewResult r, Path kase, Path claimed, boolean us) {
         out.println("VENTCASE REVIEW: " + r.title() + " (" + r.tag() + ")");
         DemoCommand.CAUTIONS.forEach(out::println);
         out.println("Case " + kase + ", input hash " + r.inputHash());
@@ -128,15 +137,15 @@ final class ReviewCommand implements Callable<Integer> {
                 "Verdict");
         List<String> notes = new ArrayList<>();
         for (ReviewResult.Row row : r.rows()) {
-            Cells c = cells(row);
+            ReviewCells c = ReviewCells.of(row, "-", us);
             String verdict = row.verdict().label() + (row.withinModelUncertainty() ? " (within model uncertainty)" : "");
-            out.printf(Locale.ROOT, fmt, row.quantity().label(), c.claimed, c.computed, c.difference, c.relative,
-                    row.quantity().formatTolerance(row.tolerance()), verdict);
+            out.printf(Locale.ROOT, fmt, row.quantity().label(), c.claimed(), c.computed(), c.difference(),
+                    c.relative(), c.tolerance(), verdict);
             for (ReviewResult.Hint h : row.hints()) {
-                notes.add(row.quantity().label() + " [" + h.code() + "] " + h.text());
+                notes.add(row.quantity().label() + " [" + h.code() + "] " + said(h.text(), us));
             }
             if (!row.note().isEmpty()) {
-                notes.add(row.quantity().label() + ": not compared: " + row.note());
+                notes.add(row.quantity().label() + ": not compared: " + said(row.note(), us));
             }
         }
         out.println();
@@ -156,8 +165,8 @@ final class ReviewCommand implements Callable<Integer> {
                 out.printf(Locale.ROOT, "   %-34s %s%n", row.quantity().label(), String.join(", ", row.modelOrifices()));
             } else if (row.modelMin().isPresent()) {
                 out.printf(Locale.ROOT, "   %-34s %s to %s%n", row.quantity().label(),
-                        row.quantity().format(row.modelMin().getAsDouble()),
-                        row.quantity().format(row.modelMax().getAsDouble()));
+                        row.quantity().format(row.modelMin().getAsDouble(), us),
+                        row.quantity().format(row.modelMax().getAsDouble(), us));
             }
         }
         for (ReviewResult.ModelRun m : r.runs()) {
@@ -167,25 +176,12 @@ final class ReviewCommand implements Callable<Integer> {
             out.println();
             out.println("WARNINGS");
             for (String w : r.warnings()) {
-                out.println("  ! " + w);
+                out.println("  ! " + said(w, us));
             }
         }
     }
 
-    private record Cells(String claimed, String computed, String difference, String relative) {
+    private static String said(String text, boolean us) {
+        return us ? QuantityText.usFirst(text) : text;
     }
-
-    private static Cells cells(ReviewResult.Row row) {
-        ReviewQuantity q = row.quantity();
-        if (q == ReviewQuantity.ORIFICE) {
-            return new Cells(row.claimedOrifice().orElse(""), row.computedOrifice().orElse("-"), "", "");
-        }
-        String claimed = row.claimed().isPresent() ? q.format(row.claimed().getAsDouble()) : row.claimedText();
-        String computed = row.computed().isPresent() ? q.format(row.computed().getAsDouble()) : "-";
-        String diff = row.difference().isPresent() ? q.formatDifference(row.difference().getAsDouble()) : "";
-        String rel = row.relativeDifference().isPresent() ? String.format(Locale.ROOT, "%+.1f %%",
-                row.relativeDifference().getAsDouble() * 100) : "";
-        return new Cells(claimed, computed, diff, rel);
-    }
-
 }

@@ -13,6 +13,7 @@ import org.ventcase.audit.VesselAudit;
 import org.ventcase.casefile.Templates;
 import org.ventcase.report.SheetModel.Row;
 import org.ventcase.report.SheetModel.Table;
+import org.ventcase.units.CustomaryUnits;
 
 /**
  * The summary PDF of an inventory audit: title block, the counts, totals by area, by component and
@@ -29,7 +30,10 @@ public final class AuditSheet {
     /** Rows listed in the flagged and error tables before the sheet refers to the CSV. */
     public static final int MAX_LISTED = AuditResult.LISTED;
 
-    private AuditSheet() {
+    private final boolean us;
+
+    private AuditSheet(UnitSystem units) {
+        this.us = units == UnitSystem.US;
     }
 
     /**
@@ -49,27 +53,51 @@ public final class AuditSheet {
     /** Writes the summary PDF atomically. */
     public static void write(AuditResult r, Info info, Path target, CalculationSheet.PageSize size)
             throws IOException {
-        CalculationSheet.write(model(r, info), target, size);
+        write(r, info, target, size, UnitSystem.SI);
     }
 
-    private static String t(double kg) {
-        return String.format(Locale.ROOT, "%,.1f t", kg / 1000.0);
+    /** Writes the summary PDF atomically, its figures in the unit system given. */
+    public static void write(AuditResult r, Info info, Path target, CalculationSheet.PageSize size, UnitSystem units)
+            throws IOException {
+        CalculationSheet.write(model(r, info, units), target, size);
     }
 
-    private static String kgh(double kgPerS) {
-        return String.format(Locale.ROOT, "%,.0f kg/h", kgPerS * 3600);
+    // Masses in t (SI) or lb (US); factors from CustomaryUnits (exact, NIST SP 811).
+    private String t(double kg) {
+        return us ? String.format(Locale.ROOT, "%,.0f lb", kg / CustomaryUnits.KG_PER_LB)
+                : String.format(Locale.ROOT, "%,.1f t", kg / 1000.0);
     }
 
-    private static String mm2(double m2) {
-        return String.format(Locale.ROOT, "%,.0f mm²", m2 * 1e6);
+    private String kgh(double kgPerS) {
+        return us ? String.format(Locale.ROOT, "%,.0f lb/h", kgPerS * 3600 / CustomaryUnits.KG_PER_LB)
+                : String.format(Locale.ROOT, "%,.0f kg/h", kgPerS * 3600);
+    }
+
+    private String mm2(double m2) {
+        return us ? String.format(Locale.ROOT, "%,.3f in²", m2 * 1e6 / CustomaryUnits.MM2_PER_IN2)
+                : String.format(Locale.ROOT, "%,.0f mm²", m2 * 1e6);
+    }
+
+    /** A sentence written in SI, US first on a US sheet. */
+    private String said(String text) {
+        return us ? QuantityText.usFirst(text) : text;
     }
 
     private static String rowRef(VesselAudit v) {
         return Integer.toString(v.row());
     }
 
-    /** The sheet model. */
+    /** The sheet model, in SI. */
     public static SheetModel model(AuditResult r, Info info) {
+        return model(r, info, UnitSystem.SI);
+    }
+
+    /** The sheet model in the unit system given. */
+    public static SheetModel model(AuditResult r, Info info, UnitSystem units) {
+        return new AuditSheet(units).build(r, info);
+    }
+
+    private SheetModel build(AuditResult r, Info info) {
         SheetIdentity id = new SheetIdentity(info.title(), info.register(), "A", info.date(), info.preparer(), "",
                 "Ventcase", info.toolVersion(), info.inputHash());
         long ok = r.count(VesselAudit.Status.OK);
@@ -115,10 +143,10 @@ public final class AuditSheet {
                 Row.of("Rows", Integer.toString(r.rowCount())),
                 Row.of("Screening scenario (liquid)", "API Std 521 pool fire, wetted vessel, bare (F = 1), adequate "
                         + "drainage and fire-fighting, W = Q / L at the bubble point at P1"),
-                Row.of("Screening scenario (gas-filled)", "API Std 521 unwetted vessel, wall 593 C"),
+                Row.of("Screening scenario (gas-filled)", said("API Std 521 unwetted vessel, wall 593 C")),
                 Row.of("Device", "one conventional valve, fire overpressure 21 %, Kd 0.975, Kb = Kc = 1, back "
                         + "pressure atmospheric"),
-                Row.of("Fire height; atmospheric pressure", "7.6 m above grade; 101.325 kPa")), ""));
+                Row.of("Fire height; atmospheric pressure", said("7.6 m above grade; 101.325 kPa abs"))), ""));
         List<Row> th = new ArrayList<>();
         r.thresholds().forEach(c -> th.add(Row.of(c.entry().substance(), c.entry().component().name(),
                 t(c.entry().thresholdKg()), c.entry().label())));
@@ -154,11 +182,12 @@ public final class AuditSheet {
         if (!r.byArea().isEmpty()) {
             List<Figure.Bar> bars = new ArrayList<>();
             for (AuditResult.Group g : r.byArea()) {
-                bars.add(new Figure.Bar(g.name(), new double[] {g.liquidMassKg() / 1000, g.vapourMassKg() / 1000},
+                double per = us ? 1000 * CustomaryUnits.KG_PER_LB : 1000;
+                bars.add(new Figure.Bar(g.name(), new double[] {g.liquidMassKg() / per, g.vapourMassKg() / per},
                         t(g.totalMassKg())));
             }
             figures.add(new Figure.BarChart("Inventory by area (liquid and vapour), sums of the single-vessel "
-                    + "results.", "Mass, t", List.of("Liquid", "Vapour"), bars));
+                    + "results.", us ? "Mass, 1000 lb" : "Mass, t", List.of("Liquid", "Vapour"), bars));
         }
 
         String statement = String.join("\n", SheetModels.paragraphs(block("method-audit")));
@@ -169,16 +198,18 @@ public final class AuditSheet {
                 .replace("{title}", info.title()).replace("{revision}", "A")
                 .replace("{ventcaseVersion}", info.toolVersion()).replace("{inputHash}", info.inputHash())
                 .strip().replaceAll("\\s*\\n\\s*", " ");
-        return new SheetModel(id, UnitSystem.SI, List.of(new SheetModel.RevisionRow("A", info.date().toString(),
+        return new SheetModel(id, us ? UnitSystem.US : UnitSystem.SI, List.of(new SheetModel.RevisionRow("A", info.date().toString(),
                 "Inventory audit of the register", info.preparer(), "")),
                 new SheetModel.SignOff(List.of(new SheetModel.Signatory("Prepared", info.preparer()),
                         new SheetModel.Signatory("Checked", ""), new SheetModel.Signatory("Approved", ""))),
                 inputs, List.of(), results, warnings, figures, method, cautions, deferral,
-                "Masses in tonnes (1 t = 1000 kg), loads in kg/h, areas in mm²; the per-vessel CSV has every "
-                        + "number with its unit in the column header.", "INVENTORY AUDIT  \u00b7  SCREENING SUMMARY");
+                (us ? "Masses in lb, loads in lb/h, areas in in²; the per-vessel CSV stays in SI, with every "
+                        + "number's unit in its column header."
+                        : "Masses in tonnes (1 t = 1000 kg), loads in kg/h, areas in mm²; the per-vessel CSV has every "
+                        + "number with its unit in the column header."), "INVENTORY AUDIT  \u00b7  SCREENING SUMMARY");
     }
 
-    private static Table groupTable(String title, String first, List<AuditResult.Group> groups) {
+    private Table groupTable(String title, String first, List<AuditResult.Group> groups) {
         List<Row> rows = new ArrayList<>();
         for (AuditResult.Group g : groups) {
             rows.add(Row.of(g.name(), Integer.toString(g.vessels()), t(g.liquidMassKg()), t(g.vapourMassKg()),
@@ -189,7 +220,7 @@ public final class AuditSheet {
                 List.of(2.2, 0.8, 1.1, 1.1, 1.1, 1.8), rows, "");
     }
 
-    private static Table thresholdTable(AuditResult r) {
+    private Table thresholdTable(AuditResult r) {
         List<Row> rows = new ArrayList<>();
         for (AuditResult.ThresholdCheck c : r.thresholds()) {
             boolean any = c.siteExceeds() || !c.areasExceeding().isEmpty();
@@ -206,7 +237,7 @@ public final class AuditSheet {
                         + "level.");
     }
 
-    private static Table topInventory(AuditResult r) {
+    private Table topInventory(AuditResult r) {
         List<Row> rows = new ArrayList<>();
         for (VesselAudit v : r.topByInventory()) {
             VesselAudit.Contents c = v.inventory().get();
@@ -218,7 +249,7 @@ public final class AuditSheet {
                 "Level (% vol)", "Mass"), List.of(0.5, 0.9, 1.6, 1.9, 0.8, 0.7, 0.8), rows, "");
     }
 
-    private static Table topFire(AuditResult r) {
+    private Table topFire(AuditResult r) {
         List<Row> rows = new ArrayList<>();
         for (VesselAudit v : r.topByFireLoad()) {
             VesselAudit.FireLoad f = v.fire().get();
@@ -232,7 +263,7 @@ public final class AuditSheet {
                 "Relief load and area of the screening scenario only; highlighted: the installed orifice is short.");
     }
 
-    private static Table flagged(AuditResult r) {
+    private Table flagged(AuditResult r) {
         List<Row> rows = new ArrayList<>();
         long total = r.digest().flaggedCount();
         for (VesselAudit v : r.digest().flagged()) {
@@ -251,7 +282,7 @@ public final class AuditSheet {
                         + "space under 5 %; stated pressure differs from the bubble pressure by more than 10 %.");
     }
 
-    private static Table errors(AuditResult r) {
+    private Table errors(AuditResult r) {
         List<Row> rows = new ArrayList<>();
         long total = r.digest().notComputedCount();
         for (VesselAudit v : r.notComputed()) {

@@ -28,7 +28,7 @@ public final class QuantityText {
     private static final String NUMBER = "(-?\\d+(?:\\.\\d+)?(?:[eE][-+]?\\d+)?)";
     // Longest units first, so that "kPa abs" wins over "kPa" and "kg/m3" over "kg".
     private static final Pattern QUANTITY = Pattern.compile("(?<![\\w.-])" + NUMBER + "(?:-(\\d+(?:\\.\\d+)?))?"
-            + "[ \u00A0](K \\((-?\\d+(?:\\.\\d+)?) C\\)|kPa abs|kPa gauge|kPa|Pa abs|Pa gauge|Pa|K|C|kg/kmol|kmol"
+            + "[ \u00A0](K \\((-?\\d+(?:\\.\\d+)?) C\\)|kPa abs|kPa gauge|kPa|Pa abs|Pa gauge|Pa|bar abs|bar gauge|barg|bara|bar|K|C|kg/kmol|kmol"
             + "|kg/m3|kg/h|kg/s|kg|kJ/kg|kW|mm2|m3/kmol|m3/h|m3/s|m3|m2|mol|m|L/min)(?![\\w/\\[])(?! \\[)");
 
     private QuantityText() {
@@ -91,6 +91,14 @@ public final class QuantityText {
                 return f(CustomaryUnits.paToPsi(v * 1e3), 2) + " psig";
             case "kPa":
                 return f(CustomaryUnits.paToPsi(v * 1e3), 2) + " psi";
+            case "bar abs":
+            case "bara":
+                return f(CustomaryUnits.paToPsi(v * 1e5), 2) + " psia";
+            case "bar gauge":
+            case "barg":
+                return f(CustomaryUnits.paToPsi(v * 1e5), 2) + " psig";
+            case "bar":
+                return f(CustomaryUnits.paToPsi(v * 1e5), 2) + " psi";
             case "Pa abs":
                 return g(CustomaryUnits.paToPsi(v)) + " psia";
             case "Pa gauge":

@@ -35,6 +35,17 @@ public final class ReviewSheets {
      * @param claimedName the claimed-value file's name, as printed
      */
     public static SheetModel from(ReviewResult r, SheetIdentity id, String caseName, String claimedName) {
+        return from(r, id, caseName, claimedName, UnitSystem.SI);
+    }
+
+    /**
+     * As {@link #from(ReviewResult, SheetIdentity, String, String)} with the values in the unit
+     * system given; in US units the hints and warnings (written in SI) lead with US values and the
+     * method steps bracket them.
+     */
+    public static SheetModel from(ReviewResult r, SheetIdentity id, String caseName, String claimedName,
+                                  UnitSystem units) {
+        boolean us = units == UnitSystem.US;
         List<SheetModel.RevisionRow> revisions = List.of(new SheetModel.RevisionRow(id.revision(), id.date().toString(),
                 "Review of the claimed values in " + claimedName, id.preparer(), id.checker()));
         SheetModel.SignOff signOff = new SheetModel.SignOff(List.of(new SheetModel.Signatory("Reviewed", ""),
@@ -49,32 +60,42 @@ public final class ReviewSheets {
                 "Ventcase ran the whole case with its own model; the claimed values were not used in its calculation."));
         List<SheetModel.Row> tol = new ArrayList<>();
         for (ReviewQuantity q : ReviewQuantity.values()) {
-            tol.add(SheetModel.Row.of(q.label(), q.formatTolerance(r.tolerances().of(q))
-                    + (r.tolerances().changed(q) ? " (changed for this review)" : ""), q.reason()));
+            tol.add(SheetModel.Row.of(q.label(), q.formatTolerance(r.tolerances().of(q), us)
+                    + (r.tolerances().changed(q) ? " (changed for this review)" : ""), said(q.reason(), us)));
         }
         inputs.add(new SheetModel.Table("Tolerances", List.of("Quantity", "Tolerance", "Why"),
                 List.of(0.28, 0.14, 0.58), tol, "Verdict: within the tolerance agrees; up to twice the tolerance "
                 + "check; beyond that disagrees. The orifice must be the same designation."));
         List<SheetModel.Table> results = new ArrayList<>();
-        results.add(deviationTable(r));
-        results.add(causes(r));
-        results.add(modelRange(r));
-        List<String> warnings = new ArrayList<>(r.warnings());
+        results.add(deviationTable(r, us));
+        results.add(causes(r, us));
+        results.add(modelRange(r, us));
+        List<String> warnings = new ArrayList<>();
+        for (String w : r.warnings()) {
+            warnings.add(said(w, us));
+        }
         for (CaseResult.CaseWarning w : r.computed().warnings()) {
             if (w.scenarios().isEmpty() || w.scenarios().contains(r.scenarioLabel())) {
-                warnings.add(w.message());
+                warnings.add(said(w.message(), us));
             }
         }
         CaseResult.ScenarioResult s = r.computed().scenarios().get(r.scenarioIndex());
         String statement = org.ventcase.casefile.Templates.text("method-" + r.scenarioType())
                 .map(t -> String.join(" ", SheetModels.paragraphs(t))).orElse("");
         List<SheetModel.MethodSection> method = List.of(new SheetModel.MethodSection(s.label(), statement, s.trace()));
-        return new SheetModel(id, UnitSystem.SI, revisions, signOff, inputs, List.of(), results, warnings, List.of(),
+        return new SheetModel(id, units, revisions, signOff, inputs, List.of(), results, warnings, List.of(),
                 method, SheetModels.paragraphs(SheetModels.block("cautions")),
                 SheetModels.fill(SheetModels.block("code-deferral"), id),
-                "Claimed and computed values in bar abs, C, kg/kmol, kJ/kg, kg/m3, kW, m2, kg/h and mm2; temperature "
-                        + "differences in K. The method steps are Ventcase's calculation of the scenario, in SI as "
-                        + "computed.", BANNER);
+                (us ? "Claimed and computed values in psia, \u00b0F, lb/lbmol, Btu/lb, lb/ft3, Btu/h, ft2, lb/h and in2; "
+                        + "temperature differences in \u00b0F. The method steps are Ventcase's calculation of the "
+                        + "scenario, in SI as computed, with US customary values in brackets."
+                        : "Claimed and computed values in bar abs, C, kg/kmol, kJ/kg, kg/m3, kW, m2, kg/h and mm2; "
+                        + "temperature differences in K. The method steps are Ventcase's calculation of the scenario, "
+                        + "in SI as computed."), BANNER);
+    }
+
+    private static String said(String text, boolean us) {
+        return us ? QuantityText.usFirst(text) : text;
     }
 
     private static String nb(String s) {
@@ -85,10 +106,14 @@ public final class ReviewSheets {
     private static final String NOT_COMPUTED = "not computed";
 
     static SheetModel.Table deviationTable(ReviewResult r) {
+        return deviationTable(r, false);
+    }
+
+    static SheetModel.Table deviationTable(ReviewResult r, boolean us) {
         List<SheetModel.Row> rows = new ArrayList<>();
         for (ReviewResult.Row row : r.rows()) {
             ReviewQuantity q = row.quantity();
-            ReviewCells c = ReviewCells.of(row, NOT_COMPUTED);
+            ReviewCells c = ReviewCells.of(row, NOT_COMPUTED, us);
             // a value and its unit stay on one line; the placeholder may wrap
             String computed = c.computed().equals(NOT_COMPUTED) ? c.computed() : nb(c.computed());
             String verdict = row.verdict().label() + (row.withinModelUncertainty() ? ", within model uncertainty" : "");
@@ -104,13 +129,17 @@ public final class ReviewSheets {
     }
 
     static SheetModel.Table causes(ReviewResult r) {
+        return causes(r, false);
+    }
+
+    static SheetModel.Table causes(ReviewResult r, boolean us) {
         List<SheetModel.Row> rows = new ArrayList<>();
         for (ReviewResult.Row row : r.rows()) {
             for (ReviewResult.Hint h : row.hints()) {
-                rows.add(SheetModel.Row.of(row.quantity().label(), h.code(), h.text()));
+                rows.add(SheetModel.Row.of(row.quantity().label(), h.code(), said(h.text(), us)));
             }
             if (!row.note().isEmpty()) {
-                rows.add(SheetModel.Row.of(row.quantity().label(), "not compared", row.note()));
+                rows.add(SheetModel.Row.of(row.quantity().label(), "not compared", said(row.note(), us)));
             }
         }
         if (rows.isEmpty()) {
@@ -122,6 +151,10 @@ public final class ReviewSheets {
     }
 
     static SheetModel.Table modelRange(ReviewResult r) {
+        return modelRange(r, false);
+    }
+
+    static SheetModel.Table modelRange(ReviewResult r, boolean us) {
         List<String> cols = new ArrayList<>();
         List<Double> weights = new ArrayList<>();
         cols.add("Quantity");
@@ -140,7 +173,7 @@ public final class ReviewSheets {
                     cells.add(m.orifice().orElse("not computed"));
                 } else {
                     Double v = m.values().get(q);
-                    cells.add(v == null ? "not computed" : nb(q.format(v)));
+                    cells.add(v == null ? "not computed" : nb(q.format(v, us)));
                 }
             }
             rows.add(new SheetModel.Row(cells, row.withinModelUncertainty()));

@@ -17,16 +17,21 @@ public record ReviewCells(String claimed, String computed, String difference, St
 
     /** The cells of {@code row}; {@code missing} stands where nothing was computed. */
     public static ReviewCells of(ReviewResult.Row row, String missing) {
+        return of(row, missing, false);
+    }
+
+    /** As {@link #of(ReviewResult.Row, String)} in SI or, with {@code us}, US customary units. */
+    public static ReviewCells of(ReviewResult.Row row, String missing, boolean us) {
         ReviewQuantity q = row.quantity();
-        String tol = q.formatTolerance(row.tolerance());
+        String tol = q.formatTolerance(row.tolerance(), us);
         if (q == ReviewQuantity.ORIFICE) {
             return new ReviewCells(row.claimedOrifice().orElse(""), row.computedOrifice().orElse(missing), "", "",
                     tol);
         }
-        String claimed = row.claimed().isPresent() ? q.format(row.claimed().getAsDouble()) : row.claimedText();
-        String computed = row.computed().isPresent() ? q.format(row.computed().getAsDouble()) : missing;
+        String claimed = row.claimed().isPresent() ? q.format(row.claimed().getAsDouble(), us) : row.claimedText();
+        String computed = row.computed().isPresent() ? q.format(row.computed().getAsDouble(), us) : missing;
         String diff = row.difference().isPresent()
-                ? unsignedZero(q.formatDifference(row.difference().getAsDouble())) : "";
+                ? unsignedZero(q.formatDifference(row.difference().getAsDouble(), us)) : "";
         String rel = row.relativeDifference().isPresent()
                 ? unsignedZero(String.format(Locale.ROOT, "%+.1f %%", row.relativeDifference().getAsDouble() * 100))
                 : "";

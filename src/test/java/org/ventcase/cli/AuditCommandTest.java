@@ -1,5 +1,6 @@
 package org.ventcase.cli;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -66,6 +67,36 @@ class AuditCommandTest {
             assertTrue(text.contains("Inventory by area"), "bar chart caption");
         }
         assertFalse(r.err().contains("%"), "no progress bar when not asked and not a terminal");
+    }
+
+    /**
+     * Issue 18 item 4: --units us prints the summary and the PDF in lb, lb/h and in2; the CSV stays
+     * SI and byte-identical. Check value: the SI run's site total in t, converted with the exact
+     * 1 lb = 0.45359237 kg (NIST SP 811), to the printed rounding.
+     */
+    @Test
+    void unitsUsPrintsPoundsAndKeepsTheCsvInSi() throws IOException {
+        Path reg = dir.resolve("reg.csv");
+        Files.writeString(reg, HEADER + "\n"
+                + "V-1,Area 1,propane,,horizontal,2:1,3.2,16,1.2,85,38,,saturated,,17.2,,T,\n");
+        Path siCsv = dir.resolve("si.csv");
+        Path usCsv = dir.resolve("us.csv");
+        Path pdf = dir.resolve("us.pdf");
+        Run si = run("audit", reg.toString(), "-o", siCsv.toString());
+        Run us = run("audit", reg.toString(), "-o", usCsv.toString(), "--pdf", pdf.toString(), "--units", "us");
+        assertEquals(ExitCode.OK, us.code(), us.err());
+        java.util.regex.Matcher t = java.util.regex.Pattern.compile("Site inventory: ([0-9.]+) t").matcher(si.out());
+        java.util.regex.Matcher lb = java.util.regex.Pattern.compile("Site inventory: ([0-9]+) lb").matcher(us.out());
+        assertTrue(t.find() && lb.find(), us.out());
+        assertEquals(Double.parseDouble(t.group(1)) * 1000 / 0.45359237, Double.parseDouble(lb.group(1)),
+                0.05 * 1000 / 0.45359237 + 1);
+        assertArrayEquals(Files.readAllBytes(siCsv), Files.readAllBytes(usCsv));
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+            assertTrue(text.contains("Masses in lb, loads in lb/h"), "unit note");
+            assertTrue(text.contains(" lb/h"), "loads in lb/h");
+            assertFalse(text.contains(" kg/h "), "no kg/h on a US audit sheet");
+        }
     }
 
     @Test

@@ -60,6 +60,33 @@ class ReviewCommandTest {
         assertArrayEquals("%PDF-".getBytes(), head);
     }
 
+    /**
+     * Issue 18 item 4: --units us prints the table in US customary units and the hints lead with
+     * them. Check values: the SI display of the same run (bar abs, C), converted with the exact
+     * factors of NIST SP 811 (1 psi = 0.0689476 bar; F = 1.8 C + 32), to the printed rounding.
+     */
+    @Test
+    void unitsUsPrintsTheTableInCustomaryUnits() {
+        Run si = run("review", "--claimed", "demo-cases/review/propane-bullet-gauge-as-absolute.json");
+        Run us = run("review", "--claimed", "demo-cases/review/propane-bullet-gauge-as-absolute.json", "--units", "us");
+        assertEquals(ExitCode.OK, us.code(), us.err());
+        java.util.regex.Matcher p = java.util.regex.Pattern.compile("Relieving pressure P1 +[0-9.]+ bar abs +([0-9.]+) bar abs")
+                .matcher(si.out());
+        assertTrue(p.find(), si.out());
+        double bar = Double.parseDouble(p.group(1));
+        java.util.regex.Matcher q = java.util.regex.Pattern.compile("Relieving pressure P1 +[0-9.]+ psia +([0-9.]+) psia")
+                .matcher(us.out());
+        assertTrue(q.find(), us.out());
+        assertEquals(bar / 0.0689475729, Double.parseDouble(q.group(1)), 0.05 / 0.0689475729 + 0.05);
+        assertTrue(us.out().contains(" \u00b0F "), "temperatures in F");
+        assertTrue(us.out().contains(" psia ["), "a hint leads with psia, SI bracketed");
+        assertFalse(us.out().lines().anyMatch(l -> l.matches("Relieving pressure P1 +[0-9].*") && l.contains("bar")),
+                "no bar abs in the table row");
+        Run bad = run("review", "--claimed", "demo-cases/review/propane-bullet-clean.json", "--units", "imperial");
+        assertEquals(ExitCode.INVALID_INPUT, bad.code());
+        assertTrue(bad.err().contains("--units") && bad.err().contains("si or us"), bad.err());
+    }
+
     @Test
     void toleranceOptionChangesTheVerdict() {
         Run r = run("review", "demo-cases/propane-bullet-fire.json", "--claimed",
