@@ -124,14 +124,18 @@ final class VesselSketchView extends Pane {
             maxX = Math.max(maxX, p[0]);
             maxY = Math.max(maxY, p[1]);
         }
-        double marginL = 16;
-        double marginR = 96;
-        double marginT = 28;
-        double marginB = 34;
+        // room for the dimension lines: the chain of elevations on the left, the length above,
+        // the level label on the right, and the summary lines under grade
+        double marginL = 104;
+        double marginR = 88;
+        double marginT = 56;
+        double marginB = 30;
+        double summaryH = 62;
         double spanX = maxX - minX;
-        double scale = Math.min((w - marginL - marginR) / spanX, (h - marginT - marginB) / maxY);
+        double scale = Math.min((w - marginL - marginR) / spanX, (h - marginT - marginB - summaryH) / maxY);
         double ox = marginL + ((w - marginL - marginR) - spanX * scale) / 2 - minX * scale;
-        double groundY = h - marginB;
+        // the drawing sits under the title; what height is left goes to the summary, not to empty sky
+        double groundY = marginT + maxY * scale;
         java.util.function.DoubleUnaryOperator sx = x -> ox + x * scale;
         java.util.function.DoubleUnaryOperator sy = y -> groundY - y * scale;
 
@@ -216,10 +220,127 @@ final class VesselSketchView extends Pane {
             g.setTextBaseline(VPos.CENTER);
             g.fillText(Messages.get("sketch.level") + "\n" + fmt(s.levelM()) + " m", w - marginR + 12, yl);
         }
+        dimensions(g, s, sx, sy, minX, maxX, groundY);
+        summary(g, s, groundY + 26, w);
+        if (s.vessel().shape() == Vessel.Shape.HORIZONTAL_CYLINDER) {
+            endView(g, s, groundY + 26 + 44, w, h);
+        }
         g.setFill(STEEL);
         g.setTextAlign(TextAlignment.LEFT);
         g.setTextBaseline(VPos.TOP);
         g.fillText(Messages.get("sketch.title"), 6, 6);
+    }
+
+    private static final Color DIMENSION = Color.web("#5d6d7e");
+
+    /**
+     * Dimension lines: on the left the chain grade - bottom - top (bottom elevation, then the
+     * inside diameter or, for a vertical vessel, the height to the top of the head), above the
+     * vessel the tangent-to-tangent length (horizontal) or the inside diameter (vertical, sphere).
+     */
+    private static void dimensions(GraphicsContext g, WizardViewModel.Sketch s, java.util.function.DoubleUnaryOperator sx,
+                                   java.util.function.DoubleUnaryOperator sy, double minX, double maxX, double groundY) {
+        Vessel v = s.vessel();
+        double e = s.bottomElevation();
+        double top = e + v.totalHeight();
+        double x = sx.applyAsDouble(minX) - 14;
+        g.setStroke(DIMENSION);
+        g.setFill(DIMENSION);
+        g.setLineWidth(1);
+        g.setFont(Font.font(11));
+        if (e > 0) {
+            vertical(g, x, groundY, sy.applyAsDouble(e), Messages.get("sketch.bottom") + " " + fmt(e) + " m");
+        }
+        String upper = v.shape() == Vessel.Shape.VERTICAL_CYLINDER ? Messages.get("sketch.height")
+                : Messages.get("sketch.diameter");
+        vertical(g, x, sy.applyAsDouble(e), sy.applyAsDouble(top), upper + " " + fmt(v.totalHeight()) + " m");
+        double y = sy.applyAsDouble(top) - 14;
+        if (v.shape() == Vessel.Shape.HORIZONTAL_CYLINDER) {
+            double h1 = v.firstHeadDepth();
+            horizontal(g, sx.applyAsDouble(h1), sx.applyAsDouble(h1 + v.tangentLength()), y,
+                    Messages.get("sketch.length") + " " + fmt(v.tangentLength()) + " m");
+        } else {
+            horizontal(g, sx.applyAsDouble(minX), sx.applyAsDouble(maxX), y,
+                    Messages.get("sketch.diameter") + " " + fmt(v.diameter()) + " m");
+        }
+    }
+
+    private static void vertical(GraphicsContext g, double x, double y0, double y1, String label) {
+        g.strokeLine(x, y0, x, y1);
+        g.strokeLine(x - 4, y0, x + 4, y0);
+        g.strokeLine(x - 4, y1, x + 4, y1);
+        g.setTextAlign(TextAlignment.RIGHT);
+        g.setTextBaseline(VPos.CENTER);
+        g.fillText(label, x - 6, (y0 + y1) / 2);
+    }
+
+    private static void horizontal(GraphicsContext g, double x0, double x1, double y, String label) {
+        g.strokeLine(x0, y, x1, y);
+        g.strokeLine(x0, y - 4, x0, y + 4);
+        g.strokeLine(x1, y - 4, x1, y + 4);
+        g.setTextAlign(TextAlignment.CENTER);
+        g.setTextBaseline(VPos.BOTTOM);
+        g.fillText(label, (x0 + x1) / 2, y - 3);
+    }
+
+    /**
+     * For a horizontal vessel, whose side view is long and thin: the cross-section, enlarged, with
+     * the liquid up to the level, where the fill can be read.
+     */
+    private static void endView(GraphicsContext g, WizardViewModel.Sketch s, double y, double w, double h) {
+        double room = Math.min(w - 100, h - y - 50);
+        if (room < 60) {
+            return;
+        }
+        double d = s.vessel().diameter();
+        double r = room / 2;
+        double cx = w / 2;
+        double cy = y + 40 + r;
+        double level = Math.min(Math.max(s.levelM(), 0), d);
+        g.setFill(STEEL);
+        g.setFont(Font.font(12));
+        g.setTextAlign(TextAlignment.LEFT);
+        g.setTextBaseline(VPos.TOP);
+        g.fillText(Messages.get("sketch.endView"), 8, y);
+        if (level > 0) {
+            // the circular segment below the level: the arc between the two points where the level
+            // line meets the circle, closed by the level line
+            double yl = cy + r - level / d * room;
+            double half = Math.toDegrees(Math.acos(Math.max(-1, Math.min(1, (yl - cy) / r))));
+            g.setFill(LIQUID);
+            g.fillArc(cx - r, cy - r, room, room, 270 - half, 2 * half, javafx.scene.shape.ArcType.CHORD);
+            g.setStroke(LIQUID.darker());
+            g.setLineWidth(1);
+            g.strokeLine(cx + r, yl, cx + r + 14, yl);
+            g.setFill(LIQUID.darker().darker());
+            g.setTextAlign(TextAlignment.LEFT);
+            g.setTextBaseline(VPos.CENTER);
+            g.fillText(fmt(level) + " m", cx + r + 16, yl);
+        }
+        g.setStroke(STEEL);
+        g.setLineWidth(2);
+        g.strokeOval(cx - r, cy - r, room, room);
+        g.setStroke(DIMENSION);
+        g.setFill(DIMENSION);
+        g.setLineWidth(1);
+        g.setFont(Font.font(11));
+        horizontal(g, cx - r, cx + r, cy - r - 8, Messages.get("sketch.diameter") + " " + fmt(d) + " m");
+    }
+
+    /** Under grade: the volumes and the fill, from the same geometry the calculation uses. */
+    private static void summary(GraphicsContext g, WizardViewModel.Sketch s, double y, double w) {
+        Vessel v = s.vessel();
+        double total = v.totalVolume();
+        double level = Math.min(Math.max(s.levelM(), 0), v.totalHeight());
+        double liquid = v.liquidVolume(level);
+        g.setFill(STEEL);
+        g.setFont(Font.font(12));
+        g.setTextAlign(TextAlignment.LEFT);
+        g.setTextBaseline(VPos.TOP);
+        g.fillText(String.format(java.util.Locale.ROOT, Messages.get("sketch.volumes"), total, liquid,
+                total > 0 ? 100 * liquid / total : 0.0), 8, y, w - 16);
+        g.fillText(String.format(java.util.Locale.ROOT, Messages.get("sketch.fireLine"), s.bottomElevation(),
+                s.fireHeight()), 8, y + 18, w - 16);
     }
 
     private static String fmt(double v) {
