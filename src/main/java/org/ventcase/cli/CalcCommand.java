@@ -173,11 +173,9 @@ final class CalcCommand implements Callable<Integer> {
             out.println();
             out.println("WARNINGS");
             for (CaseResult.CaseWarning w : r.warnings()) {
+                boolean us = u != null && u.system() == org.ventcase.report.UnitSystem.US;
                 out.println("  ! " + (w.scenarios().isEmpty() ? "" : "[" + String.join("; ", w.scenarios()) + "] ")
-                        + w.message());
-            }
-            if (u != null) {
-                out.println("  (warning texts give their quantities in SI units)");
+                        + (us ? org.ventcase.report.QuantityText.usFirst(w.message()) : w.message()));
             }
         }
     }
@@ -185,10 +183,12 @@ final class CalcCommand implements Callable<Integer> {
     private static String fluid(RelievedFluid f, org.ventcase.report.DisplayUnits u) {
         String rho = u == null ? String.format(Locale.ROOT, "%.4g kg/m3", f.density())
                 : u.plain(org.ventcase.report.DisplayUnits.Kind.DENSITY, f.density());
+        // kg/kmol and lb/lbmol are the same number
+        String mu = u != null && u.system() == org.ventcase.report.UnitSystem.US ? "lb/lbmol" : "kg/kmol";
         if (f.phase() == org.ventcase.relief.RelievedFluid.Phase.LIQUID) {
-            return String.format(Locale.ROOT, "M %.2f kg/kmol, Z %.4f, %s", f.molarMass(), f.z(), rho);
+            return String.format(Locale.ROOT, "M %.2f %s, Z %.4f, %s", f.molarMass(), mu, f.z(), rho);
         }
-        return String.format(Locale.ROOT, "M %.2f kg/kmol, Z %.4f, k %.4f, %s", f.molarMass(), f.z(),
+        return String.format(Locale.ROOT, "M %.2f %s, Z %.4f, k %.4f, %s", f.molarMass(), mu, f.z(),
                 f.kIdeal(), rho);
     }
 

@@ -87,7 +87,7 @@ final class EnvelopeCommand implements Callable<Integer> {
         }
         java.util.List<String> w = new java.util.ArrayList<>(mm.kij().warnings());
         w.addAll(r.warnings());
-        tx.warnings(w);
+        tx.us(us).warnings(w);
         return ExitCode.OK;
     }
 }

@@ -115,7 +115,7 @@ final class FlashCommand implements Callable<Integer> {
         }
         java.util.List<String> w = new java.util.ArrayList<>(mm.kij().warnings());
         w.addAll(f.warnings());
-        tx.warnings(w);
+        tx.us(us).warnings(w);
         return ExitCode.OK;
     }
 

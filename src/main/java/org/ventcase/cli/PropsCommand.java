@@ -124,7 +124,7 @@ final class PropsCommand implements Callable<Integer> {
             tx.row("Joule-Thomson coefficient", "%.4g K/bar", f.jouleThomson() * 1e5);
         }
         Text.modelRows(tx, f.variant(), c, u);
-        tx.warnings(f.warnings());
+        tx.us(us).warnings(f.warnings());
         return ExitCode.OK;
     }
 

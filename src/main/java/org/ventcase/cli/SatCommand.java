@@ -93,7 +93,7 @@ final class SatCommand implements Callable<Integer> {
             tx.row("Latent heat", Text.plain(u.format(org.ventcase.report.DisplayUnits.Kind.SPECIFIC_ENERGY,
                     s.latentHeatJkg())));
             Text.modelRows(tx, s.variant(), c, u);
-            tx.warnings(s.warnings());
+            tx.us(true).warnings(s.warnings());
             return ExitCode.OK;
         }
         tx.title(String.format(Locale.ROOT, "Saturation of %s  [%s]", c.name(), s.variant().displayName()));
@@ -127,11 +127,20 @@ final class SatCommand implements Callable<Integer> {
             out.print(JsonReports.write(JsonReports.saturationPoint(mm, s)));
             return ExitCode.OK;
         }
-        Text tx = new Text(out);
+        org.ventcase.report.UnitSystem system = org.ventcase.report.UnitSystem.parse("--units", units);
+        boolean us = system == org.ventcase.report.UnitSystem.US;
+        Text tx = new Text(out).us(us);
         tx.title(String.format(Locale.ROOT, "%s point of %s  [%s]", dew ? "Dew" : "Bubble", fluidOptions.fluid,
                 mm.model().variant().displayName()));
-        tx.row("Temperature", Text.temperature(s.temperatureK()));
-        tx.row("Pressure", Text.pressure(s.pressurePa(), common.atmosphericPa()));
+        if (us) {
+            org.ventcase.report.DisplayUnits u = new org.ventcase.report.DisplayUnits(system);
+            tx.row("Temperature", Text.plain(u.format(org.ventcase.report.DisplayUnits.Kind.TEMPERATURE,
+                    s.temperatureK())));
+            tx.row("Pressure", Text.plain(u.format(org.ventcase.report.DisplayUnits.Kind.PRESSURE_ABS, s.pressurePa())));
+        } else {
+            tx.row("Temperature", Text.temperature(s.temperatureK()));
+            tx.row("Pressure", Text.pressure(s.pressurePa(), common.atmosphericPa()));
+        }
         double[] y = s.incipientComposition();
         double[] k = s.kValues();
         for (int i = 0; i < y.length; i++) {

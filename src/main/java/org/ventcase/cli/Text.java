@@ -29,6 +29,14 @@ final class Text {
         out.println();
     }
 
+    private boolean us;
+
+    /** Prints warnings (written in SI by the calculation) leading with US units from now on. */
+    Text us(boolean on) {
+        this.us = on;
+        return this;
+    }
+
     void warnings(List<String> warnings) {
         if (warnings.isEmpty()) {
             return;
@@ -36,7 +44,7 @@ final class Text {
         out.println();
         out.println("WARNINGS");
         for (String w : warnings) {
-            out.println("  ! " + w);
+            out.println("  ! " + (us ? org.ventcase.report.QuantityText.usFirst(w) : w));
         }
     }
 

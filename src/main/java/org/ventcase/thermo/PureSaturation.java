@@ -334,17 +334,19 @@ public final class PureSaturation {
                 s.lnPhiV, s.hV);
         double rackett = rackettDensity(component, t);
         double dev = liq.density() / rackett - 1.0;
+        String densityCheck = "";
         if (Math.abs(dev) > RACKETT_WARNING) {
-            warnings.add(String.format(Locale.US,
+            densityCheck = String.format(Locale.US,
                     "The %s liquid density of %s at %.2f K (%.2f C) (%.4g kg/m3) differs from the Rackett correlation "
                             + "(%.4g kg/m3, Z_RA from %s) by %+.1f %%: a liquid inventory on this basis may be %s; "
                             + "compare the bases before relying on it.", used.label(), component.name(), t, t - 273.15,
                     liq.density(), rackett, Citations.rackett(component), 100 * dev,
-                    dev < 0 ? "understated" : "overstated"));
+                    dev < 0 ? "understated" : "overstated");
+            warnings.add(densityCheck);
         }
         double dh = s.hV - s.hL;
         return new SaturationResult(model.variant(), component, t, s.p, liq, vap, dh, dh / (mw * 1e-3),
-                rackett, iterations, warnings);
+                rackett, iterations, warnings, densityCheck);
     }
 
     /**

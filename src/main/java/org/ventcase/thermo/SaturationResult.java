@@ -17,13 +17,28 @@ import java.util.List;
  *                             form), kg/m3, an independent cross-check of the EOS liquid density
  * @param iterations           equal-fugacity iterations spent (outer x inner for Tsat)
  * @param warnings             what the user must know
+ * @param densityCheck         the one of the warnings that is the Rackett cross-check of the liquid
+ *                             density, "" when the densities agree
  */
 public record SaturationResult(EosVariant variant, Component component, double temperatureK, double pressurePa,
                                PhaseState liquid, PhaseState vapor, double latentHeatJmol, double latentHeatJkg,
-                               double rackettLiquidDensity, int iterations, List<String> warnings) {
+                               double rackettLiquidDensity, int iterations, List<String> warnings,
+                               String densityCheck) {
 
     public SaturationResult {
         warnings = List.copyOf(warnings);
+        densityCheck = densityCheck == null ? "" : densityCheck;
+    }
+
+    /**
+     * The warnings without the liquid-density cross-check, for a caller that uses only the
+     * saturation temperature or pressure and the phase split (a state flash), not this density.
+     */
+    public List<String> warningsBesidesDensityCheck() {
+        if (densityCheck.isEmpty()) {
+            return warnings;
+        }
+        return warnings.stream().filter(w -> !w.equals(densityCheck)).toList();
     }
 
     /**

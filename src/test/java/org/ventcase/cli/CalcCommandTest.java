@@ -36,6 +36,24 @@ class CalcCommandTest {
         return c;
     }
 
+    /**
+     * Issue 18 item 4: with --units us the warnings lead with US units (SI bracketed) and the
+     * relieved fluid's molar mass is in lb/lbmol; a mixture's bubble point (sat) follows --units too.
+     * Invariants of the display, no external values.
+     */
+    @Test
+    void usUnitsReachTheWarningsAndTheMixtureSaturation() {
+        Run r = run("calc", "demo-cases/ammonia-storage.json", "--units", "us");
+        assertEquals(ExitCode.OK, r.code(), r.err());
+        String warnings = r.out().substring(r.out().indexOf("WARNINGS"));
+        assertTrue(warnings.contains("\u00b0F [288.15 K]"), warnings);
+        assertFalse(warnings.matches("(?s).*\\d kPa abs(?!\\]).*"), warnings);
+        assertTrue(r.out().contains("lb/lbmol") && !r.out().contains("kg/kmol"), r.out());
+        Run sat = run("sat", "--fluid", "propane:0.5,n-butane:0.5", "--temperature", "300 K", "--units", "us");
+        assertEquals(ExitCode.OK, sat.code(), sat.err());
+        assertTrue(sat.out().contains("\u00b0F [26.85 \u00b0C]") && sat.out().contains(" psia ["), sat.out());
+    }
+
     @Test
     void calcTwiceWritesTheSameBytesAndLeavesTheCaseFileAlone() throws IOException {
         Path c = copyOfDemo("ammonia-storage");

@@ -173,7 +173,8 @@ public final class StateFlash {
             return null;
         }
         double beta = (spec - vl) / (vv - vl);
-        List<String> warnings = new ArrayList<>(sat.warnings());
+        // only Tsat and the split are used here: the cubic-basis density check does not apply
+        List<String> warnings = new ArrayList<>(sat.warningsBesidesDensityCheck());
         StabilityResult st = new StabilityResult(t, p, false, 0.0, z, true,
                 "one component on its saturation curve: liquid and vapour coexist", 0, List.of());
         FlashResult r = pt.pureTwoPhase(t, p, z, beta, zl, zv, st, warnings);
