@@ -331,6 +331,10 @@ final class AuditView {
         ChoiceBox<CalculationSheet.PageSize> page = new ChoiceBox<>();
         page.getItems().setAll(CalculationSheet.PageSize.values());
         page.setValue(CalculationSheet.PageSize.A4);
+        ChoiceBox<org.ventcase.report.UnitSystem> units = new ChoiceBox<>();
+        units.setId("audit-export-units");
+        units.getItems().setAll(org.ventcase.report.UnitSystem.values());
+        units.setValue(org.ventcase.report.UnitSystem.SI);
         Button csv = new Button(Messages.get("audit.export.csv"));
         csv.setId("audit-write-csv");
         Button pdf = new Button(Messages.get("audit.export.pdf"));
@@ -349,10 +353,11 @@ final class AuditView {
         detach.add(() -> avm.state().removeListener(l));
         enable.run();
         csv.setOnAction(e -> save("csv", "audit.csv").ifPresent(avm::writeCsv));
-        pdf.setOnAction(e -> save("pdf", "audit.pdf").ifPresent(p -> avm.writePdf(p, page.getValue())));
+        pdf.setOnAction(e -> save("pdf", "audit.pdf").ifPresent(p -> avm.writePdf(p, page.getValue(), units.getValue())));
         Label h = new Label(Messages.get("review.export"));
         h.getStyleClass().add("form-heading");
-        HBox row = new HBox(10, csv, pdf, new Label(Messages.get("review.export.page")), page);
+        HBox row = new HBox(10, csv, pdf, new Label(Messages.get("review.export.page")), page,
+                new Label(Messages.get("results.units")), units);
         row.setAlignment(Pos.CENTER_LEFT);
         return new VBox(6, h, row, status);
     }

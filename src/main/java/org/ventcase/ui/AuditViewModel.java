@@ -125,7 +125,13 @@ public final class AuditViewModel {
 
     /** Writes the summary PDF off the application thread; {@link #exportMessage()} reports. */
     public void writePdf(Path target, CalculationSheet.PageSize size) {
-        export(o -> AuditRunner.writePdf(o, target, size, Texts.version()), target);
+        writePdf(target, size, org.ventcase.report.UnitSystem.SI);
+    }
+
+    /** As {@link #writePdf(Path, CalculationSheet.PageSize)}, the figures in the unit system given. */
+    public void writePdf(Path target, CalculationSheet.PageSize size, org.ventcase.report.UnitSystem units) {
+        export(o -> AuditRunner.writePdf(o, target, size, Texts.version(), java.util.Optional.empty(), "", units),
+                target);
     }
 
     private interface Writer {

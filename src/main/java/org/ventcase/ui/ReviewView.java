@@ -409,6 +409,10 @@ final class ReviewView {
         ChoiceBox<CalculationSheet.PageSize> page = new ChoiceBox<>();
         page.getItems().setAll(CalculationSheet.PageSize.values());
         page.setValue(CalculationSheet.PageSize.A4);
+        ChoiceBox<org.ventcase.report.UnitSystem> units = new ChoiceBox<>();
+        units.setId("review-export-units");
+        units.getItems().setAll(org.ventcase.report.UnitSystem.values());
+        units.setValue(org.ventcase.report.UnitSystem.SI);
         Button pdf = new Button(Messages.get("review.export.pdf"));
         pdf.setId("review-write-pdf");
         Button json = new Button(Messages.get("review.export.json"));
@@ -426,11 +430,12 @@ final class ReviewView {
         rvm.state().addListener(l);
         detach.add(() -> rvm.state().removeListener(l));
         enable.run();
-        pdf.setOnAction(e -> save("pdf", "review.pdf").ifPresent(p -> rvm.writePdf(p, page.getValue())));
+        pdf.setOnAction(e -> save("pdf", "review.pdf").ifPresent(p -> rvm.writePdf(p, page.getValue(), units.getValue())));
         json.setOnAction(e -> save("json", "review.json").ifPresent(rvm::writeJson));
         Label h = new Label(Messages.get("review.export"));
         h.getStyleClass().add("form-heading");
-        HBox row = new HBox(10, pdf, new Label(Messages.get("review.export.page")), page, json);
+        HBox row = new HBox(10, pdf, new Label(Messages.get("review.export.page")), page,
+                new Label(Messages.get("results.units")), units, json);
         row.setAlignment(Pos.CENTER_LEFT);
         return new VBox(6, h, row, status);
     }

@@ -266,9 +266,14 @@ public final class ReviewViewModel {
 
     /** Writes the review PDF off the application thread; {@link #exportMessage()} reports. */
     public void writePdf(Path target, CalculationSheet.PageSize size) {
+        writePdf(target, size, org.ventcase.report.UnitSystem.SI);
+    }
+
+    /** As {@link #writePdf(Path, CalculationSheet.PageSize)}, the values in the unit system given. */
+    public void writePdf(Path target, CalculationSheet.PageSize size, org.ventcase.report.UnitSystem units) {
         export(o -> {
             try {
-                ReviewRunner.writePdf(o, target, size, Texts.version());
+                ReviewRunner.writePdf(o, target, size, Texts.version(), units);
             } catch (java.io.IOException e) {
                 throw new java.io.UncheckedIOException("cannot write " + target + ": " + org.ventcase.common.FileErrors.reason(e), e);
             }
