@@ -146,7 +146,8 @@ final class CaseSheet {
             w.add(0.95);
         }
         cols.addAll(List.of("Tc", "Pc", "Acentric factor", "M"));
-        w.addAll(List.of(1.0, 1.1, 0.8, 0.95));
+        // "lb/lbmol" is longer than "kg/kmol": room for it on one line
+        w.addAll(List.of(1.0, 1.1, 0.8, u.system() == UnitSystem.US ? 1.15 : 0.95));
         List<Row> rows = new ArrayList<>();
         StringBuilder sources = new StringBuilder();
         for (int i = 0; i < cs.size(); i++) {
@@ -344,7 +345,7 @@ final class CaseSheet {
                         : "")), true),
                 Row.of("Margin over required area", f("%.1f %%", o.marginPercent())),
                 Row.of("Rated capacity at relieving conditions", u.format(Kind.MASS_FLOW, o.ratedCapacityKgPerS())),
-                Row.of("Sizing equation", s.sizingEquation())), o.ruleApplied());
+                Row.of("Sizing equation", s.sizingEquation())), said(o.ruleApplied()));
     }
 
     private Table sizingTable() {
