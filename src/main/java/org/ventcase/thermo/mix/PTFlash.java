@@ -106,6 +106,12 @@ public final class PTFlash {
         }
         Split s = split(at, p, z, lnK);
         if (s == null) {
+            // Substitution can fall back to the trivial solution from a trial phase that is only just
+            // unstable. Gibbs-energy descent cannot: started at a small amount of the trial phase,
+            // where G lies below the feed's (tm < 0), each accepted step lowers G further.
+            s = splitByDescent(at, p, z, w, stab.incipientVapourLike());
+        }
+        if (s == null) {
             throw new ConvergenceException("PT flash", 0, Double.NaN, String.format(Locale.US,
                     "the stability test found the feed unstable (tm = %.3g, trial %s) but the phase split collapsed to "
                             + "the trivial solution at T = %.6g K, P = %.6g Pa", stab.minimumTpd(), stab.trial(), t, p));
@@ -118,6 +124,70 @@ public final class PTFlash {
         }
         return twoPhase(t, p, z, s, basis, stab, warnings, "stability test, then successive substitution"
                 + (s.newton > 0 ? " and Newton on vapour moles" : "") + " (DEM-accelerated)");
+    }
+
+    /**
+     * The phase split by restricted-step Newton on G from a small amount (at most 10 %) of the
+     * stability test's trial phase w, which has tm < 0 (Michelsen 1982, part II: a descent method
+     * started there cannot reach the trivial solution); null if it still ends there.
+     */
+    private Split splitByDescent(CubicModel.AtTemperature at, double p, double[] z, double[] w, boolean trialVapour) {
+        int n = z.length;
+        double amount = 0.1;
+        for (int i = 0; i < n; i++) {
+            if (w[i] > 0 && z[i] > 0) {
+                amount = Math.min(amount, 0.5 * z[i] / w[i]);
+            }
+        }
+        if (!(amount > 0)) {
+            return null;
+        }
+        double[] x = new double[n];
+        double[] y = new double[n];
+        double beta0;
+        if (trialVapour) {
+            System.arraycopy(w, 0, y, 0, n);
+            beta0 = amount;
+        } else {
+            // the trial is the liquid: the vapour is the rest of the feed
+            for (int i = 0; i < n; i++) {
+                y[i] = Math.max(0, (z[i] - amount * w[i]) / (1 - amount));
+            }
+            beta0 = 1 - amount;
+        }
+        Split s = new Split();
+        double beta;
+        try {
+            beta = newton(at, p, z, beta0, x, y, s);
+        } catch (ConvergenceException e) {
+            return null;
+        }
+        double[] lnK = new double[n];
+        double sk = 0;
+        for (int i = 0; i < n; i++) {
+            lnK[i] = x[i] > 0 && y[i] > 0 ? Math.log(y[i] / x[i]) : 0;
+            if (z[i] > 0) {
+                sk += lnK[i] * lnK[i];
+            }
+        }
+        if (sk < 1e-8 || !(beta > 0 && beta < 1)) {
+            return null;
+        }
+        s.beta = beta;
+        s.x = x;
+        s.y = y;
+        s.lnK = lnK;
+        return s;
+    }
+
+    private static int present(double[] z) {
+        int n = 0;
+        for (double v : z) {
+            if (v > 0) {
+                n++;
+            }
+        }
+        return n;
     }
 
     /** A converged two-phase split. */
@@ -225,8 +295,11 @@ public final class PTFlash {
                     } catch (ConvergenceException e2) {
                         throw new ConvergenceException("PT flash (Newton, then substitution)", s.newton + s.ss,
                                 e2.residual(), String.format(Locale.US, "T = %.6g K, P = %.6g Pa: the feed is unstable but "
-                                        + "no two-phase split converges; it may split into three phases (two liquids and "
-                                        + "a vapour), which Ventcase does not compute", t, p));
+                                        + "no two-phase split converges%s", t, p, present(z) >= 3
+                                        ? "; it may split into three phases (two liquids and a vapour), which "
+                                        + "Ventcase does not compute"
+                                        : " (a binary has three phases at one pressure only: this is a failure of "
+                                        + "the method, not a three-phase state)"));
                     }
                 }
             }

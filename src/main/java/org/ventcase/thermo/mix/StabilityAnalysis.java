@@ -36,6 +36,13 @@ public final class StabilityAnalysis {
 
     static final double G_TOL = 1e-10;
     static final double TM_UNSTABLE = -1e-8;
+    /**
+     * A tm below which the search stops at the first trial that finds it. A stationary point only
+     * just below zero (seen: tm = -5.6e-7 next to the feed of a binary liquid near its spinodal)
+     * decides instability but is a poor start for the split; the other trials run and the most
+     * negative stationary point is kept.
+     */
+    static final double TM_CLEARLY_UNSTABLE = -1e-5;
     private static final int SS_ITER = 40;
     private static final int NEWTON_ITER = 40;
 
@@ -95,7 +102,7 @@ public final class StabilityAnalysis {
                 }
             } else {
                 int c = trial - 2;
-                if (!exhaustive && best != null && best.tm < TM_UNSTABLE) {
+                if (!exhaustive && best != null && best.tm < TM_CLEARLY_UNSTABLE) {
                     break;
                 }
                 if (z[c] <= 0) {
@@ -114,7 +121,7 @@ public final class StabilityAnalysis {
             if (!r.trivial && (best == null || r.tm < best.tm)) {
                 best = r;
             }
-            if (!exhaustive && best != null && best.tm < TM_UNSTABLE) {
+            if (!exhaustive && best != null && best.tm < TM_CLEARLY_UNSTABLE) {
                 break;
             }
         }

@@ -1,0 +1,80 @@
+package org.ventcase.thermo.mix;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.ventcase.thermo.Component;
+import org.ventcase.thermo.ComponentLibrary;
+import org.ventcase.thermo.CubicModel;
+import org.ventcase.thermo.EosVariant;
+
+/**
+ * Issue 19 item 2: states of the random-flash sweep (tools/fuzz_flash.sh 100000 7) where the flash
+ * failed. Invariants, no external values: mass balance, equal fugacities of the two phases, and a
+ * split that is not trivial.
+ * <ul>
+ * <li>Two where the stability test finds the feed unstable but substitution fell back to the
+ * trivial solution: Gibbs-energy descent from the trial phase now splits them.</li>
+ * <li>A binary liquid (isopentane and methanol, k_ij = 0) inside its liquid-liquid binodal next to
+ * the spinodal: the first trial stopped the stability test at a stationary point next to the feed
+ * (tm = -5.6e-7), from which no split converged, and the message wrongly suggested three phases
+ * (a binary at given T and P has three phases at one pressure only). The test now goes on to a
+ * clearly negative tm (-0.004, the liquid-like trial).</li>
+ * </ul>
+ */
+class HardFlashStatesTest {
+
+    private static CubicModel model(EosVariant v, String... names) {
+        List<Component> cs = new ArrayList<>();
+        for (String n : names) {
+            cs.add(ComponentLibrary.builtIn().get(n));
+        }
+        return new CubicModel(v, cs, KijTable.builtIn().matrix(cs, v).kij());
+    }
+
+    private static void check(CubicModel m, double t, double p, double[] z) {
+        FlashResult r = new PTFlash(m).flash(t, p, z);
+        assertTrue(r.twoPhase(), r.toString());
+        MixturePhase a = r.phases().get(0);
+        MixturePhase b = r.phases().get(1);
+        double maxLnK = 0;
+        for (int i = 0; i < z.length; i++) {
+            double[] x = a.composition();
+            double[] y = b.composition();
+            assertEquals(z[i], a.amount() * x[i] + b.amount() * y[i], 1e-10, "mass balance of component " + i);
+            // ln f_i = ln x_i + ln phi_i (+ ln P, the same in both phases)
+            assertEquals(Math.log(x[i]) + a.lnPhi()[i], Math.log(y[i]) + b.lnPhi()[i], 1e-6, "fugacity " + i);
+            maxLnK = Math.max(maxLnK, Math.abs(Math.log(y[i] / x[i])));
+        }
+        assertTrue(maxLnK > 1e-3, "not the trivial solution: max |ln K| = " + maxLnK);
+    }
+
+    @Test
+    void binaryLiquidNextToItsSpinodal() {
+        CubicModel m = model(EosVariant.PRTWU, "isopentane", "methanol");
+        check(m, 309.28616194054536, 4518796.73324866, new double[] {0.31980342829072805, 0.6801965717092718});
+        // the same split at a feed well inside the two-liquid region: the binodal does not move with the feed
+        FlashResult inside = new PTFlash(m).flash(309.28616194054536, 4518796.73324866, new double[] {0.25, 0.75});
+        FlashResult edge = new PTFlash(m).flash(309.28616194054536, 4518796.73324866,
+                new double[] {0.31980342829072805, 0.6801965717092718});
+        assertEquals(inside.phases().get(0).composition()[0], edge.phases().get(0).composition()[0], 1e-7);
+        assertEquals(inside.phases().get(1).composition()[0], edge.phases().get(1).composition()[0], 1e-7);
+    }
+
+    @Test
+    void acetoneDecaneAmmonia() {
+        check(model(EosVariant.PR78, "acetone", "n-decane", "ammonia"), 201.3341535821323, 524859.963790825,
+                new double[] {0.29016232200724945, 0.05158154621955622, 0.6582561317731944});
+    }
+
+    @Test
+    void heptaneBenzeneAmmoniaMethanol() {
+        check(model(EosVariant.SRK, "n-heptane", "benzene", "ammonia", "methanol"), 213.3246098597691,
+                2133690.8965386, new double[] {0.11615515253827721, 0.34323151601705437, 0.3532683169979448,
+                        0.18734501444672363});
+    }
+}
