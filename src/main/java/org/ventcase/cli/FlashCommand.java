@@ -74,7 +74,8 @@ final class FlashCommand implements Callable<Integer> {
                 mm.model().variant().displayName()));
         tx.row("Stability of the feed", f.stability().stable() ? "stable (one phase)"
                 : String.format(Locale.ROOT, "unstable (tangent-plane distance %.4g): splits", f.stability().minimumTpd()));
-        tx.row("Vapour fraction (molar)", "%.6f", f.vaporFraction());
+        boolean twoLiquids = f.twoPhase() && !f.phases().get(1).isVapor();
+        tx.row(twoLiquids ? "Lighter-liquid fraction (molar)" : "Vapour fraction (molar)", "%.6f", f.vaporFraction());
         if (us) {
             tx.row("Feed enthalpy", "%.1f Btu/lbmol (ideal gas at 77 F = 0)",
                     CustomaryUnits.jPerMolToBtuPerLbmol(f.enthalpyJmol()));

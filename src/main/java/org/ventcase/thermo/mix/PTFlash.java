@@ -609,8 +609,23 @@ public final class PTFlash {
             zL = zV;
             zV = tz;
         }
+        // Both phases clearly liquid-like (molar volume under half of v* = (Zc/Omega_b) b, the
+        // volume at the equation's critical point; a vapour lies above v*, and the half keeps a dense
+        // near-critical vapour out): a liquid-liquid split, and the lighter phase is a liquid too.
+        double vStar = model.variant().zc() / model.variant().omegaB() * mV.b();
+        boolean twoLiquids = zV * R * t / p < 0.5 * vStar;
+        PhaseLabel lighter = PhaseLabel.VAPOR;
+        if (twoLiquids) {
+            lighter = PhaseLabel.LIQUID;
+            crit = String.format(Locale.US, "two liquids in equilibrium (the lighter one's molar volume %.4g m3/mol "
+                    + "is under half of v* = (Zc/Omega_b) b = %.4g m3/mol): listed denser first", zV * R * t / p, vStar);
+            warnings.add(String.format(Locale.US, "Liquid-liquid split: both phases are liquids; the second phase "
+                    + "(%.4g of the feed, molar) is the lighter liquid, not a vapour, and the 'vapour fraction' is its "
+                    + "amount. Relief methods that assume a boiling liquid and its vapour do not apply to this state "
+                    + "without review.", beta));
+        }
         MixturePhase liq = phase(t, p, x, 1 - beta, mL, zL, PhaseLabel.LIQUID, crit, basis, warnings);
-        MixturePhase vap = phase(t, p, y, beta, mV, zV, PhaseLabel.VAPOR, crit, basis, warnings);
+        MixturePhase vap = phase(t, p, y, beta, mV, zV, lighter, crit, basis, warnings);
         double sk = 0;
         for (int i = 0; i < z.length; i++) {
             double lk = Math.log(y[i] / x[i]);

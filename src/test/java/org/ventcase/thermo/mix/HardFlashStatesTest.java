@@ -63,6 +63,20 @@ class HardFlashStatesTest {
                 new double[] {0.31980342829072805, 0.6801965717092718});
         assertEquals(inside.phases().get(0).composition()[0], edge.phases().get(0).composition()[0], 1e-7);
         assertEquals(inside.phases().get(1).composition()[0], edge.phases().get(1).composition()[0], 1e-7);
+        // at 45 bar both are liquids (Z 0.097 and 0.128): the lighter one is not called vapour
+        assertEquals(org.ventcase.thermo.PhaseLabel.LIQUID, edge.phases().get(0).label());
+        assertEquals(org.ventcase.thermo.PhaseLabel.LIQUID, edge.phases().get(1).label(), edge.phases().get(1).labelCriterion());
+        assertTrue(edge.warnings().stream().anyMatch(w -> w.startsWith("Liquid-liquid split")), edge.warnings().toString());
+    }
+
+    /** The same rule leaves an ordinary vapour-liquid split alone (propane and n-butane, 300 K, 6 bar). */
+    @Test
+    void anOrdinaryBoilingSplitKeepsItsVapour() {
+        FlashResult r = new PTFlash(model(EosVariant.PRTWU, "propane", "n-butane")).flash(300, 6e5,
+                new double[] {0.5, 0.5});
+        assertTrue(r.twoPhase(), r.toString());
+        assertEquals(org.ventcase.thermo.PhaseLabel.VAPOR, r.phases().get(1).label());
+        assertTrue(r.warnings().stream().noneMatch(w -> w.startsWith("Liquid-liquid split")), r.warnings().toString());
     }
 
     @Test
