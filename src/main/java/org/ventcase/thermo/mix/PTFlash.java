@@ -104,7 +104,18 @@ public final class PTFlash {
                 lnK[i] = wil[i];
             }
         }
-        Split s = split(at, p, z, lnK);
+        Split s;
+        try {
+            s = split(at, p, z, lnK);
+        } catch (ConvergenceException e) {
+            // substitution and Newton from the K-values did not converge (seen: ammonia and water at
+            // 272.5 K, 1.34 bar, where substitution kept a vapour fraction outside (0, 1)): descent
+            // from the trial phase may still find the split; if not, the first failure is reported
+            s = splitByDescent(at, p, z, w, stab.incipientVapourLike());
+            if (s == null) {
+                throw e;
+            }
+        }
         if (s == null) {
             // Substitution can fall back to the trivial solution from a trial phase that is only just
             // unstable. Gibbs-energy descent cannot: started at a small amount of the trial phase,

@@ -79,6 +79,16 @@ class HardFlashStatesTest {
         assertTrue(r.warnings().stream().noneMatch(w -> w.startsWith("Liquid-liquid split")), r.warnings().toString());
     }
 
+    /**
+     * Ammonia and water at 272.5 K and 1.34 bar (seed 11 of the sweep): substitution kept a vapour
+     * fraction outside (0, 1) and the flash failed; descent from the trial phase now splits it.
+     */
+    @Test
+    void ammoniaWaterWhereSubstitutionLeavesTheUnitInterval() {
+        check(model(EosVariant.PR78, "ammonia", "water"), 272.50153515816703, 134052.3786873952,
+                new double[] {0.5850698432366828, 0.4149301567633172});
+    }
+
     @Test
     void acetoneDecaneAmmonia() {
         check(model(EosVariant.PR78, "acetone", "n-decane", "ammonia"), 201.3341535821323, 524859.963790825,
