@@ -173,22 +173,7 @@ public final class PTFlash {
         } catch (ConvergenceException e) {
             return null;
         }
-        double[] lnK = new double[n];
-        double sk = 0;
-        for (int i = 0; i < n; i++) {
-            lnK[i] = x[i] > 0 && y[i] > 0 ? Math.log(y[i] / x[i]) : 0;
-            if (z[i] > 0) {
-                sk += lnK[i] * lnK[i];
-            }
-        }
-        if (sk < 1e-8 || !(beta > 0 && beta < 1)) {
-            return null;
-        }
-        s.beta = beta;
-        s.x = x;
-        s.y = y;
-        s.lnK = lnK;
-        return s;
+        return beta > 0 && beta < 1 ? converged(s, beta, x, y, z) : null;
     }
 
     private static int present(double[] z) {
@@ -318,6 +303,13 @@ public final class PTFlash {
                 return null;
             }
         }
+        return converged(s, beta, x, y, z);
+    }
+
+    /** Fills in a converged split, or null where it is the trivial solution (sum of ln K_i^2 < 1e-8). */
+    private static Split converged(Split s, double beta, double[] x, double[] y, double[] z) {
+        int n = z.length;
+        double[] lnK = new double[n];
         double sk = 0;
         for (int i = 0; i < n; i++) {
             lnK[i] = Math.log(y[i] / x[i]);
