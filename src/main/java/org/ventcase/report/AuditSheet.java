@@ -13,7 +13,7 @@ import org.ventcase.audit.VesselAudit;
 import org.ventcase.casefile.Templates;
 import org.ventcase.report.SheetModel.Row;
 import org.ventcase.report.SheetModel.Table;
-import org.ventcase.units.CustomaryUnits;
+import org.ventcase.report.DisplayUnits.Kind;
 
 /**
  * The summary PDF of an inventory audit: title block, the counts, totals by area, by component and
@@ -62,20 +62,24 @@ public final class AuditSheet {
         CalculationSheet.write(model(r, info, units), target, size);
     }
 
-    // Masses in t (SI) or lb (US); factors from CustomaryUnits (exact, NIST SP 811).
+    // Masses in t (SI) or lb (US); the US factors are DisplayUnits'.
     private String t(double kg) {
-        return us ? String.format(Locale.ROOT, "%,.0f lb", kg / CustomaryUnits.KG_PER_LB)
+        return us ? String.format(Locale.ROOT, "%,.0f lb", usValue(Kind.MASS, kg))
                 : String.format(Locale.ROOT, "%,.1f t", kg / 1000.0);
     }
 
     private String kgh(double kgPerS) {
-        return us ? String.format(Locale.ROOT, "%,.0f lb/h", kgPerS * 3600 / CustomaryUnits.KG_PER_LB)
+        return us ? String.format(Locale.ROOT, "%,.0f lb/h", usValue(Kind.MASS_FLOW, kgPerS))
                 : String.format(Locale.ROOT, "%,.0f kg/h", kgPerS * 3600);
     }
 
     private String mm2(double m2) {
-        return us ? String.format(Locale.ROOT, "%,.3f in²", m2 * 1e6 / CustomaryUnits.MM2_PER_IN2)
+        return us ? String.format(Locale.ROOT, "%,.3f in²", usValue(Kind.ORIFICE_AREA, m2))
                 : String.format(Locale.ROOT, "%,.0f mm²", m2 * 1e6);
+    }
+
+    private static double usValue(Kind k, double si) {
+        return DisplayUnits.convert(k, si, UnitSystem.US);
     }
 
     /** A sentence written in SI, US first on a US sheet. */
@@ -182,8 +186,10 @@ public final class AuditSheet {
         if (!r.byArea().isEmpty()) {
             List<Figure.Bar> bars = new ArrayList<>();
             for (AuditResult.Group g : r.byArea()) {
-                double per = us ? 1000 * CustomaryUnits.KG_PER_LB : 1000;
-                bars.add(new Figure.Bar(g.name(), new double[] {g.liquidMassKg() / per, g.vapourMassKg() / per},
+                double[] bar = us ? new double[] {usValue(Kind.MASS, g.liquidMassKg()) / 1000,
+                        usValue(Kind.MASS, g.vapourMassKg()) / 1000}
+                        : new double[] {g.liquidMassKg() / 1000, g.vapourMassKg() / 1000};
+                bars.add(new Figure.Bar(g.name(), bar,
                         t(g.totalMassKg())));
             }
             figures.add(new Figure.BarChart("Inventory by area (liquid and vapour), sums of the single-vessel "

@@ -90,7 +90,8 @@ public final class DisplayUnits {
         return String.format(Locale.ROOT, "%." + decimals(k, s) + "f\u00A0%s", convert(k, si, s), unit(k, s));
     }
 
-    private static double convert(Kind k, double si, UnitSystem s) {
+    /** An SI value of the kind in the system's display unit (package use: QuantityText). */
+    static double convert(Kind k, double si, UnitSystem s) {
         boolean us = s == UnitSystem.US;
         switch (k) {
             case PRESSURE_ABS:

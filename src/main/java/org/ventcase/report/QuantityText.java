@@ -5,6 +5,7 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 import org.ventcase.common.PhysicalConstants;
+import org.ventcase.report.DisplayUnits.Kind;
 import org.ventcase.units.CustomaryUnits;
 
 /**
@@ -80,73 +81,77 @@ public final class QuantityText {
         return before.endsWith("within ") || before.endsWith("by ");
     }
 
+    // The factors are DisplayUnits' (one place): each SI text unit is read as its SI value first.
     private static String us(double v, String unit, boolean difference) {
         if (unit.startsWith("K (")) {
             unit = "K";
         }
         switch (unit) {
             case "kPa abs":
-                return f(CustomaryUnits.paToPsi(v * 1e3), 2) + " psia";
+                return f(usValue(Kind.PRESSURE_ABS, v * 1e3), 2) + " psia";
             case "kPa gauge":
-                return f(CustomaryUnits.paToPsi(v * 1e3), 2) + " psig";
+                return f(usValue(Kind.PRESSURE_GAUGE, v * 1e3), 2) + " psig";
             case "kPa":
-                return f(CustomaryUnits.paToPsi(v * 1e3), 2) + " psi";
+                return f(usValue(Kind.PRESSURE_DIFFERENCE, v * 1e3), 2) + " psi";
             case "bar abs":
             case "bara":
-                return f(CustomaryUnits.paToPsi(v * 1e5), 2) + " psia";
+                return f(usValue(Kind.PRESSURE_ABS, v * 1e5), 2) + " psia";
             case "bar gauge":
             case "barg":
-                return f(CustomaryUnits.paToPsi(v * 1e5), 2) + " psig";
+                return f(usValue(Kind.PRESSURE_GAUGE, v * 1e5), 2) + " psig";
             case "bar":
-                return f(CustomaryUnits.paToPsi(v * 1e5), 2) + " psi";
+                return f(usValue(Kind.PRESSURE_DIFFERENCE, v * 1e5), 2) + " psi";
             case "Pa abs":
-                return g(CustomaryUnits.paToPsi(v)) + " psia";
+                return g(usValue(Kind.PRESSURE_ABS, v)) + " psia";
             case "Pa gauge":
-                return g(CustomaryUnits.paToPsi(v)) + " psig";
+                return g(usValue(Kind.PRESSURE_GAUGE, v)) + " psig";
             case "Pa":
-                return g(CustomaryUnits.paToPsi(v)) + " psi";
+                return g(usValue(Kind.PRESSURE_DIFFERENCE, v)) + " psi";
             case "K":
-                return difference ? g(CustomaryUnits.kDiffToF(v)) + " °F"
-                        : f(CustomaryUnits.kToRankine(v) - 459.67, 2) + " °F";
+                return difference ? g(CustomaryUnits.kDiffToF(v)) + " °F" : f(usValue(Kind.TEMPERATURE, v), 2) + " °F";
             case "C":
-                return f(CustomaryUnits.kToRankine(v + PhysicalConstants.ZERO_CELSIUS_K) - 459.67, 2) + " °F";
+                return f(usValue(Kind.TEMPERATURE, v + PhysicalConstants.ZERO_CELSIUS_K), 2) + " °F";
             case "kg/kmol":
-                return g(v) + " lb/lbmol";
+                return g(usValue(Kind.MOLAR_MASS, v)) + " lb/lbmol";
             case "kmol":
-                return g(v * 1e3 / CustomaryUnits.MOL_PER_LBMOL) + " lbmol";
+                return g(usValue(Kind.AMOUNT, v * 1e3)) + " lbmol";
             case "mol":
-                return g(v / CustomaryUnits.MOL_PER_LBMOL) + " lbmol";
+                return g(usValue(Kind.AMOUNT, v)) + " lbmol";
             case "kg/m3":
-                return g(v * Math.pow(CustomaryUnits.M_PER_FT, 3) / CustomaryUnits.KG_PER_LB) + " lb/ft3";
+                return g(usValue(Kind.DENSITY, v)) + " lb/ft3";
             case "kg/h":
-                return g(v / CustomaryUnits.KG_PER_LB) + " lb/h";
+                return g(usValue(Kind.MASS_FLOW, v / 3600)) + " lb/h";
             case "kg/s":
-                return g(v / CustomaryUnits.KG_PER_LB) + " lb/s";
+                return g(usValue(Kind.MASS_FLOW, v) / 3600) + " lb/s";
             case "kg":
-                return g(v / CustomaryUnits.KG_PER_LB) + " lb";
+                return g(usValue(Kind.MASS, v)) + " lb";
             case "kJ/kg":
-                return g(v * 1e3 / CustomaryUnits.J_PER_KG_PER_BTU_PER_LB) + " Btu/lb";
+                return g(usValue(Kind.SPECIFIC_ENERGY, v * 1e3)) + " Btu/lb";
             case "kW":
-                return g(v * 1e3 / CustomaryUnits.W_PER_BTU_PER_H) + " Btu/h";
+                return g(usValue(Kind.POWER, v * 1e3)) + " Btu/h";
             case "mm2":
-                return g(v / CustomaryUnits.MM2_PER_IN2) + " in2";
+                return g(usValue(Kind.ORIFICE_AREA, v * 1e-6)) + " in2";
             case "m3/kmol":
                 return g(CustomaryUnits.m3PerMolToFt3PerLbmol(v / 1e3)) + " ft3/lbmol";
             case "m3/h":
-                return g(v / Math.pow(CustomaryUnits.M_PER_FT, 3)) + " ft3/h";
+                return g(usValue(Kind.VOLUME, v)) + " ft3/h";
             case "m3/s":
                 return g(v / CustomaryUnits.M3_PER_US_GAL * 60) + " US gal/min";
             case "m3":
-                return g(v / Math.pow(CustomaryUnits.M_PER_FT, 3)) + " ft3";
+                return g(usValue(Kind.VOLUME, v)) + " ft3";
             case "m2":
-                return g(v / CustomaryUnits.M2_PER_FT2) + " ft2";
+                return g(usValue(Kind.AREA, v)) + " ft2";
             case "m":
-                return g(v / CustomaryUnits.M_PER_FT) + " ft";
+                return g(usValue(Kind.LENGTH, v)) + " ft";
             case "L/min":
                 return g(v * 1e-3 / CustomaryUnits.M3_PER_US_GAL) + " US gal/min";
             default:
                 throw new IllegalStateException(unit);
         }
+    }
+
+    private static double usValue(Kind k, double si) {
+        return DisplayUnits.convert(k, si, UnitSystem.US);
     }
 
     private static String f(double v, int decimals) {
