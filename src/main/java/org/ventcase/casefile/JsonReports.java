@@ -161,6 +161,8 @@ public final class JsonReports {
         n.set("vapor", phase(s.vapor()));
         n.put("latentHeat_J_kg", s.latentHeatJkg());
         n.put("latentHeat_J_mol", s.latentHeatJmol());
+        n.put("latentHeatSource", s.latentHeatAnchored() ? s.latentHeatSource() : "equation of state, h_V - h_L");
+        n.put("latentHeatCubic_J_mol", s.cubicLatentHeatJmol());
         n.put("rackettLiquidDensity_kg_m3", s.rackettLiquidDensity());
         n.put("iterations", s.iterations());
         n.set("warnings", strings(s.warnings()));

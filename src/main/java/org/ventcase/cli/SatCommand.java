@@ -89,9 +89,11 @@ final class SatCommand implements Callable<Integer> {
             tx.row("Liquid density", Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.DENSITY, s.liquid().density()))
                     + " (" + s.liquid().densityBasis().label() + ")");
             tx.row("Vapour density", Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.DENSITY, s.vapor().density()))
-                    + " (" + s.vapor().densityBasis().label() + ")");
+                    + " (" + s.vapor().densityBasis().label() + anchoredVapour(s,
+                    v -> Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.DENSITY, v))) + ")");
             tx.row("Latent heat", Text.plain(u.format(org.ventcase.report.DisplayUnits.Kind.SPECIFIC_ENERGY,
-                    s.latentHeatJkg())));
+                    s.latentHeatJkg())) + anchoredLatent(s,
+                    v -> Text.plain(u.plain(org.ventcase.report.DisplayUnits.Kind.SPECIFIC_ENERGY, v))));
             Text.modelRows(tx, s.variant(), c, u);
             tx.us(true).warnings(s.warnings());
             return ExitCode.OK;
@@ -103,11 +105,29 @@ final class SatCommand implements Callable<Integer> {
         tx.row("Liquid density", "%.4g kg/m3 (%s; cubic %.4g; Rackett %.4g)", s.liquid().density(),
                 s.liquid().densityBasis().label(),
                 c.molarMass() * 1e-3 / s.liquid().molarVolumeCubic(), s.rackettLiquidDensity());
-        tx.row("Vapour density", "%.4g kg/m3 (%s)", s.vapor().density(), s.vapor().densityBasis().label());
-        tx.row("Latent heat", "%.1f kJ/kg (%.1f J/mol)", s.latentHeatJkg() / 1e3, s.latentHeatJmol());
+        tx.row("Vapour density", "%.4g kg/m3 (%s%s)", s.vapor().density(), s.vapor().densityBasis().label(),
+                anchoredVapour(s, v -> String.format(Locale.ROOT, "%.4g kg/m3", v)));
+        tx.row("Latent heat", "%.1f kJ/kg (%.1f J/mol)%s", s.latentHeatJkg() / 1e3, s.latentHeatJmol(),
+                anchoredLatent(s, v -> String.format(Locale.ROOT, "%.1f kJ/kg", v / 1e3)));
         Text.modelRows(tx, s.variant(), c);
         tx.warnings(s.warnings());
         return ExitCode.OK;
+    }
+
+    private static String anchoredVapour(org.ventcase.thermo.SaturationResult s,
+                                         java.util.function.DoubleFunction<String> density) {
+        return s.latentHeatAnchored() && s.vapor().densityBasis() == org.ventcase.thermo.DensityBasis.TRANSLATED
+                ? "; Clapeyron from the latent heat; cubic root "
+                        + density.apply(s.component().molarMass() * 1e-3 / s.vapor().molarVolumeCubic())
+                : "";
+    }
+
+    private static String anchoredLatent(org.ventcase.thermo.SaturationResult s,
+                                         java.util.function.DoubleFunction<String> energy) {
+        return s.latentHeatAnchored()
+                ? "  [" + s.latentHeatSource() + "; the cubic alone: "
+                        + energy.apply(s.cubicLatentHeatJmol() / (s.component().molarMass() * 1e-3)) + "]"
+                : "";
     }
 
     private int mixture(org.ventcase.thermo.Composition parsed) {

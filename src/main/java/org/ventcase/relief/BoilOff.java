@@ -274,8 +274,7 @@ public final class BoilOff {
         }
         BoilingState ps = states.get(peak);
         double wPeak = loads.get(peak);
-        RelievedFluid peakVapour = RelievedFluid.of(RelievedFluid.Phase.VAPOUR, spec, ps.vapourProps(),
-                OptionalDouble.of(ps.latentHeatJPerKg()), MixtureFire.LATENT_HEAT_DEFINITION, OptionalDouble.empty(), "");
+        RelievedFluid peakVapour = RelievedFluid.saturatedVapour(spec, ps, OptionalDouble.of(ps.latentHeatJPerKg()));
         GasSizingResult peakSizing = ScenarioSupport.sizeGas(wPeak, peakVapour, in.device());
         warnings.addAll(peakSizing.warnings());
         double massF = 0;

@@ -41,10 +41,18 @@ import org.ventcase.thermo.mix.SaturationPoints;
  * @param lnK           ln K_i (copied), for warm starts
  * @param method        how the bubble point was found
  * @param warnings      what the user must know
+ * @param vapourDensity saturated-vapour density on the density basis, kg/m3: the vapour root's,
+ *                      except for a pure fluid whose latent heat is anchored on a correlation
+ *                      ({@link org.ventcase.thermo.LatentHeatCorrelation}), where on the translated
+ *                      basis it follows from that latent heat by the Clapeyron equation
+ * @param latentHeatSource "" when L is the equation of state's; else the correlation's citation
+ *                      (hVapourJmol is then hLiquidJmol + L of the correlation)
+ * @param cubicLatentHeatJmol the equation of state's own H_V - H_L, J/mol
  */
 public record BoilingState(double temperatureK, double pressurePa, double[] liquid, double[] vapour,
                            FluidProperties liquidProps, FluidProperties vapourProps, double hLiquidJmol,
-                           double hVapourJmol, double[] lnK, String method, List<String> warnings) {
+                           double hVapourJmol, double[] lnK, String method, List<String> warnings,
+                           double vapourDensity, String latentHeatSource, double cubicLatentHeatJmol) {
 
     public BoilingState {
         liquid = liquid.clone();
@@ -66,6 +74,16 @@ public record BoilingState(double temperatureK, double pressurePa, double[] liqu
     @Override
     public double[] lnK() {
         return lnK.clone();
+    }
+
+    /** Whether the latent heat is anchored on a correlation (a pure fluid, see latentHeatSource). */
+    public boolean latentHeatAnchored() {
+        return !latentHeatSource.isEmpty();
+    }
+
+    /** The equation of state's own latent heat, J per kg of vapour. */
+    public double cubicLatentHeatJPerKg() {
+        return cubicLatentHeatJmol / (vapourProps.molarMass() * 1e-3);
     }
 
     /** L = (H_V - H_L) / M_V, J per kg of vapour (see the class comment). */
@@ -114,10 +132,10 @@ public record BoilingState(double temperatureK, double pressurePa, double[] liqu
         double[] lnK = new double[n];
         List<String> warnings = new ArrayList<>();
         String method;
+        SaturationResult sat = null;
         if (present == 1) {
             Component c = model.components().get(only);
-            SaturationResult sat = new PureSaturation(CubicModel.pure(model.variant(), c)).atPressure(p,
-                    DensityBasis.CUBIC);
+            sat = new PureSaturation(CubicModel.pure(model.variant(), c)).atPressure(p, DensityBasis.CUBIC);
             t = sat.temperatureK();
             y = new double[n];
             y[only] = 1.0;
@@ -137,7 +155,25 @@ public record BoilingState(double temperatureK, double pressurePa, double[] liqu
         FluidProperties vp = model.properties(t, p, y, PhaseRequest.VAPOR, basis);
         warnings.addAll(lp.warnings());
         warnings.addAll(vp.warnings());
-        return new BoilingState(t, p, x, y, lp, vp, enthalpy(model, lp), enthalpy(model, vp), lnK, method, warnings);
+        double hL = enthalpy(model, lp);
+        double hV = enthalpy(model, vp);
+        double rhoV = vp.density();
+        String source = "";
+        if (sat != null && sat.latentHeatAnchored()) {
+            // For a pure fluid H_V - H_L is the cubic's latent heat on either basis (the translation
+            // term -P c is the same in both phases); the anchor replaces it, and on the translated
+            // basis scales the volume of vaporisation by the same factor (Clapeyron on the model's
+            // own vapour-pressure curve, see LatentHeatCorrelation).
+            hV = hL + sat.latentHeatJmol();
+            source = sat.latentHeatSource();
+            if (basis == DensityBasis.TRANSLATED) {
+                double dvCubic = sat.vapor().molarVolumeCubic() - sat.liquid().molarVolumeCubic();
+                double vV = lp.molarVolume() + sat.latentHeatJmol() / sat.cubicLatentHeatJmol() * dvCubic;
+                rhoV = vp.molarMass() * 1e-3 / vV;
+            }
+        }
+        return new BoilingState(t, p, x, y, lp, vp, hL, hV, lnK, method, warnings, rhoV, source,
+                enthalpy(model, vp) - hL);
     }
 
     /**

@@ -36,7 +36,17 @@ public final class MixtureFire {
     public static final String LATENT_HEAT_DEFINITION = "L = (H_V(T_b, P1, y) - H_L(T_b, P1, x)) / M_V: incipient "
             + "vapour minus liquid molar enthalpy at the bubble point, per kg of vapour";
 
+    /** The definition of L for a pure fluid whose latent heat is anchored on a correlation. */
+    public static final String ANCHORED_LATENT_HEAT_DEFINITION = "one component: T1 = Tsat(P1) by equal fugacity; L "
+            + "from the latent-heat correlation at T1; saturated-vapour density rho_V = M / (v_L + (L / L_cubic) "
+            + "(v_V - v_L)_cubic), the Clapeyron equation on the model's own vapour-pressure curve";
+
     private MixtureFire() {
+    }
+
+    /** The latent-heat definition that applies to a boiling state. */
+    static String latentHeatDefinition(BoilingState b) {
+        return b.latentHeatAnchored() ? ANCHORED_LATENT_HEAT_DEFINITION : LATENT_HEAT_DEFINITION;
     }
 
     /** The relief load at the initial bubble point, without the vessel and heat-input steps. */
@@ -53,7 +63,7 @@ public final class MixtureFire {
         }
         LatentHeatGuard.Result lh = spec.allHydrocarbon() ? LatentHeatGuard.apply(l)
                 : new LatentHeatGuard.Result(l, l, false, "");
-        double disp = 1.0 - b.vapourProps().density() / b.liquidProps().density();
+        double disp = 1.0 - b.vapourDensity() / b.liquidProps().density();
         double w = heatW / lh.usedJPerKg() * (refine ? disp : 1.0);
         return new Load(b, lh, disp, w);
     }
@@ -127,7 +137,8 @@ public final class MixtureFire {
         }
         double liquidMass = vs.liquidVolume() * b.liquidProps().density();
         trace.add(TraceStep.of("Relieving temperature and latent heat")
-                .equation("T1 = bubble temperature of the liquid at P1; " + LATENT_HEAT_DEFINITION)
+                .equation(b.latentHeatAnchored() ? ANCHORED_LATENT_HEAT_DEFINITION
+                        : "T1 = bubble temperature of the liquid at P1; " + LATENT_HEAT_DEFINITION)
                 .source(spec.eos().displayName() + " (" + spec.eos().citation() + "); " + b.method())
                 .in("Liquid composition x", ScenarioSupport.fractions(x))
                 .out("Relieving temperature T1", ScenarioSupport.kelvinC(b.temperatureK()))
@@ -135,8 +146,14 @@ public final class MixtureFire {
                 .out("H_L, H_V", "%.1f, %.1f J/mol", b.hLiquidJmol(), b.hVapourJmol())
                 .out("Liquid density", "%.2f kg/m3 (%s)", b.liquidProps().density(),
                         b.liquidProps().densityBasis().label())
-                .out("Vapour density", "%.3f kg/m3", b.vapourProps().density())
-                .out("Latent heat (EOS)", "%.2f kJ/kg", ld.latent().computedJPerKg() / 1e3)
+                .out("Vapour density", "%.3f kg/m3%s", b.vapourDensity(), b.latentHeatAnchored()
+                        && b.vapourDensity() != b.vapourProps().density()
+                        ? " (saturated vapour, by the Clapeyron equation from the latent heat below)" : "")
+                .out(b.latentHeatAnchored() ? "Latent heat (correlation)" : "Latent heat (EOS)", "%.2f kJ/kg%s",
+                        ld.latent().computedJPerKg() / 1e3, b.latentHeatAnchored()
+                                ? " (" + b.latentHeatSource() + "; the cubic alone: "
+                                        + String.format(Locale.US, "%.2f",
+                                        b.cubicLatentHeatJPerKg() / 1e3) + " kJ/kg)" : "")
                 .out("Latent heat used", "%.2f kJ/kg", ld.latent().usedJPerKg() / 1e3)
                 .out("Liquid inventory at P1", "%.0f kg", liquidMass).build());
         trace.add(TraceStep.of("Relief load")
@@ -147,8 +164,7 @@ public final class MixtureFire {
                         in.subtractDisplacedVapour() ? "" : " (not applied)")
                 .out("W", "%.1f kg/h", ld.w() * 3600).build());
 
-        RelievedFluid vap = RelievedFluid.of(RelievedFluid.Phase.VAPOUR, spec, b.vapourProps(),
-                OptionalDouble.of(ld.latent().usedJPerKg()), LATENT_HEAT_DEFINITION, OptionalDouble.empty(), "");
+        RelievedFluid vap = RelievedFluid.saturatedVapour(spec, b, OptionalDouble.of(ld.latent().usedJPerKg()));
         trace.add(ScenarioSupport.fluidStep("Relieved vapour at relieving conditions", vap));
 
         GasSizingResult gs = ScenarioSupport.sizeGas(ld.w(), vap, in.device());

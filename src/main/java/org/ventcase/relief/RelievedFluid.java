@@ -106,6 +106,28 @@ public record RelievedFluid(Phase phase, double temperatureK, double pressurePa,
                 latentDefinition, viscosity, viscositySource, spec.eos(), prov, w, fp.roots().physical());
     }
 
+    /**
+     * The saturated vapour of a boiling state: the vapour root's properties, with the density of
+     * the boiling state (which differs from the root's only where the latent heat is anchored on a
+     * correlation, see {@link BoilingState#vapourDensity()}). Z stays the cubic root's.
+     */
+    static RelievedFluid saturatedVapour(MixtureSpec spec, BoilingState b, OptionalDouble latent) {
+        RelievedFluid f = of(Phase.VAPOUR, spec, b.vapourProps(), latent, MixtureFire.latentHeatDefinition(b),
+                OptionalDouble.empty(), "");
+        if (b.vapourDensity() == f.density) {
+            return f;
+        }
+        org.ventcase.common.LazyText prov = f.provenanceText;
+        org.ventcase.common.LazyText withAnchor = org.ventcase.common.LazyText.of(() -> prov.get()
+                + "; saturated-vapour density by the Clapeyron equation from the latent-heat correlation (the "
+                + "cubic's vapour root gives " + String.format(Locale.US, "%.4g", b.vapourProps().density())
+                + " kg/m3); Z is the cubic root's, as the API 520 gas equation takes it");
+        return new RelievedFluid(f.phase, f.temperatureK, f.pressurePa, f.componentNames, f.composition,
+                f.molarMass, f.z, b.vapourDensity(), f.densityBasis, f.kIdeal, f.isentropicExponent,
+                f.latentHeatJPerKg, f.latentHeatDefinition, f.viscosityPaS, f.viscositySource, f.eos, withAnchor,
+                f.warnings, f.realRoots);
+    }
+
     private static String cpSources(MixtureSpec spec, double[] x) {
         StringBuilder sb = new StringBuilder();
         for (int i = 0; i < x.length; i++) {

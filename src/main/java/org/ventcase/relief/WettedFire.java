@@ -125,14 +125,18 @@ public final class WettedFire {
         double displacement = 1.0 - rel.vapor().density() / rel.liquid().density();
         double w = heat.heatW() / l * (in.subtractDisplacedVapour() ? displacement : 1.0);
         trace.add(TraceStep.of("Relieving temperature and latent heat")
-                .equation("T1 = Tsat(P1) by equal fugacity; L = h_V - h_L at T1, P1")
+                .equation(rel.latentHeatAnchored()
+                        ? "T1 = Tsat(P1) by equal fugacity; L from the latent-heat correlation at T1 ("
+                                + rel.latentHeatSource() + ")"
+                        : "T1 = Tsat(P1) by equal fugacity; L = h_V - h_L at T1, P1")
                 .source(in.eos().displayName() + " (" + in.eos().citation() + ")")
                 .in("P1", kpa(p1) + " abs")
                 .out("Relieving temperature T1", kelvinC(rel.temperatureK()))
                 .out("Liquid density at T1", "%.2f kg/m3 (%s)", rel.liquid().density(),
                         rel.liquid().densityBasis().label())
                 .out("Vapour density at T1", "%.3f kg/m3", rel.vapor().density())
-                .out("Latent heat (EOS)", "%.2f kJ/kg", lh.computedJPerKg() / 1e3)
+                .out(rel.latentHeatAnchored() ? "Latent heat (correlation)" : "Latent heat (EOS)", "%.2f kJ/kg",
+                        lh.computedJPerKg() / 1e3)
                 .out("Latent heat used", "%.2f kJ/kg%s", l / 1e3,
                         lh.minimumApplied() ? " (published minimum for hydrocarbons)" : "").build());
         trace.add(TraceStep.of("Relief load")

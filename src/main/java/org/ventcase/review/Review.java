@@ -760,9 +760,9 @@ public final class Review {
                 }
             }
             gaugeState().ifPresent(g -> {
-                if (explains(q, c, g.vapourProps().density())) {
+                if (explains(q, c, g.vapourDensity())) {
                     add(out, "gauge-as-absolute", String.format(Locale.US, "The claimed vapour density is the "
-                            + "vapour's at P1 - P_atm (%s).", f(q, g.vapourProps().density())) + GAUGE_LOOK);
+                            + "vapour's at P1 - P_atm (%s).", f(q, g.vapourDensity())) + GAUGE_LOOK);
                 }
             });
         }

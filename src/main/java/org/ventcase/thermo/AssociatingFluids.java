@@ -21,11 +21,20 @@ final class AssociatingFluids {
     private AssociatingFluids() {
     }
 
-    /** The warning for a component, or "" for a fluid not listed. */
-    static String note(Component c) {
+    /** The warning for a component under the given model, or "" for a fluid not listed. */
+    static String note(Component c, EosVariant variant) {
         String f = BY_CAS.get(c.cas());
         if (f == null) {
             return "";
+        }
+        if (variant == EosVariant.PRTWU && LatentHeatCorrelation.find(c).isPresent()) {
+            return c.name() + ": a cubic equation of state does not describe hydrogen bonding in the vapour. For the "
+                    + "pure fluid at saturation the default model therefore takes the latent heat from a published "
+                    + "correlation (" + LatentHeatCorrelation.CITATION + ") and the saturated-vapour density from it "
+                    + "by the Clapeyron equation. Elsewhere the vapour is the cubic's: against reference equations "
+                    + "the cubic alone gives " + f + " at Tr 0.65-0.9 (docs/accuracy.md). So the Z used for sizing "
+                    + "may be as much too high (a larger area), and in a mixture the latent heat as much too high "
+                    + "(a fire relief load W = Q/L understated).";
         }
         return c.name() + ": a cubic equation of state does not describe hydrogen bonding in the vapour: against "
                 + "reference equations the default model gives " + f + " at Tr 0.65-0.9 (docs/accuracy.md); a fire "

@@ -123,7 +123,7 @@ public final class CubicModel {
         }
         this.shiftVaries = varies;
         for (Component c : this.components) {
-            String a = AssociatingFluids.note(c);
+            String a = AssociatingFluids.note(c, variant);
             if (!a.isEmpty()) {
                 notes.add(a);
             }

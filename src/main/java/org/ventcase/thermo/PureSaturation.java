@@ -330,7 +330,20 @@ public final class PureSaturation {
         }
         SaturationResult.PhaseState liq = new SaturationResult.PhaseState(s.zL, vl, vl - c, mw / 1e3 / (vl - c), used,
                 s.lnPhiL, s.hL);
-        SaturationResult.PhaseState vap = new SaturationResult.PhaseState(s.zV, vv, vv - c, mw / 1e3 / (vv - c), used,
+        double dh = s.hV - s.hL;
+        double vvUsed = vv - c;
+        double latent = dh;
+        String latentSource = "";
+        java.util.Optional<LatentHeatCorrelation.Anchored> anchored = LatentHeatCorrelation.anchor(model.variant(),
+                component, t, dh, vl - c, vv - vl);
+        if (anchored.isPresent()) {
+            latent = anchored.get().latentHeatJmol();
+            latentSource = LatentHeatCorrelation.CITATION;
+            if (used == DensityBasis.TRANSLATED) {
+                vvUsed = anchored.get().vapourMolarVolume();
+            }
+        }
+        SaturationResult.PhaseState vap = new SaturationResult.PhaseState(s.zV, vv, vvUsed, mw / 1e3 / vvUsed, used,
                 s.lnPhiV, s.hV);
         double rackett = rackettDensity(component, t);
         double dev = liq.density() / rackett - 1.0;
@@ -344,9 +357,8 @@ public final class PureSaturation {
                     dev < 0 ? "understated" : "overstated");
             warnings.add(densityCheck);
         }
-        double dh = s.hV - s.hL;
-        return new SaturationResult(model.variant(), component, t, s.p, liq, vap, dh, dh / (mw * 1e-3),
-                rackett, iterations, warnings, densityCheck);
+        return new SaturationResult(model.variant(), component, t, s.p, liq, vap, latent, latent / (mw * 1e-3),
+                rackett, iterations, warnings, densityCheck, latentSource, dh);
     }
 
     /**

@@ -19,15 +19,26 @@ import java.util.List;
  * @param warnings             what the user must know
  * @param densityCheck         the one of the warnings that is the Rackett cross-check of the liquid
  *                             density, "" when the densities agree
+ * @param latentHeatSource     where the latent heat comes from: "" for the equation of state's
+ *                             h_V - h_L, else the citation of the correlation it is anchored on
+ *                             ({@link LatentHeatCorrelation})
+ * @param cubicLatentHeatJmol  the equation of state's own h_V - h_L, J/mol (equal to latentHeatJmol
+ *                             when latentHeatSource is "")
  */
 public record SaturationResult(EosVariant variant, Component component, double temperatureK, double pressurePa,
                                PhaseState liquid, PhaseState vapor, double latentHeatJmol, double latentHeatJkg,
                                double rackettLiquidDensity, int iterations, List<String> warnings,
-                               String densityCheck) {
+                               String densityCheck, String latentHeatSource, double cubicLatentHeatJmol) {
 
     public SaturationResult {
         warnings = List.copyOf(warnings);
         densityCheck = densityCheck == null ? "" : densityCheck;
+        latentHeatSource = latentHeatSource == null ? "" : latentHeatSource;
+    }
+
+    /** Whether the latent heat (and the saturated-vapour volume) are anchored on a correlation. */
+    public boolean latentHeatAnchored() {
+        return !latentHeatSource.isEmpty();
     }
 
     /**
