@@ -311,6 +311,10 @@ public final class PureSaturation {
             }
         }
         double tr = t / model.tc(0);
+        String cold = model.variant() == EosVariant.PRTWU ? ColdEndVapourPressure.note(component, tr) : "";
+        if (!cold.isEmpty()) {
+            warnings.add(cold);
+        }
         if (tr > 0.9 && tr <= 0.95) {
             warnings.add(String.format(Locale.US,
                     "Tr = %.4f: above Tr 0.9 a cubic equation's vapour density and latent heat lose accuracy%s.", tr,
