@@ -93,10 +93,45 @@ public final class PTFlash {
         if (stab.stable()) {
             return singlePhase(t, p, z, basis, stab, warnings, 0, 0, "stability test: stable; single phase");
         }
+        Split s;
+        try {
+            s = splitFrom(at, p, z, stab);
+        } catch (ConvergenceException e) {
+            s = splitFromOtherTrials(at, p, z, lnPhiZ, stab);
+            if (s == null) {
+                throw e;
+            }
+        }
+        if (s == null) {
+            s = splitFromOtherTrials(at, p, z, lnPhiZ, stab);
+        }
+        if (s == null) {
+            throw new ConvergenceException("PT flash", 0, Double.NaN, String.format(Locale.US,
+                    "the stability test found the feed unstable (tm = %.3g, trial %s) but the phase split collapsed to "
+                            + "the trivial solution at T = %.6g K, P = %.6g Pa", stab.minimumTpd(), stab.trial(), t, p));
+        }
+        if (!(s.beta > 0 && s.beta < 1)) {
+            warnings.add(String.format(Locale.US,
+                    "the phase split converged to a vapour fraction of %.6g outside (0, 1) although the stability test "
+                            + "found the feed unstable; reported as a single phase", s.beta));
+            return singlePhase(t, p, z, basis, stab, warnings, s.ss, s.newton, "negative flash: single phase");
+        }
+        return twoPhase(t, p, z, s, basis, stab, warnings, "stability test, then successive substitution"
+                + (s.newton > 0 ? " and Newton on vapour moles" : "") + " (DEM-accelerated)");
+    }
+
+    /**
+     * The phase split started from one stability trial: substitution and Newton from its K-values,
+     * then Gibbs-energy descent from it; null where both collapse to the trivial solution.
+     *
+     * @throws ConvergenceException when substitution and Newton fail and descent finds nothing
+     */
+    private Split splitFrom(CubicModel.AtTemperature at, double p, double[] z, StabilityResult stab) {
+        int n = z.length;
         double[] w = stab.incipientComposition();
         double[] lnK = new double[n];
         double[] wil = new double[n];
-        PhaseEval.wilsonLnK(model, t, p, wil);
+        PhaseEval.wilsonLnK(model, at.t(), p, wil);
         for (int i = 0; i < n; i++) {
             if (z[i] > 0 && w[i] > 0) {
                 lnK[i] = stab.incipientVapourLike() ? Math.log(w[i] / z[i]) : Math.log(z[i] / w[i]);
@@ -122,19 +157,57 @@ public final class PTFlash {
             // where G lies below the feed's (tm < 0), each accepted step lowers G further.
             s = splitByDescent(at, p, z, w, stab.incipientVapourLike());
         }
-        if (s == null) {
-            throw new ConvergenceException("PT flash", 0, Double.NaN, String.format(Locale.US,
-                    "the stability test found the feed unstable (tm = %.3g, trial %s) but the phase split collapsed to "
-                            + "the trivial solution at T = %.6g K, P = %.6g Pa", stab.minimumTpd(), stab.trial(), t, p));
+        return s;
+    }
+
+    /**
+     * When the split from the best stability trial fails: the other unstable stationary points of
+     * the exhaustive test, most negative tm first (seen: sulfur dioxide, nitrogen, ammonia and water
+     * at 278 K, 2.2 bar with PR-Twu, where every trial is nearly pure water and substitution from
+     * it wanders), then the Wilson K-values. The first split with 0 < beta < 1 is kept; null if
+     * none.
+     */
+    private Split splitFromOtherTrials(CubicModel.AtTemperature at, double p, double[] z, double[] lnPhiZ,
+                                       StabilityResult tried) {
+        List<StabilityResult> starts = new ArrayList<>();
+        for (StabilityResult other : stability.unstableTrials(at, p, z, lnPhiZ)) {
+            if (!other.trial().equals(tried.trial())) {
+                starts.add(other);
+            }
         }
-        if (!(s.beta > 0 && s.beta < 1)) {
-            warnings.add(String.format(Locale.US,
-                    "the phase split converged to a vapour fraction of %.6g outside (0, 1) although the stability test "
-                            + "found the feed unstable; reported as a single phase", s.beta));
-            return singlePhase(t, p, z, basis, stab, warnings, s.ss, s.newton, "negative flash: single phase");
+        // Each trial also with the opposite orientation, K_i = w_i / z_i for a liquid-like trial
+        // (seen: the same state with the built-in ammonia/water k_ij, where the split is found only
+        // with the water-rich trial taken as the second phase of the Rachford-Rice pair).
+        List<StabilityResult> flipped = new ArrayList<>();
+        flipped.add(tried);
+        flipped.addAll(starts);
+        for (StabilityResult f : flipped) {
+            starts.add(new StabilityResult(f.temperatureK(), f.pressurePa(), false, f.minimumTpd(),
+                    f.incipientComposition(), !f.incipientVapourLike(), f.trial() + " (reversed)", 0, List.of()));
         }
-        return twoPhase(t, p, z, s, basis, stab, warnings, "stability test, then successive substitution"
-                + (s.newton > 0 ? " and Newton on vapour moles" : "") + " (DEM-accelerated)");
+        for (StabilityResult other : starts) {
+            try {
+                Split s = splitFrom(at, p, z, other);
+                if (s != null && s.beta > 0 && s.beta < 1) {
+                    return s;
+                }
+            } catch (ConvergenceException e) {
+                // try the next start
+            }
+        }
+        // Last, the Wilson K-values themselves (seen: the same state, where every trial is the
+        // same nearly pure water and substitution from it wanders; from Wilson K it converges).
+        double[] wil = new double[z.length];
+        PhaseEval.wilsonLnK(model, at.t(), p, wil);
+        try {
+            Split s = split(at, p, z, wil);
+            if (s != null && s.beta > 0 && s.beta < 1) {
+                return s;
+            }
+        } catch (ConvergenceException e) {
+            // no start left
+        }
+        return null;
     }
 
     /**

@@ -71,8 +71,24 @@ public final class StabilityAnalysis {
         return test(model.at(t), p, z, lnPhiZ, exhaustive);
     }
 
+    /**
+     * Every stationary point of the exhaustive test with tm below the instability threshold, most
+     * negative first: the other starts a phase split can try when the best one does not converge.
+     */
+    List<StabilityResult> unstableTrials(CubicModel.AtTemperature at, double p, double[] z, double[] lnPhiZ) {
+        List<StabilityResult> out = new ArrayList<>();
+        test(at, p, z, lnPhiZ, true, out);
+        out.sort(java.util.Comparator.comparingDouble(StabilityResult::minimumTpd));
+        return out;
+    }
+
     /** As {@link #test(double, double, double[], double[], boolean)} with the per-temperature parameters given. */
     StabilityResult test(CubicModel.AtTemperature at, double p, double[] z, double[] lnPhiZ, boolean exhaustive) {
+        return test(at, p, z, lnPhiZ, exhaustive, null);
+    }
+
+    private StabilityResult test(CubicModel.AtTemperature at, double p, double[] z, double[] lnPhiZ,
+                                 boolean exhaustive, List<StabilityResult> unstableOut) {
         double t = at.t();
         int n = z.length;
         double[] d = new double[n];
@@ -120,6 +136,10 @@ public final class StabilityAnalysis {
             }
             if (!r.trivial && (best == null || r.tm < best.tm)) {
                 best = r;
+            }
+            if (unstableOut != null && !r.trivial && r.tm < TM_UNSTABLE) {
+                unstableOut.add(new StabilityResult(t, p, false, r.tm, r.w, r.vapourLike, r.name, r.iterations,
+                        List.of()));
             }
             if (!exhaustive && best != null && best.tm < TM_CLEARLY_UNSTABLE) {
                 break;
