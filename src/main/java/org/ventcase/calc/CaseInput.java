@@ -19,6 +19,8 @@ import org.ventcase.vessel.Vessel;
 /**
  * One vessel's case as domain objects (SI, Pa absolute): what {@link CaseCalculation#run} takes.
  * Built from a validated case file by {@code casefile.CaseInputs}; nothing here refers to JSON.
+ * The scenario records and fire factors here are the only ones: the case-file validator produces
+ * them ({@code casefile.ValidatedCase#scenarios}) and the calculation consumes them.
  *
  * @param title      one line naming the vessel and the purpose
  * @param tag        equipment tag
@@ -108,6 +110,9 @@ public record CaseInput(String title, String tag, String inputHash, Fluid fluid,
     /** Pool fire, near-critical or supercritical contents: stepwise heat-up at P1, {@code steps} steps. */
     public record NearCriticalFire(int index, String label, FireFighting fireFighting, FireFactor factor,
                                    RelievingPressureInput relieving, int steps) implements Scenario {
+        /** Default number of temperature steps of the heat-up. */
+        public static final int DEFAULT_STEPS = 100;
+
         @Override
         public ScenarioKey key() {
             return ScenarioKey.FIRE_NEAR_CRITICAL;

@@ -10,8 +10,6 @@ import org.ventcase.calc.CaseInput;
 import org.ventcase.inventory.Fluid;
 import org.ventcase.inventory.Storage;
 import org.ventcase.relief.DeviceSpec;
-import org.ventcase.relief.InflowRate;
-import org.ventcase.relief.StandardConditions;
 import org.ventcase.thermo.Component;
 import org.ventcase.thermo.Composition;
 import org.ventcase.thermo.mix.KijTable;
@@ -59,10 +57,7 @@ public final class CaseInputs {
         DeviceSpec liq = new DeviceSpec(d.totalBackPressurePa(), d.kdLiquid(), 1.0, d.kc(), mdmt);
         CaseInput.Device device = new CaseInput.Device(gas, liq, d.viscosityCorrection(),
                 d.valveType() == ValidatedCase.ValveType.BALANCED_BELLOWS);
-        List<CaseInput.Scenario> scenarios = new ArrayList<>();
-        for (ValidatedCase.ScenarioSpec s : vc.scenarios()) {
-            scenarios.add(scenario(s));
-        }
+        List<CaseInput.Scenario> scenarios = vc.scenarios();
         return new CaseInput(vc.identity().title(), vc.identity().tag(), vc.inputHash(), fluid, storage,
                 vc.vessel().vessel(), st.level(), vc.vessel().exposure(), scenarios, device, warnings);
     }
@@ -97,46 +92,5 @@ public final class CaseInputs {
             }
         }
         return new KijTable.Matrix(m.kij(), src, warnings);
-    }
-
-    private static CaseInput.FireFactor factor(ValidatedCase.FireFactor f) {
-        if (f instanceof ValidatedCase.TableFactor t) {
-            return new CaseInput.TableFactor(t.row());
-        }
-        ValidatedCase.InsulationFactor i = (ValidatedCase.InsulationFactor) f;
-        return new CaseInput.InsulationFactor(i.conductivityWPerMK(), i.thicknessM());
-    }
-
-    private static CaseInput.Scenario scenario(ValidatedCase.ScenarioSpec s) {
-        if (s instanceof ValidatedCase.WettedFire f) {
-            return new CaseInput.WettedFire(f.index(), f.label(), f.fireFighting(), factor(f.factor()), f.relieving());
-        }
-        if (s instanceof ValidatedCase.NearCriticalFire f) {
-            return new CaseInput.NearCriticalFire(f.index(), f.label(), f.fireFighting(), factor(f.factor()),
-                    f.relieving(), f.steps());
-        }
-        if (s instanceof ValidatedCase.BoilOffFire f) {
-            return new CaseInput.BoilOffFire(f.index(), f.label(), f.fireFighting(), factor(f.factor()), f.relieving(),
-                    f.durationS(), f.stopAtLiquidFraction());
-        }
-        if (s instanceof ValidatedCase.GasFilledFire f) {
-            return new CaseInput.GasFilledFire(f.index(), f.label(), f.wallTemperatureK(), f.relieving());
-        }
-        if (s instanceof ValidatedCase.BlockedOutlet f) {
-            InflowRate rate;
-            if (f.inflow() instanceof ValidatedCase.MassInflow m) {
-                rate = InflowRate.mass(m.kgPerS());
-            } else {
-                ValidatedCase.StandardVolumeInflow v = (ValidatedCase.StandardVolumeInflow) f.inflow();
-                // the same moles, restated at 15 C and 101.325 kPa (ideal-gas molar volume)
-                StandardConditions sc = StandardConditions.STANDARD_15C;
-                rate = InflowRate.standardVolume(v.molPerS() * sc.molarVolume(), sc);
-            }
-            return new CaseInput.BlockedOutlet(f.index(), f.label(), rate, f.phase() == ValidatedCase.Phase.LIQUID,
-                    f.relieving());
-        }
-        ValidatedCase.ThermalExpansionCase t = (ValidatedCase.ThermalExpansionCase) s;
-        return new CaseInput.ThermalExpansion(t.index(), t.label(), t.heatInputW(), t.blockedInVolumeM3(),
-                t.relieving());
     }
 }

@@ -14,12 +14,14 @@ import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.function.Supplier;
 
+import org.ventcase.calc.CaseInput;
 import org.ventcase.common.InvalidInputException;
 import org.ventcase.common.PhysicalConstants;
 import org.ventcase.device.ViscosityCorrection;
 import org.ventcase.relief.DeviceCount;
 import org.ventcase.relief.EnvironmentFactors;
 import org.ventcase.relief.FireFighting;
+import org.ventcase.relief.InflowRate;
 import org.ventcase.relief.RelievingPressure;
 import org.ventcase.relief.RelievingPressureInput;
 import org.ventcase.relief.RelievingPressureResult;
@@ -294,7 +296,7 @@ public final class CaseValidator {
         Optional<ValidatedCase.StorageState> storage = storage(vessel, site);
         saturatedBelowCritical(fluid, storage);
         Optional<ValidatedCase.DeviceSpec> device = device();
-        List<ValidatedCase.ScenarioSpec> scenarios = scenarios(vessel, storage, device);
+        List<CaseInput.Scenario> scenarios = scenarios(vessel, storage, device);
         if (!problems.isEmpty()) {
             return Optional.empty();
         }
@@ -858,11 +860,11 @@ public final class CaseValidator {
 
     // ------------------------------------------------------------------------------ scenarios
 
-    private List<ValidatedCase.ScenarioSpec> scenarios(Optional<ValidatedCase.VesselModel> vessel,
+    private List<CaseInput.Scenario> scenarios(Optional<ValidatedCase.VesselModel> vessel,
                                                        Optional<ValidatedCase.StorageState> storage,
                                                        Optional<ValidatedCase.DeviceSpec> device) {
         List<Case.Scenario> list = kase.scenarios();
-        List<ValidatedCase.ScenarioSpec> out = new ArrayList<>();
+        List<CaseInput.Scenario> out = new ArrayList<>();
         if (list == null || list.isEmpty()) {
             missing("$.scenarios", "expected at least one scenario; types: " + String.join(", ", ScenarioType.keys()));
             return out;
@@ -911,18 +913,18 @@ public final class CaseValidator {
                 }
             }
             Optional<RelievingPressureInput> relieving = relieving(t, device);
-            Optional<? extends ValidatedCase.ScenarioSpec> spec = switch (t) {
+            Optional<? extends CaseInput.Scenario> spec = switch (t) {
                 case FIRE_WETTED -> {
                     Optional<FireFighting> ff = fireFighting(p, s);
-                    Optional<ValidatedCase.FireFactor> f = fireFactor(p, s, vessel);
+                    Optional<CaseInput.FireFactor> f = fireFactor(p, s, vessel);
                     yield ff.isPresent() && f.isPresent() && relieving.isPresent()
-                            ? Optional.of(new ValidatedCase.WettedFire(i, label, ff.get(), f.get(), relieving.get()))
+                            ? Optional.of(new CaseInput.WettedFire(i, label, ff.get(), f.get(), relieving.get()))
                             : Optional.empty();
                 }
                 case FIRE_NEAR_CRITICAL -> {
                     Optional<FireFighting> ff = fireFighting(p, s);
-                    Optional<ValidatedCase.FireFactor> f = fireFactor(p, s, vessel);
-                    int steps = ValidatedCase.DEFAULT_NEAR_CRITICAL_STEPS;
+                    Optional<CaseInput.FireFactor> f = fireFactor(p, s, vessel);
+                    int steps = CaseInput.NearCriticalFire.DEFAULT_STEPS;
                     boolean stepsOk = true;
                     if (s.steps() != null) {
                         if (s.steps() < 2 || s.steps() > 2000) {
@@ -935,13 +937,13 @@ public final class CaseValidator {
                     }
                     int st = steps;
                     yield ff.isPresent() && f.isPresent() && relieving.isPresent() && stepsOk
-                            ? Optional.of(new ValidatedCase.NearCriticalFire(i, label, ff.get(), f.get(),
+                            ? Optional.of(new CaseInput.NearCriticalFire(i, label, ff.get(), f.get(),
                             relieving.get(), st))
                             : Optional.empty();
                 }
                 case FIRE_BOIL_OFF -> {
                     Optional<FireFighting> ff = fireFighting(p, s);
-                    Optional<ValidatedCase.FireFactor> f = fireFactor(p, s, vessel);
+                    Optional<CaseInput.FireFactor> f = fireFactor(p, s, vessel);
                     OptionalDouble duration = OptionalDouble.empty();
                     boolean ok = true;
                     if (s.duration() != null) {
@@ -967,7 +969,7 @@ public final class CaseValidator {
                     OptionalDouble dur = duration;
                     double stp = stop;
                     yield ff.isPresent() && f.isPresent() && relieving.isPresent() && ok
-                            ? Optional.of(new ValidatedCase.BoilOffFire(i, label, ff.get(), f.get(), relieving.get(),
+                            ? Optional.of(new CaseInput.BoilOffFire(i, label, ff.get(), f.get(), relieving.get(),
                             dur, stp))
                             : Optional.empty();
                 }
@@ -982,24 +984,22 @@ public final class CaseValidator {
                     }
                     Optional<Double> twf = tw;
                     yield twf.isPresent() && relieving.isPresent()
-                            ? Optional.of(new ValidatedCase.GasFilledFire(i, label, twf.get(), relieving.get()))
+                            ? Optional.of(new CaseInput.GasFilledFire(i, label, twf.get(), relieving.get()))
                             : Optional.empty();
                 }
                 case BLOCKED_OUTLET -> {
-                    Optional<ValidatedCase.Phase> phase = choice(p + ".inflowPhase", s.inflowPhase(),
-                            options("vapour", ValidatedCase.Phase.VAPOUR, "vapor", ValidatedCase.Phase.VAPOUR,
-                                    "liquid", ValidatedCase.Phase.LIQUID), true);
-                    Optional<ValidatedCase.Inflow> inflow = inflow(p + ".inflow", s.inflow());
-                    if (inflow.isPresent() && phase.isPresent()
-                            && inflow.get() instanceof ValidatedCase.StandardVolumeInflow
-                            && phase.get() == ValidatedCase.Phase.LIQUID) {
+                    Optional<Boolean> liquid = choice(p + ".inflowPhase", s.inflowPhase(),
+                            options("vapour", Boolean.FALSE, "vapor", Boolean.FALSE, "liquid", Boolean.TRUE), true);
+                    Optional<InflowRate> inflow = inflow(p + ".inflow", s.inflow());
+                    if (inflow.isPresent() && liquid.isPresent()
+                            && inflow.get().kind() == InflowRate.Kind.STANDARD_VOLUME && liquid.get()) {
                         problem(p + ".inflow", s.inflow(), "a standard volumetric flow describes a gas; give a liquid "
                                 + "inflow as a mass flow, e.g. '12000 kg/h'");
                         inflow = Optional.empty();
                     }
-                    Optional<ValidatedCase.Inflow> in = inflow;
-                    yield in.isPresent() && phase.isPresent() && relieving.isPresent()
-                            ? Optional.of(new ValidatedCase.BlockedOutlet(i, label, in.get(), phase.get(),
+                    Optional<InflowRate> in = inflow;
+                    yield in.isPresent() && liquid.isPresent() && relieving.isPresent()
+                            ? Optional.of(new CaseInput.BlockedOutlet(i, label, in.get(), liquid.get(),
                             relieving.get()))
                             : Optional.empty();
                 }
@@ -1009,7 +1009,7 @@ public final class CaseValidator {
                     Optional<Double> vol = positive(p + ".blockedInVolume",
                             quantity(p + ".blockedInVolume", s.blockedInVolume(), Dimension.VOLUME, true), "m3");
                     yield q.isPresent() && vol.isPresent() && relieving.isPresent()
-                            ? Optional.of(new ValidatedCase.ThermalExpansionCase(i, label, q.get(), vol.get(),
+                            ? Optional.of(new CaseInput.ThermalExpansion(i, label, q.get(), vol.get(),
                             relieving.get()))
                             : Optional.empty();
                 }
@@ -1042,7 +1042,7 @@ public final class CaseValidator {
                 "inadequate", FireFighting.INADEQUATE), true);
     }
 
-    private Optional<ValidatedCase.FireFactor> fireFactor(String p, Case.Scenario s,
+    private Optional<CaseInput.FireFactor> fireFactor(String p, Case.Scenario s,
                                                           Optional<ValidatedCase.VesselModel> vessel) {
         boolean credit = Boolean.TRUE.equals(s.insulationCredit());
         if (s.environmentFactor() != null && credit) {
@@ -1056,7 +1056,7 @@ public final class CaseValidator {
             return Optional.empty();
         }
         if (!credit) {
-            return attempt(p + ".environmentFactor", () -> new ValidatedCase.TableFactor(
+            return attempt(p + ".environmentFactor", () -> new CaseInput.TableFactor(
                     EnvironmentFactors.byKey(s.environmentFactor())));
         }
         if (kase.vessel() == null || kase.vessel().insulation() == null) {
@@ -1074,10 +1074,10 @@ public final class CaseValidator {
                     + "'bare'");
             return Optional.empty();
         }
-        return Optional.of(new ValidatedCase.InsulationFactor(ins.get().conductivityWPerMK(), ins.get().thicknessM()));
+        return Optional.of(new CaseInput.InsulationFactor(ins.get().conductivityWPerMK(), ins.get().thicknessM()));
     }
 
-    private Optional<ValidatedCase.Inflow> inflow(String path, String text) {
+    private Optional<InflowRate> inflow(String path, String text) {
         if (text == null) {
             missing(path, "expected a mass flow ('12000 kg/h') or a standard volumetric flow ('850 Nm3/h'; units "
                     + StandardFlow.units() + ")");
@@ -1089,8 +1089,9 @@ public final class CaseValidator {
                 problem(path, text, "expected a flow greater than 0");
                 return Optional.empty();
             }
-            return Optional.of(new ValidatedCase.StandardVolumeInflow(std.get().molPerS(), std.get().standardM3PerS(),
-                    std.get().basis()));
+            // the same moles, restated at 15 C and 101.325 kPa (ideal-gas molar volume)
+            org.ventcase.relief.StandardConditions sc = org.ventcase.relief.StandardConditions.STANDARD_15C;
+            return Optional.of(InflowRate.standardVolume(std.get().molPerS() * sc.molarVolume(), sc));
         }
         try {
             double w = Units.parse(path, text, Dimension.MASS_FLOW);
@@ -1098,7 +1099,7 @@ public final class CaseValidator {
                 problem(path, text, "expected a flow greater than 0");
                 return Optional.empty();
             }
-            return Optional.of(new ValidatedCase.MassInflow(w));
+            return Optional.of(InflowRate.mass(w));
         } catch (InvalidInputException e) {
             problem(path, text, "expected a mass flow (" + String.join(", ", Units.acceptedUnits(Dimension.MASS_FLOW))
                     + ") or a standard volumetric flow (" + StandardFlow.units() + ")");

@@ -5,11 +5,9 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
+import org.ventcase.calc.CaseInput;
 import org.ventcase.device.ViscosityCorrection;
 import org.ventcase.relief.DeviceCount;
-import org.ventcase.relief.EnvironmentFactor;
-import org.ventcase.relief.FireFighting;
-import org.ventcase.relief.RelievingPressureInput;
 import org.ventcase.thermo.Component;
 import org.ventcase.thermo.CubicModel;
 import org.ventcase.thermo.DensityBasis;
@@ -34,7 +32,7 @@ import org.ventcase.vessel.Vessel;
  * @param warnings   cautions found while checking (none stops a calculation)
  */
 public record ValidatedCase(Case source, String inputHash, Identity identity, FluidModel fluid, VesselModel vessel,
-                            StorageState storage, List<ScenarioSpec> scenarios, DeviceSpec device,
+                            StorageState storage, List<CaseInput.Scenario> scenarios, DeviceSpec device,
                             SiteConditions site, List<String> warnings) {
 
     public ValidatedCase {
@@ -128,122 +126,6 @@ public record ValidatedCase(Case source, String inputHash, Identity identity, Fl
      */
     public record StorageState(StorageMode mode, double temperatureK, OptionalDouble pressurePa, Level level,
                                double levelHeightM, Optional<Composition> vapourComposition) {
-    }
-
-    /** Environment factor of a fire scenario: a table row, or the insulation formula at relieving temperature. */
-    public sealed interface FireFactor permits TableFactor, InsulationFactor {
-    }
-
-    /** A row of the environment-factor table. */
-    public record TableFactor(EnvironmentFactor row) implements FireFactor {
-    }
-
-    /**
-     * The general insulation formula, evaluated by the calculation at the relieving temperature
-     * (see {@code EnvironmentFactors.insulation}).
-     */
-    public record InsulationFactor(double conductivityWPerMK, double thicknessM) implements FireFactor {
-    }
-
-    /** One scenario, ready for calculation. */
-    public sealed interface ScenarioSpec permits WettedFire, NearCriticalFire, BoilOffFire, GasFilledFire,
-            BlockedOutlet, ThermalExpansionCase {
-        /** Position in the file's list. */
-        int index();
-
-        ScenarioType type();
-
-        /** The label, or the type key when none was given. */
-        String label();
-
-        /** What decides this scenario's relieving pressure. */
-        RelievingPressureInput relieving();
-    }
-
-    /** {@code fire-wetted}. */
-    public record WettedFire(int index, String label, FireFighting fireFighting, FireFactor factor,
-                             RelievingPressureInput relieving) implements ScenarioSpec {
-        @Override
-        public ScenarioType type() {
-            return ScenarioType.FIRE_WETTED;
-        }
-    }
-
-    /** Default number of temperature steps of the near-critical heat-up. */
-    public static final int DEFAULT_NEAR_CRITICAL_STEPS = 100;
-
-    /**
-     * {@code fire-near-critical}: stepwise (dv/dh)_P heat-up at P1 in the fixed vessel volume.
-     *
-     * @param steps number of temperature steps (2 to 2000; {@link #DEFAULT_NEAR_CRITICAL_STEPS} when not given)
-     */
-    public record NearCriticalFire(int index, String label, FireFighting fireFighting, FireFactor factor,
-                                   RelievingPressureInput relieving, int steps) implements ScenarioSpec {
-        @Override
-        public ScenarioType type() {
-            return ScenarioType.FIRE_NEAR_CRITICAL;
-        }
-    }
-
-    /**
-     * {@code fire-boil-off}: multicomponent boil-off at constant P1 in the fixed vessel volume, heat
-     * from the API 521 wetted-vessel correlation.
-     *
-     * @param durationS            fire duration, s, when given (the run stops at the first step past it)
-     * @param stopAtLiquidFraction stop when the liquid moles fall to this fraction of those at
-     *                             opening; 0 runs until the liquid is exhausted
-     */
-    public record BoilOffFire(int index, String label, FireFighting fireFighting, FireFactor factor,
-                              RelievingPressureInput relieving, OptionalDouble durationS, double stopAtLiquidFraction)
-            implements ScenarioSpec {
-        @Override
-        public ScenarioType type() {
-            return ScenarioType.FIRE_BOIL_OFF;
-        }
-    }
-
-    /** {@code fire-gas-filled}. */
-    public record GasFilledFire(int index, String label, double wallTemperatureK, RelievingPressureInput relieving)
-            implements ScenarioSpec {
-        @Override
-        public ScenarioType type() {
-            return ScenarioType.FIRE_GAS_FILLED;
-        }
-    }
-
-    /** Phase of a blocked-outlet inflow. */
-    public enum Phase {
-        VAPOUR, LIQUID
-    }
-
-    /** A blocked-outlet inflow. */
-    public sealed interface Inflow permits MassInflow, StandardVolumeInflow {
-    }
-
-    /** Inflow as a mass flow, kg/s. */
-    public record MassInflow(double kgPerS) implements Inflow {
-    }
-
-    /** Inflow as a standard volumetric flow, converted to mol/s at its reference conditions. */
-    public record StandardVolumeInflow(double molPerS, double standardM3PerS, String basis) implements Inflow {
-    }
-
-    /** {@code blocked-outlet}. */
-    public record BlockedOutlet(int index, String label, Inflow inflow, Phase phase, RelievingPressureInput relieving)
-            implements ScenarioSpec {
-        @Override
-        public ScenarioType type() {
-            return ScenarioType.BLOCKED_OUTLET;
-        }
-    }
-
-    /** {@code thermal-expansion}: heat input W, blocked-in liquid volume m3. */
-    public record ThermalExpansionCase(int index, String label, double heatInputW, double blockedInVolumeM3,
-                                       RelievingPressureInput relieving) implements ScenarioSpec {
-        @Override
-        public ScenarioType type() {
-            return ScenarioType.THERMAL_EXPANSION;
-        }
     }
 
     /** Valve construction. */

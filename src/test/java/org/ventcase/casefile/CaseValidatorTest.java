@@ -25,6 +25,18 @@ class CaseValidatorTest {
     }
 
     @Test
+    void everyScenarioTypeOfTheCalculationHasOneCaseFileType() {
+        // Invariant of the one-domain-model structure: the file format's types are the
+        // calculation's, one to one, with the same keys.
+        java.util.Set<org.ventcase.calc.ScenarioKey> seen = java.util.EnumSet.noneOf(org.ventcase.calc.ScenarioKey.class);
+        for (ScenarioType t : ScenarioType.values()) {
+            assertTrue(seen.add(t.domain()), t + " maps to a type already mapped");
+            assertEquals(t.domain().key(), t.key());
+        }
+        assertEquals(java.util.EnumSet.allOf(org.ventcase.calc.ScenarioKey.class), seen);
+    }
+
+    @Test
     void everyTemplateValidates() {
         for (String name : Templates.CASES) {
             ValidationReport r = check(Fixtures.template(name));
@@ -52,20 +64,21 @@ class CaseValidatorTest {
         assertEquals(2, v.fluid().composition().components().size());
         assertEquals("n-butane", v.fluid().composition().components().get(1).name());
         assertEquals(2, v.scenarios().size());
-        ValidatedCase.WettedFire fire = assertInstanceOf(ValidatedCase.WettedFire.class, v.scenarios().get(0));
+        org.ventcase.calc.CaseInput.WettedFire fire = assertInstanceOf(org.ventcase.calc.CaseInput.WettedFire.class, v.scenarios().get(0));
         assertEquals(FireFighting.ADEQUATE_DRAINAGE_AND_FIREFIGHTING, fire.fireFighting());
         assertEquals(ScenarioKind.FIRE, fire.relieving().scenario());
-        ValidatedCase.BlockedOutlet bo = assertInstanceOf(ValidatedCase.BlockedOutlet.class, v.scenarios().get(1));
+        org.ventcase.calc.CaseInput.BlockedOutlet bo = assertInstanceOf(org.ventcase.calc.CaseInput.BlockedOutlet.class, v.scenarios().get(1));
         assertEquals(ScenarioKind.NON_FIRE, bo.relieving().scenario());
-        assertEquals(45000.0 / 3600, ((ValidatedCase.MassInflow) bo.inflow()).kgPerS(), 1e-12);
+        assertEquals(org.ventcase.relief.InflowRate.Kind.MASS, bo.inflow().kind());
+        assertEquals(45000.0 / 3600, bo.inflow().value(), 1e-12);
         assertEquals(CaseFiles.inputHash(v.source()), v.inputHash());
     }
 
     @Test
     void insulationCreditCarriesTheInsulationData() {
         ValidatedCase v = CaseFiles.load(Fixtures.template("vertical-drum"), "drum");
-        ValidatedCase.WettedFire fire = (ValidatedCase.WettedFire) v.scenarios().get(0);
-        ValidatedCase.InsulationFactor f = assertInstanceOf(ValidatedCase.InsulationFactor.class, fire.factor());
+        org.ventcase.calc.CaseInput.WettedFire fire = (org.ventcase.calc.CaseInput.WettedFire) v.scenarios().get(0);
+        org.ventcase.calc.CaseInput.InsulationFactor f = assertInstanceOf(org.ventcase.calc.CaseInput.InsulationFactor.class, fire.factor());
         assertEquals(0.05, f.conductivityWPerMK(), 1e-12);
         assertEquals(0.075, f.thicknessM(), 1e-12);
         assertTrue(v.vessel().exposure().excludeSkirtedBottomHead());
@@ -205,7 +218,8 @@ class CaseValidatorTest {
         assertEquals("$.scenarios[1].inflow", p.path());
         ValidatedCase v = CaseFiles.load(Fixtures.bulletWith("\"inflow\": \"45000 kg/h\"", "\"inflow\": \"850 Nm3/h\"")
                 .replace("\"inflowPhase\": \"liquid\"", "\"inflowPhase\": \"vapour\""), "gas");
-        assertInstanceOf(ValidatedCase.StandardVolumeInflow.class, ((ValidatedCase.BlockedOutlet) v.scenarios().get(1)).inflow());
+        assertEquals(org.ventcase.relief.InflowRate.Kind.STANDARD_VOLUME,
+                ((org.ventcase.calc.CaseInput.BlockedOutlet) v.scenarios().get(1)).inflow().kind());
     }
 
     @Test
