@@ -4,7 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import org.ventcase.review.ReviewCells;
+import org.ventcase.report.ReviewCells;
 import org.ventcase.review.ReviewQuantity;
 import org.ventcase.review.ReviewResult;
 import org.ventcase.review.Verdict;

@@ -18,7 +18,7 @@ import org.ventcase.common.InvalidInputException;
 import org.ventcase.report.CalculationSheet;
 import org.ventcase.report.QuantityText;
 import org.ventcase.report.UnitSystem;
-import org.ventcase.review.ReviewCells;
+import org.ventcase.report.ReviewCells;
 import org.ventcase.review.ReviewQuantity;
 import org.ventcase.review.ReviewResult;
 import org.ventcase.review.Tolerances;
@@ -165,8 +165,8 @@ final class ReviewCommand implements Callable<Integer> {
                 out.printf(Locale.ROOT, "   %-34s %s%n", row.quantity().label(), String.join(", ", row.modelOrifices()));
             } else if (row.modelMin().isPresent()) {
                 out.printf(Locale.ROOT, "   %-34s %s to %s%n", row.quantity().label(),
-                        row.quantity().format(row.modelMin().getAsDouble(), us),
-                        row.quantity().format(row.modelMax().getAsDouble(), us));
+                        org.ventcase.report.ReviewDisplay.format(row.quantity(), row.modelMin().getAsDouble(), us),
+                        org.ventcase.report.ReviewDisplay.format(row.quantity(), row.modelMax().getAsDouble(), us));
             }
         }
         for (ReviewResult.ModelRun m : r.runs()) {

@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Locale;
 
 import org.ventcase.calc.CaseResult;
-import org.ventcase.review.ReviewCells;
+import org.ventcase.report.ReviewCells;
 import org.ventcase.review.ReviewQuantity;
 import org.ventcase.review.ReviewResult;
 import org.ventcase.review.Verdict;
@@ -60,7 +60,7 @@ public final class ReviewSheets {
                 "Ventcase ran the whole case with its own model; the claimed values were not used in its calculation."));
         List<SheetModel.Row> tol = new ArrayList<>();
         for (ReviewQuantity q : ReviewQuantity.values()) {
-            tol.add(SheetModel.Row.of(q.label(), q.formatTolerance(r.tolerances().of(q), us)
+            tol.add(SheetModel.Row.of(q.label(), ReviewDisplay.formatTolerance(q, r.tolerances().of(q), us)
                     + (r.tolerances().changed(q) ? " (changed for this review)" : ""), said(q.reason(), us)));
         }
         inputs.add(new SheetModel.Table("Tolerances", List.of("Quantity", "Tolerance", "Why"),
@@ -173,7 +173,7 @@ public final class ReviewSheets {
                     cells.add(m.orifice().orElse("not computed"));
                 } else {
                     Double v = m.values().get(q);
-                    cells.add(v == null ? "not computed" : nb(q.format(v, us)));
+                    cells.add(v == null ? "not computed" : nb(ReviewDisplay.format(q, v, us)));
                 }
             }
             rows.add(new SheetModel.Row(cells, row.withinModelUncertainty()));

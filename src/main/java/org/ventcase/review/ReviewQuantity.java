@@ -3,7 +3,6 @@ package org.ventcase.review;
 import java.util.Locale;
 import java.util.Optional;
 
-import org.ventcase.units.CustomaryUnits;
 import org.ventcase.units.Dimension;
 
 /**
@@ -104,104 +103,60 @@ public enum ReviewQuantity {
 
     /** The display unit of the console table, the JSON's {@code display} block and the PDF (SI). */
     public String displayUnit() {
-        return displayUnit(false);
-    }
-
-    /**
-     * The display unit in SI or, with {@code us}, in US customary units (psia, F, lb/lbmol, Btu/lb,
-     * lb/ft3, Btu/h, ft2, lb/h, in2).
-     */
-    public String displayUnit(boolean us) {
         return switch (this) {
-            case RELIEVING_PRESSURE -> us ? "psia" : "bar abs";
-            case RELIEVING_TEMPERATURE -> us ? "\u00b0F" : "C";
-            case MOLAR_MASS -> us ? "lb/lbmol" : "kg/kmol";
+            case RELIEVING_PRESSURE -> "bar abs";
+            case RELIEVING_TEMPERATURE -> "C";
+            case MOLAR_MASS -> "kg/kmol";
             case Z, K, ORIFICE -> "";
-            case LATENT_HEAT -> us ? "Btu/lb" : "kJ/kg";
-            case LIQUID_DENSITY, VAPOUR_DENSITY -> us ? "lb/ft3" : "kg/m3";
-            case HEAT_INPUT -> us ? "Btu/h" : "kW";
-            case WETTED_AREA -> us ? "ft2" : "m2";
-            case RELIEF_LOAD -> us ? "lb/h" : "kg/h";
-            case REQUIRED_AREA -> us ? "in2" : "mm2";
+            case LATENT_HEAT -> "kJ/kg";
+            case LIQUID_DENSITY, VAPOUR_DENSITY -> "kg/m3";
+            case HEAT_INPUT -> "kW";
+            case WETTED_AREA -> "m2";
+            case RELIEF_LOAD -> "kg/h";
+            case REQUIRED_AREA -> "mm2";
         };
     }
 
-    /** An SI value (Pa abs, K, kg/kmol, J/kg, kg/m3, W, m2, kg/s) in the SI display unit. */
-    public double toDisplay(double si) {
-        return toDisplay(si, false);
-    }
-
     /**
-     * An SI value in the display unit of the system. US factors: CustomaryUnits (exact, NIST SP
-     * 811).
+     * An SI value (Pa abs, K, kg/kmol, J/kg, kg/m3, W, m2, kg/s) in the SI display unit. The review
+     * writes its hints in SI, as every calculation writes its warnings; US customary display is the
+     * edge's ({@code report.ReviewDisplay}).
      */
-    public double toDisplay(double si, boolean us) {
-        if (!us) {
-            return switch (this) {
-                case RELIEVING_PRESSURE -> si / 1e5;
-                case RELIEVING_TEMPERATURE -> si - 273.15;
-                case LATENT_HEAT, HEAT_INPUT -> si / 1e3;
-                case RELIEF_LOAD -> si * 3600;
-                case REQUIRED_AREA -> si * 1e6;
-                default -> si;
-            };
-        }
+    public double toDisplay(double si) {
         return switch (this) {
-            case RELIEVING_PRESSURE -> CustomaryUnits.paToPsi(si);
-            case RELIEVING_TEMPERATURE -> CustomaryUnits.kToRankine(si) - 459.67;
-            case LATENT_HEAT -> si / CustomaryUnits.J_PER_KG_PER_BTU_PER_LB;
-            case LIQUID_DENSITY, VAPOUR_DENSITY -> si * Math.pow(CustomaryUnits.M_PER_FT, 3) / CustomaryUnits.KG_PER_LB;
-            case HEAT_INPUT -> si / CustomaryUnits.W_PER_BTU_PER_H;
-            case WETTED_AREA -> si / CustomaryUnits.M2_PER_FT2;
-            case RELIEF_LOAD -> si * 3600 / CustomaryUnits.KG_PER_LB;
-            case REQUIRED_AREA -> si * 1e6 / CustomaryUnits.MM2_PER_IN2;
+            case RELIEVING_PRESSURE -> si / 1e5;
+            case RELIEVING_TEMPERATURE -> si - 273.15;
+            case LATENT_HEAT, HEAT_INPUT -> si / 1e3;
+            case RELIEF_LOAD -> si * 3600;
+            case REQUIRED_AREA -> si * 1e6;
             default -> si;
         };
     }
 
     /** A difference of SI values in the display unit (temperature differences in K). */
     public double differenceToDisplay(double si) {
-        return differenceToDisplay(si, false);
-    }
-
-    /** A difference of SI values in the system's display unit (temperature differences in K or F). */
-    public double differenceToDisplay(double si, boolean us) {
-        if (this == RELIEVING_TEMPERATURE) {
-            return us ? CustomaryUnits.kDiffToF(si) : si;
-        }
-        if (us) {
-            // every other US display unit is a pure factor of the SI one (no offset)
-            return toDisplay(si, true);
-        }
-        return toDisplay(si);
+        return this == RELIEVING_TEMPERATURE ? si : toDisplay(si);
     }
 
     /** The unit of a difference: K for temperatures, else the display unit. */
     public String differenceUnit() {
-        return differenceUnit(false);
-    }
-
-    /** The unit of a difference in the system: K or F for temperatures, else the display unit. */
-    public String differenceUnit(boolean us) {
-        return this == RELIEVING_TEMPERATURE ? (us ? "\u00b0F" : "K") : displayUnit(us);
+        return this == RELIEVING_TEMPERATURE ? "K" : displayUnit();
     }
 
     /** An SI value formatted in the display unit with 4 significant digits (3 decimals for Z and k). */
     public String format(double si) {
-        return format(si, false);
+        return formatNumber(toDisplay(si), displayUnit());
     }
 
-    /** As {@link #format(double)} in SI or US customary display units. */
-    public String format(double si, boolean us) {
-        double d = toDisplay(si, us);
-        String u = displayUnit(us);
+    /** A number already in a display unit, formatted as {@link #format(double)} does, with the unit. */
+    public String formatNumber(double d, String unit) {
         String num = switch (this) {
             case Z, K -> String.format(Locale.US, "%.3f", d);
             case RELIEVING_TEMPERATURE -> String.format(Locale.US, "%.1f", d);
             case MOLAR_MASS -> String.format(Locale.US, "%.2f", d);
             default -> significant(d, 4);
         };
-        return u.isEmpty() ? num : num + " " + u;
+        return unit.isEmpty() ? num : num + " " + unit;
     }
 
     /**
@@ -209,38 +164,31 @@ public enum ReviewQuantity {
      * notation (Z and k: 3 decimals; temperatures: 0.1 K), e.g. "+1250 kW", "-1.02 bar abs".
      */
     public String formatDifference(double si) {
-        return formatDifference(si, false);
+        return formatDifferenceNumber(differenceToDisplay(si), differenceUnit());
     }
 
-    /** As {@link #formatDifference(double)} in SI or US customary display units. */
-    public String formatDifference(double si, boolean us) {
-        double d = differenceToDisplay(si, us);
+    /** A difference already in a display unit, formatted as {@link #formatDifference(double)} does. */
+    public String formatDifferenceNumber(double d, String unit) {
         String sign = d < 0 ? "-" : "+";
         String num = switch (this) {
             case Z, K -> String.format(Locale.US, "%.3f", Math.abs(d));
             case RELIEVING_TEMPERATURE -> String.format(Locale.US, "%.1f", Math.abs(d));
             default -> significant(Math.abs(d), 3);
         };
-        String u = differenceUnit(us);
-        return sign + num + (u.isEmpty() ? "" : " " + u);
+        return sign + num + (unit.isEmpty() ? "" : " " + unit);
     }
 
     /** A tolerance in words: "3 %", "1 K", "exact". */
     public String formatTolerance(double tolerance) {
-        return formatTolerance(tolerance, false);
-    }
-
-    /** A tolerance in words in the system: "3 %", "1 K" or "1.8 F", "exact". */
-    public String formatTolerance(double tolerance, boolean us) {
         return switch (kind) {
             case RELATIVE -> significant(tolerance * 100, 3) + " %";
-            case ABSOLUTE_KELVIN -> us ? significant(CustomaryUnits.kDiffToF(tolerance), 3) + " \u00b0F"
-                    : significant(tolerance, 3) + " K";
+            case ABSOLUTE_KELVIN -> significant(tolerance, 3) + " K";
             case EXACT -> "exact";
         };
     }
 
-    static String significant(double v, int digits) {
+    /** v with the given number of significant digits in plain notation. */
+    public static String significant(double v, int digits) {
         if (v == 0) {
             return "0";
         }

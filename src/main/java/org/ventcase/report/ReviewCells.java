@@ -1,6 +1,9 @@
-package org.ventcase.review;
+package org.ventcase.report;
 
 import java.util.Locale;
+
+import org.ventcase.review.ReviewQuantity;
+import org.ventcase.review.ReviewResult;
 
 /**
  * The printed cells of one row of the deviation table, the same on the review screen and the
@@ -23,15 +26,15 @@ public record ReviewCells(String claimed, String computed, String difference, St
     /** As {@link #of(ReviewResult.Row, String)} in SI or, with {@code us}, US customary units. */
     public static ReviewCells of(ReviewResult.Row row, String missing, boolean us) {
         ReviewQuantity q = row.quantity();
-        String tol = q.formatTolerance(row.tolerance(), us);
+        String tol = ReviewDisplay.formatTolerance(q, row.tolerance(), us);
         if (q == ReviewQuantity.ORIFICE) {
             return new ReviewCells(row.claimedOrifice().orElse(""), row.computedOrifice().orElse(missing), "", "",
                     tol);
         }
-        String claimed = row.claimed().isPresent() ? q.format(row.claimed().getAsDouble(), us) : row.claimedText();
-        String computed = row.computed().isPresent() ? q.format(row.computed().getAsDouble(), us) : missing;
+        String claimed = row.claimed().isPresent() ? ReviewDisplay.format(q, row.claimed().getAsDouble(), us) : row.claimedText();
+        String computed = row.computed().isPresent() ? ReviewDisplay.format(q, row.computed().getAsDouble(), us) : missing;
         String diff = row.difference().isPresent()
-                ? unsignedZero(q.formatDifference(row.difference().getAsDouble(), us)) : "";
+                ? unsignedZero(ReviewDisplay.formatDifference(q, row.difference().getAsDouble(), us)) : "";
         String rel = row.relativeDifference().isPresent()
                 ? unsignedZero(String.format(Locale.ROOT, "%+.1f %%", row.relativeDifference().getAsDouble() * 100))
                 : "";
