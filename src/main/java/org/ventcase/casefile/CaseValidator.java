@@ -390,7 +390,7 @@ public final class CaseValidator {
                 options("translated", DensityBasis.TRANSLATED, "cubic", DensityBasis.CUBIC), true);
         if (eos.isPresent() && basis.orElse(null) == DensityBasis.TRANSLATED && !eos.get().hasVolumeShift()) {
             problem("$.fluid.densityBasis", f.densityBasis(), "translated densities need a variant with a published "
-                    + "volume shift (PR-Twu, SRK, PR76, PR78); " + eos.get().displayName() + " has none: use cubic");
+                    + "volume shift (" + String.join(", ", EosVariant.translatedIds()) + "); " + eos.get().displayName() + " has none: use cubic");
         }
         List<ValidatedCase.KijEntry> kij = new ArrayList<>();
         double[][] matrix = null;

@@ -10,9 +10,18 @@ import picocli.CommandLine.Option;
 /** Options shared by the property commands. */
 final class CommonOptions {
 
-    @Option(names = "--eos", paramLabel = "NAME", defaultValue = "PR-Twu",
-            description = "Equation of state: PR-Twu (Peng-Robinson with the Twu alpha and a temperature-dependent volume translation), PR78 (= PR), PR76, SRK, RK, vdW. Default: ${DEFAULT-VALUE}.")
+    @Option(names = "--eos", paramLabel = "NAME", defaultValue = "PR-Twu", completionCandidates = EosNames.class,
+            description = "Equation of state, one of ${COMPLETION-CANDIDATES} (PR is taken as PR78). PR-Twu is "
+                    + "Peng-Robinson with the Twu alpha and a temperature-dependent volume translation. Default: ${DEFAULT-VALUE}.")
     String eos;
+
+    /** The offered variant names, read from {@link EosVariant#OFFERED} (one registry). */
+    static final class EosNames implements Iterable<String> {
+        @Override
+        public java.util.Iterator<String> iterator() {
+            return EosVariant.offeredIds().iterator();
+        }
+    }
 
     @Option(names = "--density-basis", paramLabel = "BASIS", defaultValue = "translated",
             description = "Liquid-density basis: translated (Peneloux-type volume shift, default) or cubic.")

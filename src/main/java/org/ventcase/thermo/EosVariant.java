@@ -68,12 +68,19 @@ public enum EosVariant {
     /** The variants in the order they are offered: the default first (UI choices, messages). */
     public static final List<EosVariant> OFFERED = List.of(PRTWU, PR78, PR76, SRK, RK, VDW);
 
-    /** The names accepted on input, for messages: every variant once, default first. */
-    public static final String ACCEPTED = "PR-Twu (default), PR78 (= PR), PR76, SRK, RK, vdW";
+    /** The names accepted on input, for messages: every variant once, default first, read from {@link #OFFERED}. */
+    public static final String ACCEPTED = OFFERED.stream()
+            .map(v -> v.id() + (v == DEFAULT ? " (default)" : v == PR78 ? " (= PR)" : ""))
+            .collect(java.util.stream.Collectors.joining(", "));
 
     /** The names of {@link #OFFERED}, as typed in a case file or on the command line. */
     public static List<String> offeredIds() {
         return OFFERED.stream().map(EosVariant::id).toList();
+    }
+
+    /** The names of the offered variants with a published volume shift (translated densities), in offered order. */
+    public static List<String> translatedIds() {
+        return OFFERED.stream().filter(EosVariant::hasVolumeShift).map(EosVariant::id).toList();
     }
 
     private final String displayName;
