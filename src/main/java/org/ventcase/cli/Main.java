@@ -4,6 +4,8 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Properties;
 import java.util.concurrent.Callable;
 
@@ -175,7 +177,7 @@ public final class Main implements Callable<Integer> {
         cl.setErr(err);
         cl.setParameterExceptionHandler((ex, a) -> {
             CommandLine c = ex.getCommandLine();
-            c.getErr().println("ventcase: " + ex.getMessage());
+            c.getErr().println("ventcase: " + usageError(ex));
             c.getErr().println("Try '" + c.getCommandSpec().qualifiedName() + " --help'.");
             return ExitCode.INVALID_INPUT;
         });
@@ -201,6 +203,48 @@ public final class Main implements Callable<Integer> {
         out.flush();
         err.flush();
         return code;
+    }
+
+    /**
+     * A command-line mistake in the user's terms: which word or option is wrong and what is
+     * expected, without the parser's own phrasing (issue 19, item 8).
+     */
+    static String usageError(CommandLine.ParameterException ex) {
+        CommandLine c = ex.getCommandLine();
+        String cmd = c.getCommandSpec().qualifiedName();
+        if (ex instanceof CommandLine.UnmatchedArgumentException u && !u.getUnmatched().isEmpty()) {
+            String word = u.getUnmatched().get(0);
+            List<String> hints = u.getSuggestions();
+            String hint = hints.isEmpty() ? "" : "; did you mean " + String.join(" or ", hints) + "?";
+            if (word.startsWith("-")) {
+                return "'" + word + "' is not an option of " + cmd + hint;
+            }
+            if (!c.getSubcommands().isEmpty()) {
+                return "'" + word + "' is not a command; expected one of " + String.join(", ", c.getSubcommands().keySet())
+                        + hint;
+            }
+            return "'" + word + "' is not expected here: " + cmd + " takes "
+                    + (c.getCommandSpec().positionalParameters().isEmpty() ? "options only"
+                            : "no more than " + c.getCommandSpec().positionalParameters().size() + " file name(s)");
+        }
+        if (ex instanceof CommandLine.MissingParameterException m && !m.getMissing().isEmpty()) {
+            List<String> names = new ArrayList<>();
+            for (CommandLine.Model.ArgSpec a : m.getMissing()) {
+                names.add(a.isOption() ? ((CommandLine.Model.OptionSpec) a).longestName() + "=" + a.paramLabel()
+                        : a.paramLabel());
+            }
+            return names.size() == 1 ? names.get(0) + ": missing; " + cmd + " needs it"
+                    : String.join(" or ", names) + ": missing; " + cmd + " needs one of them";
+        }
+        if (ex instanceof CommandLine.MutuallyExclusiveArgsException) {
+            return ex.getMessage().replaceFirst("^Error: ", "").replace(" are mutually exclusive (specify only one)",
+                    ": give only one of these");
+        }
+        if (ex instanceof CommandLine.OverwrittenOptionException o && o.getOverwritten() != null
+                && o.getOverwritten().isOption()) {
+            return ((CommandLine.Model.OptionSpec) o.getOverwritten()).longestName() + ": given more than once; give it once";
+        }
+        return ex.getMessage().replaceFirst("^Error: ", "");
     }
 
     /** The version from the build (resource filtered by Maven). */

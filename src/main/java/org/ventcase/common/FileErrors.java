@@ -28,9 +28,24 @@ public final class FileErrors {
             return "a part of the path is not a folder";
         }
         if (e instanceof FileSystemException f) {
-            return f.getReason() != null ? f.getReason() : "the file cannot be used";
+            return f.getReason() != null ? plain(f.getReason()) : "the file cannot be used";
         }
         String m = e.getMessage();
-        return m == null || m.isBlank() ? "the file cannot be read or written" : m;
+        return m == null || m.isBlank() ? "the file cannot be read or written" : plain(m);
+    }
+
+    /** The operating system's usual reasons in plain words; any other reason as it is. */
+    static String plain(String reason) {
+        String r = reason.strip();
+        if (r.equalsIgnoreCase("Is a directory")) {
+            return "it is a folder, not a file";
+        }
+        if (r.equalsIgnoreCase("No space left on device")) {
+            return "the disk is full";
+        }
+        if (r.equalsIgnoreCase("Read-only file system")) {
+            return "the disk or folder is read-only";
+        }
+        return r;
     }
 }

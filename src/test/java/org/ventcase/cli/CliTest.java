@@ -351,4 +351,25 @@ class CliTest {
         }
         return Double.parseDouble(m.group());
     }
+
+    @Test
+    void commandLineMistakesAreSaidInTheUsersTerms() {
+        // issue 19 item 8: the parser's own phrasing ("Unmatched argument at index 0", "Missing
+        // required argument (specify one of these)") no longer reaches the user
+        Run r = run("bogus");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("'bogus' is not a command; expected one of demo,"), r.err());
+        r = run("sat", "--fluid", "propane");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("--temperature=T or --pressure=P: missing; ventcase sat needs one of them"), r.err());
+        r = run("sat", "--fluid", "propane", "--temprature", "300 K");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("'--temprature' is not an option of ventcase sat"), r.err());
+        r = run("sat", "--fluid", "propane", "--temperature", "300 K", "--pressure", "10 bara");
+        assertEquals(2, r.code());
+        assertTrue(r.err().contains("give only one of these"), r.err());
+        for (String bad : List.of("Unmatched", "Missing required", "specify one of these", "mutually exclusive", "Error:")) {
+            assertFalse(r.err().contains(bad), r.err());
+        }
+    }
 }

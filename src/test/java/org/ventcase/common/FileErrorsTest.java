@@ -32,4 +32,14 @@ class FileErrorsTest {
         assertEquals("disk full", FileErrors.reason(new java.nio.file.FileSystemException("/x", null, "disk full")));
         assertEquals("the file cannot be read or written", FileErrors.reason(new java.io.IOException()));
     }
+
+    @Test
+    void aFolderGivenAsACaseFileIsCalledAFolder(@TempDir Path dir) {
+        // issue 19 item 8: before, the operating system's "Is a directory" was passed on as it was
+        UncheckedIOException e = assertThrows(UncheckedIOException.class,
+                () -> org.ventcase.casefile.CaseFiles.read(dir));
+        assertEquals("cannot read case file " + dir + ": it is a folder, not a file", e.getMessage());
+        assertEquals("the disk is full",
+                FileErrors.reason(new java.nio.file.FileSystemException("/x", null, "No space left on device")));
+    }
 }
