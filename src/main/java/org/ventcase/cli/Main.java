@@ -223,9 +223,9 @@ public final class Main implements Callable<Integer> {
                 return "'" + word + "' is not a command; expected one of " + String.join(", ", c.getSubcommands().keySet())
                         + hint;
             }
+            int files = c.getCommandSpec().positionalParameters().size();
             return "'" + word + "' is not expected here: " + cmd + " takes "
-                    + (c.getCommandSpec().positionalParameters().isEmpty() ? "options only"
-                            : "no more than " + c.getCommandSpec().positionalParameters().size() + " file name(s)");
+                    + (files == 0 ? "options only" : files == 1 ? "one file name" : "no more than " + files + " file names");
         }
         if (ex instanceof CommandLine.MissingParameterException m && !m.getMissing().isEmpty()) {
             List<String> names = new ArrayList<>();

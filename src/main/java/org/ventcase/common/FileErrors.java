@@ -34,18 +34,15 @@ public final class FileErrors {
         return m == null || m.isBlank() ? "the file cannot be read or written" : plain(m);
     }
 
-    /** The operating system's usual reasons in plain words; any other reason as it is. */
+    /** The operating system's usual reasons (lower case) in plain words. */
+    private static final java.util.Map<String, String> PLAIN = java.util.Map.of(
+            "is a directory", "it is a folder, not a file",
+            "no space left on device", "the disk is full",
+            "read-only file system", "the disk or folder is read-only");
+
+    /** A reason in plain words where it is one of the usual ones; any other reason as it is. */
     static String plain(String reason) {
         String r = reason.strip();
-        if (r.equalsIgnoreCase("Is a directory")) {
-            return "it is a folder, not a file";
-        }
-        if (r.equalsIgnoreCase("No space left on device")) {
-            return "the disk is full";
-        }
-        if (r.equalsIgnoreCase("Read-only file system")) {
-            return "the disk or folder is read-only";
-        }
-        return r;
+        return PLAIN.getOrDefault(r.toLowerCase(java.util.Locale.ROOT), r);
     }
 }
