@@ -1,15 +1,10 @@
 package org.ventcase.device;
 
-import java.io.BufferedReader;
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
+import org.ventcase.common.CsvTable;
 import org.ventcase.common.InvalidInputException;
 
 /**
@@ -114,41 +109,18 @@ public final class OrificeTable {
     }
 
     private static List<Orifice> load() {
-        InputStream in = OrificeTable.class.getResourceAsStream(RESOURCE);
-        if (in == null) {
-            throw new IllegalStateException("missing resource " + RESOURCE);
-        }
         List<Orifice> list = new ArrayList<>();
-        try (BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8))) {
-            String line;
-            boolean header = true;
-            int n = 0;
-            while ((line = r.readLine()) != null) {
-                n++;
-                if (line.isBlank() || line.startsWith("#")) {
-                    continue;
-                }
-                if (header) {
-                    header = false;
-                    continue;
-                }
-                String[] c = line.split(",", 3);
-                if (c.length != 3) {
-                    throw new IllegalStateException(RESOURCE + " line " + n + ": expected letter,area,source");
-                }
-                Orifice o;
-                try {
-                    o = new Orifice(c[0].trim(), Double.parseDouble(c[1].trim()), c[2].trim());
-                } catch (InvalidInputException e) {
-                    throw new IllegalStateException(RESOURCE + " line " + n + ": " + e.getMessage(), e);
-                }
-                if (!list.isEmpty() && !(o.areaIn2() > list.get(list.size() - 1).areaIn2())) {
-                    throw new IllegalStateException(RESOURCE + " line " + n + ": areas must increase");
-                }
-                list.add(o);
+        for (CsvTable.Row row : CsvTable.resource(OrificeTable.class, RESOURCE, CsvTable.LastColumn.REST_OF_LINE).rows()) {
+            Orifice o;
+            try {
+                o = new Orifice(row.required("letter"), row.number("effective_area_in2"), row.required("source"));
+            } catch (InvalidInputException e) {
+                throw new IllegalStateException(RESOURCE + ": " + e.getMessage(), e);
             }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+            if (!list.isEmpty() && !(o.areaIn2() > list.get(list.size() - 1).areaIn2())) {
+                throw new IllegalStateException(row.where() + ": areas must increase");
+            }
+            list.add(o);
         }
         return List.copyOf(list);
     }

@@ -1,12 +1,5 @@
 package org.ventcase.relief;
 
-import java.io.BufferedReader;
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.util.ArrayList;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -15,6 +8,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
+import org.ventcase.common.CsvTable;
 import org.ventcase.common.InvalidInputException;
 
 /**
@@ -98,58 +92,21 @@ public final class EnvironmentFactors {
     }
 
     private static Map<String, EnvironmentFactor> load() {
-        InputStream in = EnvironmentFactors.class.getResourceAsStream(RESOURCE);
-        if (in == null) {
-            throw new IllegalStateException("missing resource " + RESOURCE);
-        }
         Map<String, EnvironmentFactor> map = new LinkedHashMap<>();
-        try (BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8))) {
-            String line;
-            boolean header = true;
-            int n = 0;
-            while ((line = r.readLine()) != null) {
-                n++;
-                if (line.isBlank() || line.startsWith("#")) {
-                    continue;
-                }
-                if (header) {
-                    header = false;
-                    continue;
-                }
-                List<String> c = split(line, 6);
-                String where = RESOURCE + " line " + n;
-                OptionalDouble cond = c.get(2).isBlank() ? OptionalDouble.empty()
-                        : OptionalDouble.of(Double.parseDouble(c.get(2)));
-                EnvironmentFactor row;
-                try {
-                    row = new EnvironmentFactor(c.get(0).trim(), c.get(1).trim(), cond,
-                            Double.parseDouble(c.get(3)), c.get(4).trim(), c.get(5).trim(), Optional.empty());
-                } catch (InvalidInputException e) {
-                    throw new IllegalStateException(where + ": " + e.getMessage(), e);
-                }
-                if (map.put(row.key(), row) != null) {
-                    throw new IllegalStateException(where + ": duplicate key " + row.key());
-                }
+        for (CsvTable.Row row : CsvTable.resource(EnvironmentFactors.class, RESOURCE,
+                CsvTable.LastColumn.REST_OF_LINE).rows()) {
+            EnvironmentFactor f;
+            try {
+                f = new EnvironmentFactor(row.required("key"), row.required("description"),
+                        row.optionalNumber("conductance_w_per_m2k"), row.number("f"), row.required("status"),
+                        row.required("source"), Optional.empty());
+            } catch (InvalidInputException e) {
+                throw new IllegalStateException(RESOURCE + ": " + e.getMessage(), e);
             }
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
+            if (map.put(f.key(), f) != null) {
+                throw new IllegalStateException(row.where() + ": duplicate key " + f.key());
+            }
         }
         return Collections.unmodifiableMap(map);
-    }
-
-    /** Splits on the first {@code n - 1} commas; the last column (source) may contain commas. */
-    static List<String> split(String line, int n) {
-        List<String> out = new ArrayList<>();
-        int start = 0;
-        for (int i = 0; i < n - 1; i++) {
-            int comma = line.indexOf(',', start);
-            if (comma < 0) {
-                throw new IllegalStateException("expected " + n + " columns: " + line);
-            }
-            out.add(line.substring(start, comma));
-            start = comma + 1;
-        }
-        out.add(line.substring(start));
-        return out;
     }
 }

@@ -1,6 +1,5 @@
 package org.ventcase.thermo;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
@@ -12,7 +11,6 @@ import java.util.Arrays;
 import java.util.Collections;
 import java.util.Comparator;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
@@ -20,6 +18,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
+import org.ventcase.common.CsvTable;
 import org.ventcase.common.InvalidInputException;
 
 /**
@@ -154,65 +153,40 @@ public final class ComponentLibrary {
      *                               first bad value
      */
     public static ComponentLibrary parse(Reader reader, String origin) throws IOException {
-        BufferedReader br = new BufferedReader(reader);
-        Map<String, Integer> index = null;
-        List<Component> list = new ArrayList<>();
-        String line;
-        int lineNo = 0;
-        while ((line = br.readLine()) != null) {
-            lineNo++;
-            String trimmed = line.strip();
-            if (trimmed.isEmpty() || trimmed.startsWith("#")) {
-                continue;
-            }
-            List<String> fields = splitCsv(line, origin + ":row " + lineNo);
-            if (index == null) {
-                index = header(fields, origin + ":row " + lineNo);
-                continue;
-            }
-            list.add(row(fields, index, origin + ":row " + lineNo));
-        }
-        if (index == null) {
-            throw InvalidInputException.missing(origin, "expected a header row with columns " + COLUMNS);
-        }
-        return new ComponentLibrary(list, origin);
-    }
-
-    private static Map<String, Integer> header(List<String> fields, String where) {
-        Map<String, Integer> index = new LinkedHashMap<>();
-        for (int i = 0; i < fields.size(); i++) {
-            String col = fields.get(i).strip();
-            if (!COLUMNS.contains(col) || index.putIfAbsent(col, i) != null) {
-                throw InvalidInputException.invalid(where + ".header", col,
+        CsvTable table = CsvTable.read(reader, origin, CsvTable.LastColumn.FIELD);
+        List<String> columns = table.columns();
+        for (String col : columns) {
+            if (!COLUMNS.contains(col)) {
+                throw InvalidInputException.invalid(table.headerWhere(), col,
                         "expected each of these columns exactly once: " + COLUMNS);
             }
         }
         for (String col : COLUMNS) {
-            if (!index.containsKey(col)) {
-                throw InvalidInputException.missing(where + ".header." + col, "expected columns " + COLUMNS);
+            if (!columns.contains(col)) {
+                throw InvalidInputException.missing(table.headerWhere() + "." + col, "expected columns " + COLUMNS);
             }
         }
-        return index;
+        List<Component> list = new ArrayList<>();
+        for (CsvTable.Row row : table.rows()) {
+            list.add(row(row));
+        }
+        return new ComponentLibrary(list, origin);
     }
 
-    private static Component row(List<String> f, Map<String, Integer> index, String where) {
-        if (f.size() != index.size()) {
-            throw InvalidInputException.invalid(where, f.size() + " fields",
-                    "expected " + index.size() + " fields as in the header");
-        }
-        Cell cell = col -> f.get(index.get(col)).strip();
-        String name = text(cell, "name", where);
+    private static Component row(CsvTable.Row cell) {
+        String where = cell.where();
+        String name = cell.required("name");
         if (!name.equals(name.toLowerCase(Locale.ROOT))) {
             throw InvalidInputException.invalid(where + ".name", name, "expected a lower-case name");
         }
-        String formula = text(cell, "formula", where);
-        String cas = text(cell, "cas", where);
+        String formula = cell.required("formula");
+        String cas = cell.required("cas");
         if (!casValid(cas)) {
             throw InvalidInputException.invalid(where + ".cas", cas,
                     "expected a CAS registry number NNNNNNN-NN-N with a valid check digit");
         }
         List<String> aliases = new ArrayList<>();
-        for (String a : cell.get("aliases").split(";")) {
+        for (String a : cell.text("aliases").split(";")) {
             String s = a.strip();
             if (!s.isEmpty()) {
                 if (!s.equals(s.toLowerCase(Locale.ROOT))) {
@@ -221,21 +195,21 @@ public final class ComponentLibrary {
                 aliases.add(s);
             }
         }
-        double tc = number(cell, "Tc_K", where);
-        double pc = number(cell, "Pc_Pa", where);
-        double omega = number(cell, "omega", where);
-        double m = number(cell, "M_kg_kmol", where);
-        double tb = number(cell, "Tb_K", where);
-        String critSrc = text(cell, "critical_source", where);
+        double tc = cell.number("Tc_K");
+        double pc = cell.number("Pc_Pa");
+        double omega = cell.number("omega");
+        double m = cell.number("M_kg_kmol");
+        double tb = cell.number("Tb_K");
+        String critSrc = cell.required("critical_source");
         double[] a = new double[5];
         for (int i = 0; i < 5; i++) {
-            a[i] = number(cell, "cp_a" + i, where);
+            a[i] = cell.number("cp_a" + i);
         }
-        double tMin = number(cell, "cp_Tmin_K", where);
-        double tMax = number(cell, "cp_Tmax_K", where);
-        String cpSrc = text(cell, "cp_source", where);
-        double zra = number(cell, "Z_RA", where);
-        String zSrc = text(cell, "Z_RA_source", where);
+        double tMin = cell.number("cp_Tmin_K");
+        double tMax = cell.number("cp_Tmax_K");
+        String cpSrc = cell.required("cp_source");
+        double zra = cell.number("Z_RA");
+        String zSrc = cell.required("Z_RA_source");
         IdealGasCp cp;
         try {
             cp = new IdealGasCp(a, tMin, tMax, cpSrc);
@@ -249,69 +223,6 @@ public final class ComponentLibrary {
             throw e.withField(where + "." + e.field());
         }
     }
-
-    @FunctionalInterface
-    private interface Cell {
-        String get(String column);
-    }
-
-    private static String text(Cell cell, String col, String where) {
-        String s = cell.get(col);
-        if (s.isEmpty()) {
-            throw InvalidInputException.missing(where + "." + col,
-                    col.endsWith("source") ? "every datum needs a source" : "expected a value");
-        }
-        return s;
-    }
-
-    private static double number(Cell cell, String col, String where) {
-        String s = text(cell, col, where);
-        double v;
-        try {
-            v = Double.parseDouble(s);
-        } catch (NumberFormatException e) {
-            throw InvalidInputException.invalid(where + "." + col, s, "expected a number");
-        }
-        if (!Double.isFinite(v)) {
-            throw InvalidInputException.invalid(where + "." + col, s, "expected a finite number");
-        }
-        return v;
-    }
-
-    /** Splits one CSV line; a field may be wrapped in double quotes ("" inside stands for one quote). */
-    static List<String> splitCsv(String line, String where) {
-        List<String> out = new ArrayList<>();
-        StringBuilder cur = new StringBuilder();
-        boolean quoted = false;
-        for (int i = 0; i < line.length(); i++) {
-            char ch = line.charAt(i);
-            if (quoted) {
-                if (ch == '"') {
-                    if (i + 1 < line.length() && line.charAt(i + 1) == '"') {
-                        cur.append('"');
-                        i++;
-                    } else {
-                        quoted = false;
-                    }
-                } else {
-                    cur.append(ch);
-                }
-            } else if (ch == '"') {
-                quoted = true;
-            } else if (ch == ',') {
-                out.add(cur.toString());
-                cur.setLength(0);
-            } else {
-                cur.append(ch);
-            }
-        }
-        if (quoted) {
-            throw InvalidInputException.invalid(where, line, "unbalanced double quote");
-        }
-        out.add(cur.toString());
-        return out;
-    }
-
     /**
      * Whether a CAS registry number is well formed and its check digit right. The check digit is
      * the sum of the other digits, each times its position counted from the right starting at 1,

@@ -6,6 +6,8 @@ import java.util.HashMap;
 import java.util.Map;
 import java.util.Optional;
 
+import org.ventcase.common.CsvTable;
+
 /**
  * Published latent-heat correlations of the built-in fluids whose vapour hydrogen-bonds, from
  * {@code latent-heat.csv} (sources in its header), matched by CAS number. They anchor the
@@ -115,16 +117,16 @@ public final class LatentHeatCorrelation {
 
     private static Map<String, Correlation> load() {
         Map<String, Correlation> out = new HashMap<>();
-        for (Map<String, String> row : TwuParameters.readTable(RESOURCE)) {
-            if (!"PPDS12".equals(row.get("equation"))) {
-                throw new IllegalStateException(RESOURCE + ": unknown equation " + row.get("equation"));
+        for (CsvTable.Row row : CsvTable.resource(LatentHeatCorrelation.class, RESOURCE, CsvTable.LastColumn.FIELD).rows()) {
+            if (!"PPDS12".equals(row.text("equation"))) {
+                throw new IllegalStateException(RESOURCE + ": unknown equation " + row.text("equation"));
             }
-            Correlation c = new Correlation(row.get("name"), TwuParameters.num(row, "Tc_K"),
-                    TwuParameters.num(row, "A"), TwuParameters.num(row, "B"), TwuParameters.num(row, "C"),
-                    TwuParameters.num(row, "D"), TwuParameters.num(row, "E"), TwuParameters.num(row, "Tmin_K"),
+            Correlation c = new Correlation(row.text("name"), row.number("Tc_K"),
+                    row.number("A"), row.number("B"), row.number("C"),
+                    row.number("D"), row.number("E"), row.number("Tmin_K"),
                     CITATION);
-            if (out.put(row.get("cas"), c) != null) {
-                throw new IllegalStateException(RESOURCE + ": two rows for CAS " + row.get("cas"));
+            if (out.put(row.text("cas"), c) != null) {
+                throw new IllegalStateException(RESOURCE + ": two rows for CAS " + row.text("cas"));
             }
         }
         return Map.copyOf(out);

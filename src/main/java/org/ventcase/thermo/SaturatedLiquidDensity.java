@@ -4,6 +4,8 @@ import java.util.HashMap;
 import java.util.Map;
 import java.util.Optional;
 
+import org.ventcase.common.CsvTable;
+
 /**
  * Published saturated-liquid density correlations of the built-in components, from
  * {@code liquid-density.csv} (sources in its header), matched by CAS number. They anchor the
@@ -74,20 +76,20 @@ public final class SaturatedLiquidDensity {
 
     private static Map<String, Correlation> load() {
         Map<String, Correlation> out = new HashMap<>();
-        for (Map<String, String> row : TwuParameters.readTable(RESOURCE)) {
-            String eq = row.get("equation");
+        for (CsvTable.Row row : CsvTable.resource(SaturatedLiquidDensity.class, RESOURCE, CsvTable.LastColumn.FIELD).rows()) {
+            String eq = row.text("equation");
             if (!"DIPPR105".equals(eq) && !"IAPWS1992".equals(eq)) {
                 throw new IllegalStateException(RESOURCE + ": unknown equation " + eq);
             }
-            String source = row.get("source");
+            String source = row.text("source");
             String citation = source.startsWith("Perry8-T2-32")
                     ? "DIPPR eq. 105, Perry's Chemical Engineers' Handbook 8th ed. (2008) Table 2-32"
                     : source;
-            Correlation c = new Correlation(row.get("name"), eq, TwuParameters.num(row, "C1"),
-                    TwuParameters.num(row, "C2"), TwuParameters.num(row, "C3"), TwuParameters.num(row, "C4"),
-                    TwuParameters.num(row, "Tmin_K"), TwuParameters.num(row, "Tmax_K"), citation);
-            if (out.put(row.get("cas"), c) != null) {
-                throw new IllegalStateException(RESOURCE + ": two rows for CAS " + row.get("cas"));
+            Correlation c = new Correlation(row.text("name"), eq, row.number("C1"),
+                    row.number("C2"), row.number("C3"), row.number("C4"),
+                    row.number("Tmin_K"), row.number("Tmax_K"), citation);
+            if (out.put(row.text("cas"), c) != null) {
+                throw new IllegalStateException(RESOURCE + ": two rows for CAS " + row.text("cas"));
             }
         }
         return Map.copyOf(out);

@@ -1,15 +1,10 @@
 package org.ventcase.thermo;
 
-import java.io.BufferedReader;
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.InputStreamReader;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
 import java.util.HashMap;
-import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+
+import org.ventcase.common.CsvTable;
 
 /**
  * The published Twu alpha parameters of the translated-consistent Peng-Robinson model (set tcPR),
@@ -63,60 +58,19 @@ public final class TwuParameters {
     private static Map<String, Set> load() {
         ComponentLibrary lib = ComponentLibrary.builtIn();
         Map<String, Set> out = new HashMap<>();
-        for (Map<String, String> row : readTable(RESOURCE)) {
-            String name = row.get("component");
-            if (row.getOrDefault("L", "").isBlank()) {
+        for (CsvTable.Row row : CsvTable.resource(TwuParameters.class, RESOURCE, CsvTable.LastColumn.FIELD).rows()) {
+            String name = row.required("component");
+            if (row.text("L").isEmpty()) {
                 continue; // listed without parameters (hydrogen): the model's fallback applies
             }
             Component c = lib.find(name).orElseThrow(() -> new IllegalStateException(
                     RESOURCE + ": '" + name + "' is not a built-in component"));
-            Set s = new Set(c.name(), num(row, "Tc_K"), num(row, "Pc_Pa"), num(row, "omega"), num(row, "L"),
-                    num(row, "M"), num(row, "N"), num(row, "c_m3_mol"));
+            Set s = new Set(c.name(), row.number("Tc_K"), row.number("Pc_Pa"), row.number("omega"), row.number("L"),
+                    row.number("M"), row.number("N"), row.number("c_m3_mol"));
             if (out.put(c.cas(), s) != null) {
                 throw new IllegalStateException(RESOURCE + ": two rows for " + name);
             }
         }
         return Map.copyOf(out);
-    }
-
-    static double num(Map<String, String> row, String col) {
-        String v = row.get(col);
-        if (v == null || v.isBlank()) {
-            throw new IllegalStateException("missing " + col + " in " + row);
-        }
-        return Double.parseDouble(v.trim());
-    }
-
-    /** Reads a packaged CSV table ('#' comment lines, one header line) into rows keyed by column. */
-    static List<Map<String, String>> readTable(String resource) {
-        try (InputStream in = TwuParameters.class.getResourceAsStream(resource)) {
-            if (in == null) {
-                throw new IllegalStateException("resource missing: " + resource);
-            }
-            BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8));
-            List<String> header = null;
-            List<Map<String, String>> rows = new java.util.ArrayList<>();
-            String line;
-            int no = 0;
-            while ((line = r.readLine()) != null) {
-                no++;
-                if (line.isBlank() || line.startsWith("#")) {
-                    continue;
-                }
-                List<String> f = ComponentLibrary.splitCsv(line, resource + ":" + no);
-                if (header == null) {
-                    header = f;
-                    continue;
-                }
-                Map<String, String> row = new HashMap<>();
-                for (int i = 0; i < header.size() && i < f.size(); i++) {
-                    row.put(header.get(i).trim(), f.get(i));
-                }
-                rows.add(row);
-            }
-            return rows;
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
     }
 }

@@ -35,7 +35,7 @@ public final class ReferenceCsv {
                     header = false;
                     continue;
                 }
-                out.add(ComponentLibrary.splitCsv(line, name));
+                out.add(org.ventcase.common.CsvTable.split(line, name, 0));
             }
         }
         return out;

@@ -1,6 +1,5 @@
 package org.ventcase.thermo.mix;
 
-import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
@@ -15,6 +14,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 
+import org.ventcase.common.CsvTable;
 import org.ventcase.common.InvalidInputException;
 import org.ventcase.thermo.Component;
 import org.ventcase.thermo.EosVariant;
@@ -171,6 +171,9 @@ public final class KijTable {
         return Holder.BUILT_IN;
     }
 
+    /** The columns of a k_ij table, in order; the last (source) may contain commas. */
+    public static final List<String> COLUMNS = List.of("component_a", "component_b", "eos", "kij", "source");
+
     /**
      * Parses a table: lines starting with '#' are comments; the first other line is the header
      * {@code component_a,component_b,eos,kij,source}. The source column may contain commas.
@@ -182,55 +185,29 @@ public final class KijTable {
         for (Family f : Family.values()) {
             map.put(f, new HashMap<>());
         }
-        BufferedReader br = new BufferedReader(reader);
-        String line;
-        int lineNo = 0;
-        boolean header = false;
-        while ((line = br.readLine()) != null) {
-            lineNo++;
-            String t = line.trim();
-            if (t.isEmpty() || t.startsWith("#")) {
-                continue;
-            }
-            String where = origin + ":" + lineNo;
-            String[] f = t.split(",", 5);
-            if (!header) {
-                if (f.length != 5 || !f[0].equals("component_a") || !f[4].equals("source")) {
-                    throw InvalidInputException.invalid(where, t, "expected header component_a,component_b,eos,kij,source");
-                }
-                header = true;
-                continue;
-            }
-            if (f.length != 5) {
-                throw InvalidInputException.invalid(where, t, "expected 5 fields");
-            }
+        CsvTable table = CsvTable.read(reader, origin, CsvTable.LastColumn.REST_OF_LINE);
+        if (!table.columns().equals(COLUMNS)) {
+            throw InvalidInputException.invalid(table.headerWhere(), String.join(",", table.columns()),
+                    "expected header " + String.join(",", COLUMNS));
+        }
+        for (CsvTable.Row row : table.rows()) {
+            String where = row.where();
             Family fam;
             try {
-                fam = Family.valueOf(f[2].trim().toUpperCase(Locale.ROOT));
+                fam = Family.valueOf(row.text("eos").toUpperCase(Locale.ROOT));
             } catch (IllegalArgumentException e) {
-                throw InvalidInputException.invalid(where + ".eos", f[2], "expected PR or SRK");
+                throw InvalidInputException.invalid(where + ".eos", row.text("eos"), "expected PR or SRK");
             }
-            double k;
-            try {
-                k = Double.parseDouble(f[3].trim());
-            } catch (NumberFormatException e) {
-                throw InvalidInputException.invalid(where + ".kij", f[3], "expected a number");
-            }
+            double k = row.number("kij");
             InvalidInputException.requireInRange(where + ".kij", k, -0.99, 0.99, "");
-            String src = f[4].trim();
-            if (src.isEmpty()) {
-                throw InvalidInputException.missing(where + ".source", "every k_ij needs a source");
-            }
-            Pair p = Pair.of(f[0], f[1]);
+            String src = row.required("source");
+            Pair p = Pair.of(row.text("component_a"), row.text("component_b"));
             if (p.first().equals(p.second())) {
-                throw InvalidInputException.invalid(where, t, "a k_ij row needs two different components");
+                throw InvalidInputException.invalid(where, p, "a k_ij row needs two different components");
             }
             if (map.get(fam).putIfAbsent(p, new Entry(p, fam, k, src)) != null) {
-                throw InvalidInputException.invalid(where, t, "duplicate row for " + p + " " + fam);
+                throw InvalidInputException.invalid(where, p, "duplicate row for " + p + " " + fam);
             }
-        }
-        if (!header) {
-            throw InvalidInputException.missing(origin, "the k_ij table has no header");
         }
         Map<Family, Map<Pair, Entry>> frozen = new HashMap<>();
         map.forEach((k, v) -> frozen.put(k, Collections.unmodifiableMap(v)));
