@@ -112,8 +112,8 @@ final class AuditView {
         VBox body = new VBox(12);
         body.setId("audit-body");
         Runnable show = () -> {
-            AuditViewModel.State st = avm.state().get();
-            boolean busy = st == AuditViewModel.State.RUNNING;
+            JobState st = avm.state().get();
+            boolean busy = st == JobState.RUNNING;
             thName.setText(avm.thresholdsFile().get().map(AuditRunner.Input::name)
                     .orElse(Messages.get("audit.thresholds.none")));
             cancel.setDisable(!busy);
@@ -125,13 +125,13 @@ final class AuditView {
             bar.setProgress(n == 0 ? ProgressBar.INDETERMINATE_PROGRESS : (double) avm.done().get() / n);
             status.setText(switch (st) {
                 case IDLE -> Messages.get("audit.none");
-                case DONE -> Messages.get("audit.state.done");
+                case CURRENT -> Messages.get("audit.state.done");
                 case RUNNING -> n == 0 ? avm.message().get()
                         : avm.message().get() + " " + Messages.get("audit.state.progress", avm.done().get(), n);
                 default -> avm.message().get();
             });
-            status.pseudoClassStateChanged(PROBLEM, st == AuditViewModel.State.FAILED);
-            status.pseudoClassStateChanged(CURRENT, st == AuditViewModel.State.DONE);
+            status.pseudoClassStateChanged(PROBLEM, st == JobState.FAILED);
+            status.pseudoClassStateChanged(CURRENT, st == JobState.CURRENT);
         };
         Runnable refill = () -> {
             body.getChildren().clear();
@@ -344,7 +344,7 @@ final class AuditView {
         status.setWrapText(true);
         status.textProperty().bind(avm.exportMessage());
         Runnable enable = () -> {
-            boolean ok = avm.state().get() == AuditViewModel.State.DONE && avm.outcome().get().isPresent();
+            boolean ok = avm.state().get() == JobState.CURRENT && avm.outcome().get().isPresent();
             csv.setDisable(!ok);
             pdf.setDisable(!ok);
         };

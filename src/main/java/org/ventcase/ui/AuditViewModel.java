@@ -22,30 +22,15 @@ import org.ventcase.app.AuditRunner;
  */
 public final class AuditViewModel {
 
-    /** Where the audit stands. */
-    public enum State {
-        /** No register chosen yet. */
-        IDLE,
-        /** The audit is running. */
-        RUNNING,
-        /** The audit shown is that of the register and thresholds chosen. */
-        DONE,
-        /** The engineer cancelled the run. */
-        CANCELLED,
-        /** The register or thresholds could not be read; {@link #message()} says why. */
-        FAILED
-    }
 
     private final AuditRunner runner;
     private final LiveCalculation.Env env;
     private final int threads;
 
-    private final ReadOnlyObjectWrapper<State> state = new ReadOnlyObjectWrapper<>(this, "state", State.IDLE);
     private final ReadOnlyObjectWrapper<Optional<AuditRunner.Outcome>> outcome = new ReadOnlyObjectWrapper<>(this,
             "outcome", Optional.empty());
     private final ReadOnlyIntegerWrapper done = new ReadOnlyIntegerWrapper(this, "done", 0);
     private final ReadOnlyIntegerWrapper total = new ReadOnlyIntegerWrapper(this, "total", 0);
-    private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
     private final ReadOnlyStringWrapper exportMessage = new ReadOnlyStringWrapper(this, "exportMessage", "");
     private final ReadOnlyObjectWrapper<Optional<AuditRunner.Input>> thresholds = new ReadOnlyObjectWrapper<>(this,
             "thresholds", Optional.empty());
@@ -62,7 +47,7 @@ public final class AuditViewModel {
     public AuditViewModel(AuditRunner runner, LiveCalculation.Env env, int threads) {
         this.runner = runner;
         this.env = env;
-        this.job = new BackgroundJob(env);
+        this.job = new BackgroundJob(this, env);
         this.threads = threads;
     }
 
@@ -87,11 +72,7 @@ public final class AuditViewModel {
 
     /** Cancels the run in progress; nothing is shown for it. */
     public void cancel() {
-        if (state.get() != State.RUNNING) {
-            return;
-        }
-        job.supersede();
-        setState(State.CANCELLED, Messages.get("audit.state.cancelled"));
+        job.cancel(Messages.get("audit.state.cancelled"));
     }
 
     private void start(AuditRunner.Input reg) {
@@ -102,20 +83,20 @@ public final class AuditViewModel {
         exportMessage.set("");
         done.set(0);
         total.set(0);
-        setState(State.RUNNING, Messages.get("audit.state.running", reg.name()));
+        job.report(JobState.RUNNING, Messages.get("audit.state.running", reg.name()));
         job.<AuditRunner.Outcome, RowsDone>start((p, cancelled) -> runner.run(reg, th, threads,
                 (d, n) -> p.accept(new RowsDone(d, n)), cancelled),
                 r -> {
-                    if (state.get() == State.RUNNING && r.done() >= done.get()) {
+                    if (job.now() == JobState.RUNNING && r.done() >= done.get()) {
                         total.set(r.total());
                         done.set(r.done());
                     }
                 },
                 o -> {
                     outcome.set(Optional.of(o));
-                    setState(State.DONE, "");
+                    job.report(JobState.CURRENT, "");
                 },
-                e -> setState(State.FAILED, Messages.get("audit.failed", reg.name(), ReviewViewModel.describe(e))));
+                e -> job.report(JobState.FAILED, Messages.get("audit.failed", reg.name(), ReviewViewModel.describe(e))));
     }
 
     /** Writes the per-vessel CSV off the application thread; {@link #exportMessage()} reports. */
@@ -140,7 +121,7 @@ public final class AuditViewModel {
 
     private void export(Writer w, Path target) {
         Optional<AuditRunner.Outcome> o = outcome.get();
-        if (o.isEmpty() || state.get() != State.DONE) {
+        if (o.isEmpty() || job.now() != JobState.CURRENT) {
             exportMessage.set(Messages.get("audit.export.notDone"));
             return;
         }
@@ -156,15 +137,10 @@ public final class AuditViewModel {
         });
     }
 
-    private void setState(State s, String m) {
-        message.set(m);
-        state.set(s);
-    }
-
     // ------------------------------------------------------------------------------ state
 
-    public ReadOnlyObjectProperty<State> state() {
-        return state.getReadOnlyProperty();
+    public ReadOnlyObjectProperty<JobState> state() {
+        return job.state();
     }
 
     /** The last audit finished (present only in state DONE). */
@@ -184,7 +160,7 @@ public final class AuditViewModel {
 
     /** What is being done, or why the audit could not be made; "" when done. */
     public ReadOnlyStringProperty message() {
-        return message.getReadOnlyProperty();
+        return job.message();
     }
 
     /** What the last export did. */

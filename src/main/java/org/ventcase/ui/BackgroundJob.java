@@ -4,6 +4,11 @@ import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.function.BooleanSupplier;
 import java.util.function.Consumer;
 
+import javafx.beans.property.ReadOnlyObjectProperty;
+import javafx.beans.property.ReadOnlyObjectWrapper;
+import javafx.beans.property.ReadOnlyStringProperty;
+import javafx.beans.property.ReadOnlyStringWrapper;
+
 import org.ventcase.app.CaseRunner;
 
 /**
@@ -15,6 +20,8 @@ import org.ventcase.app.CaseRunner;
  * <p>The contract with the work: it receives a progress sink and a cancel flag; a runner that sees
  * the flag stops by throwing {@link CaseRunner.Cancelled}, which the job drops (whoever superseded it
  * owns the state now). Any other runtime exception is a failure, reported to {@code onFailed}.
+ * The job also holds where it stands ({@link JobState}) and the line of text shown beside it, so
+ * that the wizard, the review and the audit cancel, report and show progress alike.
  * Not thread-safe: call it from the application thread.
  */
 final class BackgroundJob {
@@ -30,8 +37,52 @@ final class BackgroundJob {
     private LiveCalculation.Cancellable pending = () -> { };
     private AtomicBoolean cancelled = new AtomicBoolean(false);
 
-    BackgroundJob(LiveCalculation.Env env) {
+    private final ReadOnlyObjectWrapper<JobState> state;
+    private final ReadOnlyStringWrapper message;
+
+    /** @param bean the view model whose state this is (the properties' bean) */
+    BackgroundJob(Object bean, LiveCalculation.Env env) {
         this.env = env;
+        this.state = new ReadOnlyObjectWrapper<>(bean, "state", JobState.IDLE);
+        this.message = new ReadOnlyStringWrapper(bean, "message", "");
+    }
+
+    /** Sets where the job stands and the text shown beside it. */
+    void report(JobState s, String m) {
+        message.set(m);
+        state.set(s);
+    }
+
+    /** Replaces the text beside a running job (a progress step); ignored unless it is running. */
+    void step(String m) {
+        if (state.get() == JobState.RUNNING) {
+            message.set(m);
+        }
+    }
+
+    /** Where the job stands now. */
+    JobState now() {
+        return state.get();
+    }
+
+    ReadOnlyObjectProperty<JobState> state() {
+        return state.getReadOnlyProperty();
+    }
+
+    ReadOnlyStringProperty message() {
+        return message.getReadOnlyProperty();
+    }
+
+    /**
+     * The Cancel button: supersedes what is pending or running and reports {@link JobState#CANCELLED}
+     * with {@code m}; does nothing when nothing is pending or running.
+     */
+    void cancel(String m) {
+        if (state.get() != JobState.RUNNING && state.get() != JobState.WAITING) {
+            return;
+        }
+        supersede();
+        report(JobState.CANCELLED, m);
     }
 
     /** Supersedes what is pending or running: its progress and result are dropped, its run is asked to stop. */

@@ -13,7 +13,6 @@ import javafx.beans.property.ReadOnlyIntegerWrapper;
 import javafx.beans.property.ReadOnlyObjectProperty;
 import javafx.beans.property.ReadOnlyObjectWrapper;
 import javafx.beans.property.ReadOnlyStringProperty;
-import javafx.beans.property.ReadOnlyStringWrapper;
 import javafx.util.Duration;
 
 import org.ventcase.casefile.ValidatedCase;
@@ -35,23 +34,6 @@ public final class LiveCalculation {
     /** Quiet time after the last edit before a recalculation starts, ms. */
     public static final long DEBOUNCE_MS = 600;
 
-    /** Where the live calculation stands. */
-    public enum State {
-        /** No case, or nothing asked for yet. */
-        IDLE,
-        /** An edit arrived; a recalculation starts when the inputs have been still for the debounce time. */
-        WAITING,
-        /** A recalculation is running. */
-        RUNNING,
-        /** The result shown is that of the current inputs. */
-        CURRENT,
-        /** The case has problems: no new numbers until the marked fields are fixed. */
-        INVALID,
-        /** The engineer cancelled the run; the result shown (if any) is of earlier inputs. */
-        CANCELLED,
-        /** The calculation stopped with an error ({@link #message()} says why). */
-        FAILED
-    }
 
     /** A scheduled action that can be called off. */
     @FunctionalInterface
@@ -119,11 +101,9 @@ public final class LiveCalculation {
     private final Supplier<Optional<ValidatedCase>> cases;
     private final long debounceMs;
 
-    private final ReadOnlyObjectWrapper<State> state = new ReadOnlyObjectWrapper<>(this, "state", State.IDLE);
     private final ReadOnlyObjectWrapper<Optional<CaseSummary>> summary = new ReadOnlyObjectWrapper<>(this, "summary",
             Optional.empty());
     private final ReadOnlyDoubleWrapper progress = new ReadOnlyDoubleWrapper(this, "progress", 0);
-    private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
     private final ReadOnlyIntegerWrapper runs = new ReadOnlyIntegerWrapper(this, "runs", 0);
 
     /** The run in progress or pending; a change of the case supersedes it. */
@@ -134,7 +114,7 @@ public final class LiveCalculation {
         this.env = env;
         this.cases = cases;
         this.debounceMs = debounceMs;
-        this.job = new BackgroundJob(env);
+        this.job = new BackgroundJob(this, env);
     }
 
     /**
@@ -144,10 +124,10 @@ public final class LiveCalculation {
     public void changed() {
         job.supersede();
         if (cases.get().isEmpty()) {
-            setState(State.INVALID, "");
+            job.report(JobState.INVALID, "");
             return;
         }
-        setState(State.WAITING, "");
+        job.report(JobState.WAITING, "");
         job.startAfter(debounceMs, this::start);
     }
 
@@ -156,10 +136,10 @@ public final class LiveCalculation {
         job.supersede();
         summary.set(Optional.empty());
         if (cases.get().isEmpty()) {
-            setState(State.INVALID, "");
+            job.report(JobState.INVALID, "");
             return;
         }
-        setState(State.WAITING, "");
+        job.report(JobState.WAITING, "");
         job.startAfter(0, this::start);
     }
 
@@ -171,50 +151,41 @@ public final class LiveCalculation {
 
     /** Cancels the run in progress (the Cancel button); the last good result stays, marked not current. */
     public void cancel() {
-        if (state.get() != State.RUNNING && state.get() != State.WAITING) {
-            return;
-        }
-        job.supersede();
-        setState(State.CANCELLED, Messages.get("results.cancelled"));
+        job.cancel(Messages.get("results.cancelled"));
     }
 
     private void start() {
         Optional<ValidatedCase> kase = cases.get();
         if (kase.isEmpty()) {
-            setState(State.INVALID, "");
+            job.report(JobState.INVALID, "");
             return;
         }
         progress.set(0);
-        setState(State.RUNNING, Messages.get("results.running"));
+        job.report(JobState.RUNNING, Messages.get("results.running"));
         runs.set(runs.get() + 1);
         ValidatedCase k = kase.get();
         job.<CaseSummary, Step>start((p, cancelled) -> runner.run(k, (f, m) -> p.accept(new Step(f, m)), cancelled),
                 st -> {
-                    if (state.get() == State.RUNNING) {
+                    if (job.now() == JobState.RUNNING) {
                         progress.set(st.fraction());
-                        message.set(st.what());
                     }
+                    job.step(st.what());
                 },
                 s -> {
                     summary.set(Optional.of(s));
                     progress.set(1);
-                    setState(State.CURRENT, "");
+                    job.report(JobState.CURRENT, "");
                 },
-                e -> setState(State.FAILED, Messages.get("results.failed", String.valueOf(e.getMessage()))));
+                e -> job.report(JobState.FAILED, Messages.get("results.failed", String.valueOf(e.getMessage()))));
     }
 
     /** One progress report of a run: the fraction done and what is being computed. */
     record Step(double fraction, String what) {
     }
 
-    private void setState(State s, String m) {
-        message.set(m);
-        state.set(s);
-    }
-
     /** Where the live calculation stands. */
-    public ReadOnlyObjectProperty<State> state() {
-        return state.getReadOnlyProperty();
+    public ReadOnlyObjectProperty<JobState> state() {
+        return job.state();
     }
 
     /** The last good result (of the current inputs only when {@link #current()}). */
@@ -224,7 +195,7 @@ public final class LiveCalculation {
 
     /** True when the result is that of the inputs as they are now. */
     public boolean current() {
-        return state.get() == State.CURRENT;
+        return job.now() == JobState.CURRENT;
     }
 
     /** Fraction done of the run in progress. */
@@ -234,7 +205,7 @@ public final class LiveCalculation {
 
     /** What is being computed, why the run stopped, or "" . */
     public ReadOnlyStringProperty message() {
-        return message.getReadOnlyProperty();
+        return job.message();
     }
 
     /** Number of recalculations started so far. */

@@ -109,12 +109,12 @@ final class ReviewView {
         VBox body = new VBox(12);
         body.setId("review-body");
         Runnable show = () -> {
-            ReviewViewModel.State st = rvm.state().get();
-            boolean busy = st == ReviewViewModel.State.RUNNING || st == ReviewViewModel.State.WAITING;
+            JobState st = rvm.state().get();
+            boolean busy = st == JobState.RUNNING || st == JobState.WAITING;
             rerun.setDisable(rvm.source().get().isEmpty() || busy);
             cancel.setDisable(!busy);
-            bar.setVisible(st == ReviewViewModel.State.RUNNING);
-            bar.setManaged(st == ReviewViewModel.State.RUNNING);
+            bar.setVisible(st == JobState.RUNNING);
+            bar.setManaged(st == JobState.RUNNING);
             // Review.run reports no progress of its own: past the reading steps the bar only says it is working
             bar.setProgress(rvm.progress().get() >= 0.2 && rvm.progress().get() < 1 ? ProgressBar.INDETERMINATE_PROGRESS
                     : rvm.progress().get());
@@ -123,8 +123,8 @@ final class ReviewView {
                 case CURRENT -> Messages.get("review.state.current");
                 default -> rvm.message().get();
             });
-            status.pseudoClassStateChanged(PROBLEM, st == ReviewViewModel.State.FAILED);
-            status.pseudoClassStateChanged(CURRENT, st == ReviewViewModel.State.CURRENT);
+            status.pseudoClassStateChanged(PROBLEM, st == JobState.FAILED);
+            status.pseudoClassStateChanged(CURRENT, st == JobState.CURRENT);
             boolean have = rvm.outcome().get().isPresent();
             body.pseudoClassStateChanged(STALE, have && !rvm.current());
             body.getChildren().clear();

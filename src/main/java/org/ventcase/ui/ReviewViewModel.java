@@ -35,21 +35,6 @@ import org.ventcase.app.ReviewRunner;
  */
 public final class ReviewViewModel {
 
-    /** Where the review stands. */
-    public enum State {
-        /** No claimed-value file chosen yet. */
-        IDLE,
-        /** A tolerance changed: the review runs again when the edits pause. */
-        WAITING,
-        /** The review is running. */
-        RUNNING,
-        /** The review shown is that of the file and tolerances as they are now. */
-        CURRENT,
-        /** The engineer cancelled the run; the review shown (if any) is of earlier tolerances. */
-        CANCELLED,
-        /** The file, the case or the review could not be used; {@link #message()} says why. */
-        FAILED
-    }
 
     /** One editable tolerance: the text in the field and the message beside it. */
     public static final class ToleranceField {
@@ -91,13 +76,11 @@ public final class ReviewViewModel {
     private final Supplier<ReviewRunner.OpenCase> openCase;
     private final long debounceMs;
 
-    private final ReadOnlyObjectWrapper<State> state = new ReadOnlyObjectWrapper<>(this, "state", State.IDLE);
     private final ReadOnlyObjectWrapper<Optional<ReviewRunner.Outcome>> outcome = new ReadOnlyObjectWrapper<>(this,
             "outcome", Optional.empty());
     private final ReadOnlyObjectWrapper<Optional<ReviewRunner.Source>> source = new ReadOnlyObjectWrapper<>(this,
             "source", Optional.empty());
     private final ReadOnlyDoubleWrapper progress = new ReadOnlyDoubleWrapper(this, "progress", 0);
-    private final ReadOnlyStringWrapper message = new ReadOnlyStringWrapper(this, "message", "");
     private final ReadOnlyStringWrapper exportMessage = new ReadOnlyStringWrapper(this, "exportMessage", "");
     private final Map<ReviewQuantity, ToleranceField> fields = new EnumMap<>(ReviewQuantity.class);
     private Tolerances tolerances = Tolerances.defaults();
@@ -120,7 +103,7 @@ public final class ReviewViewModel {
         this.env = env;
         this.openCase = openCase;
         this.debounceMs = debounceMs;
-        this.job = new BackgroundJob(env);
+        this.job = new BackgroundJob(this, env);
         for (ReviewQuantity q : ReviewQuantity.values()) {
             if (q.kind() == ReviewQuantity.Kind.EXACT) {
                 continue;
@@ -159,11 +142,7 @@ public final class ReviewViewModel {
 
     /** Cancels the run in progress; the review shown (if any) stays, marked not current. */
     public void cancel() {
-        if (state.get() != State.RUNNING && state.get() != State.WAITING) {
-            return;
-        }
-        job.supersede();
-        setState(State.CANCELLED, Messages.get("review.state.cancelled"));
+        job.cancel(Messages.get("review.state.cancelled"));
     }
 
     /** Puts every tolerance back to its default and runs the review again. */
@@ -218,17 +197,17 @@ public final class ReviewViewModel {
             return;
         }
         Optional<ReviewRunner.Outcome> shown = outcome.get();
-        if (shown.isPresent() && state.get() != State.RUNNING && lastOpen == openCase.get()) {
+        if (shown.isPresent() && job.now() != JobState.RUNNING && lastOpen == openCase.get()) {
             // The case and the claimed values are unchanged: judge the computed review again with the
             // new tolerances, here and now (no case is computed again; ReviewRunner.Outcome.withTolerances).
             job.supersede();
             outcome.set(Optional.of(shown.get().withTolerances(tolerances)));
             progress.set(1);
-            setState(State.CURRENT, "");
+            job.report(JobState.CURRENT, "");
             return;
         }
         job.supersede();
-        setState(State.WAITING, Messages.get("review.state.waiting"));
+        job.report(JobState.WAITING, Messages.get("review.state.waiting"));
         job.startAfter(debounceMs, this::start);
     }
 
@@ -240,22 +219,22 @@ public final class ReviewViewModel {
         Tolerances tol = tolerances;
         ReviewRunner.OpenCase open = openCase.get();
         progress.set(0);
-        setState(State.RUNNING, Messages.get("review.state.running", s.get().name()));
+        job.report(JobState.RUNNING, Messages.get("review.state.running", s.get().name()));
         job.<ReviewRunner.Outcome, LiveCalculation.Step>start((p, cancelled) -> runner.run(s.get(), open, tol,
                 (f, m) -> p.accept(new LiveCalculation.Step(f, m)), cancelled),
                 st -> {
-                    if (state.get() == State.RUNNING) {
+                    if (job.now() == JobState.RUNNING) {
                         progress.set(st.fraction());
-                        message.set(Messages.get("review.state.step", st.what()));
                     }
+                    job.step(Messages.get("review.state.step", st.what()));
                 },
                 o -> {
                     lastOpen = open;
                     outcome.set(Optional.of(o));
                     progress.set(1);
-                    setState(State.CURRENT, "");
+                    job.report(JobState.CURRENT, "");
                 },
-                e -> setState(State.FAILED, Messages.get("review.failed", s.get().name(), describe(e))));
+                e -> job.report(JobState.FAILED, Messages.get("review.failed", s.get().name(), describe(e))));
     }
 
     /** The message of a failure as the engineer needs it (the field and what is accepted). */
@@ -287,7 +266,7 @@ public final class ReviewViewModel {
 
     private void export(Consumer<ReviewRunner.Outcome> write, Path target) {
         Optional<ReviewRunner.Outcome> o = outcome.get();
-        if (o.isEmpty() || state.get() != State.CURRENT) {
+        if (o.isEmpty() || job.now() != JobState.CURRENT) {
             exportMessage.set(Messages.get("review.export.notCurrent"));
             return;
         }
@@ -304,11 +283,6 @@ public final class ReviewViewModel {
 
     // ------------------------------------------------------------------------------ state
 
-    private void setState(State s, String m) {
-        message.set(m);
-        state.set(s);
-    }
-
     /** A tolerance in the field's unit, without trailing zeros: 0.05 -> "5", 1.0 K -> "1". */
     static String number(ReviewQuantity q, double tolerance) {
         double v = q.kind() == ReviewQuantity.Kind.ABSOLUTE_KELVIN ? tolerance : tolerance * 100;
@@ -316,8 +290,8 @@ public final class ReviewViewModel {
                 .toPlainString();
     }
 
-    public ReadOnlyObjectProperty<State> state() {
-        return state.getReadOnlyProperty();
+    public ReadOnlyObjectProperty<JobState> state() {
+        return job.state();
     }
 
     /** The last review made (of the current file and tolerances only when the state is CURRENT). */
@@ -336,7 +310,7 @@ public final class ReviewViewModel {
 
     /** What is being done, or why the review could not be made; "" when current. */
     public ReadOnlyStringProperty message() {
-        return message.getReadOnlyProperty();
+        return job.message();
     }
 
     /** What the last export did. */
@@ -365,6 +339,6 @@ public final class ReviewViewModel {
 
     /** True when the review shown is that of the file and tolerances as they are now. */
     public boolean current() {
-        return state.get() == State.CURRENT;
+        return job.now() == JobState.CURRENT;
     }
 }

@@ -321,17 +321,17 @@ final class StepViews {
         VBox out = new VBox(10);
         out.setId("results-body");
         Runnable show = () -> {
-            LiveCalculation.State st = live.state().get();
-            boolean busy = st == LiveCalculation.State.RUNNING || st == LiveCalculation.State.WAITING;
+            JobState st = live.state().get();
+            boolean busy = st == JobState.RUNNING || st == JobState.WAITING;
             run.setDisable(vm.validated().isEmpty());
             cancel.setDisable(!busy);
-            bar.setVisible(st == LiveCalculation.State.RUNNING);
-            bar.setManaged(st == LiveCalculation.State.RUNNING);
+            bar.setVisible(st == JobState.RUNNING);
+            bar.setManaged(st == JobState.RUNNING);
             boolean have = live.summary().get().isPresent();
             status.setText(statusLine(st, have, live.message().get()));
-            status.pseudoClassStateChanged(PROBLEM, st == LiveCalculation.State.INVALID
-                    || st == LiveCalculation.State.FAILED);
-            status.pseudoClassStateChanged(CURRENT, st == LiveCalculation.State.CURRENT);
+            status.pseudoClassStateChanged(PROBLEM, st == JobState.INVALID
+                    || st == JobState.FAILED);
+            status.pseudoClassStateChanged(CURRENT, st == JobState.CURRENT);
             out.pseudoClassStateChanged(STALE, have && !live.current());
             out.getChildren().clear();
             live.summary().get().ifPresent(sum -> showSummary(out, sum, units.getValue()));
@@ -350,7 +350,7 @@ final class StepViews {
         });
         box.getChildren().addAll(controls, status, out, cautions());
         show.run();
-        if (live.state().get() == LiveCalculation.State.IDLE) {
+        if (live.state().get() == JobState.IDLE) {
             live.recalculate();
         }
         return box;
@@ -361,7 +361,7 @@ final class StepViews {
     private static final javafx.css.PseudoClass CURRENT = javafx.css.PseudoClass.getPseudoClass("current");
 
     /** One line saying whether the numbers shown are those of the inputs as they are now. */
-    static String statusLine(LiveCalculation.State st, boolean haveResult, String message) {
+    static String statusLine(JobState st, boolean haveResult, String message) {
         String stale = haveResult ? " " + Messages.get("results.stale") : "";
         return switch (st) {
             case IDLE -> "";

@@ -71,10 +71,10 @@ class AuditViewModelTest {
 
         AuditViewModel vm = new AuditViewModel(new AuditRunner(), env, 2);
         vm.openDemo();
-        assertEquals(AuditViewModel.State.RUNNING, vm.state().get());
+        assertEquals(JobState.RUNNING, vm.state().get());
         assertTrue(vm.outcome().get().isEmpty());
         drain();
-        assertEquals(AuditViewModel.State.DONE, vm.state().get(), vm.message().get());
+        assertEquals(JobState.CURRENT, vm.state().get(), vm.message().get());
         AuditRunner.Outcome o = vm.outcome().get().orElseThrow();
         assertEquals(Integer.parseInt(m.group(1)), o.result().rows().size());
         assertEquals(Long.parseLong(m.group(2)), o.count(VesselAudit.Status.OK));
@@ -112,16 +112,16 @@ class AuditViewModelTest {
         AuditViewModel vm = new AuditViewModel(new AuditRunner(), env, 1);
         vm.open(REGISTER);
         vm.cancel();
-        assertEquals(AuditViewModel.State.CANCELLED, vm.state().get());
+        assertEquals(JobState.CANCELLED, vm.state().get());
         drain();
-        assertEquals(AuditViewModel.State.CANCELLED, vm.state().get());
+        assertEquals(JobState.CANCELLED, vm.state().get());
         assertTrue(vm.outcome().get().isEmpty());
         vm.writeCsv(tmp.resolve("x.csv"));
         assertFalse(Files.exists(tmp.resolve("x.csv")));
 
         vm.open(tmp.resolve("no-such-register.csv"));
         drain();
-        assertEquals(AuditViewModel.State.FAILED, vm.state().get());
+        assertEquals(JobState.FAILED, vm.state().get());
         assertTrue(vm.message().get().contains("no-such-register.csv"), vm.message().get());
     }
 

@@ -57,7 +57,7 @@ class BackgroundJobTest {
 
     @Test
     void aSupersededJobNeverReachesTheScreen() throws Exception {
-        BackgroundJob job = new BackgroundJob(env);
+        BackgroundJob job = new BackgroundJob(this, env);
         List<String> shown = new ArrayList<>();
         CountDownLatch firstRunning = new CountDownLatch(1);
         CountDownLatch release = new CountDownLatch(1);
@@ -96,7 +96,7 @@ class BackgroundJobTest {
 
     @Test
     void cancelledRunIsDroppedAndAFailureOfTheCurrentJobIsReported() throws Exception {
-        BackgroundJob job = new BackgroundJob(env);
+        BackgroundJob job = new BackgroundJob(this, env);
         List<String> shown = new ArrayList<>();
         CountDownLatch ran = new CountDownLatch(2);
         job.<String, String>start((p, cancelled) -> {
@@ -118,7 +118,7 @@ class BackgroundJobTest {
 
     @Test
     void aDebouncedStartIsDroppedWhenSuperseded() {
-        BackgroundJob job = new BackgroundJob(env);
+        BackgroundJob job = new BackgroundJob(this, env);
         List<String> started = new ArrayList<>();
         job.startAfter(600, () -> started.add("first"));
         job.startAfter(600, () -> started.add("second"));
@@ -128,5 +128,26 @@ class BackgroundJobTest {
         job.supersede();
         timers.forEach(Runnable::run);
         assertEquals(List.of("second"), started, "a cancel drops the pending start");
+    }
+
+    @Test
+    void cancelActsOnlyOnAPendingOrRunningJobAndStepsOnlyWhileRunning() {
+        BackgroundJob job = new BackgroundJob(this, env);
+        job.cancel("cancelled");
+        assertEquals(JobState.IDLE, job.now(), "nothing to cancel: the state stays");
+        job.report(JobState.CURRENT, "");
+        job.step("ignored");
+        assertEquals("", job.message().get(), "a progress step after the result does not overwrite it");
+        List<String> started = new ArrayList<>();
+        job.report(JobState.WAITING, "waiting");
+        job.startAfter(600, () -> started.add("run"));
+        job.cancel("cancelled");
+        timers.forEach(Runnable::run);
+        assertEquals(JobState.CANCELLED, job.now());
+        assertEquals("cancelled", job.message().get());
+        assertEquals(List.of(), started, "the cancelled pending start never runs");
+        job.report(JobState.RUNNING, "running");
+        job.step("step 2");
+        assertEquals("step 2", job.message().get());
     }
 }

@@ -177,7 +177,7 @@ class LiveCalculationTest {
         tag.text().set("V-12");
         env.advance(200);
         tag.text().set("V-123");
-        assertEquals(LiveCalculation.State.WAITING, vm.live().state().get());
+        assertEquals(JobState.WAITING, vm.live().state().get());
         assertFalse(vm.live().current(), "the result shown is marked as not current while an edit waits");
         assertEquals("V-2101", shownTag(vm), "the last good result stays visible");
         env.advance(599);
@@ -204,7 +204,7 @@ class LiveCalculationTest {
         env.advance(600);
         assertTrue(probe.running.await(30, TimeUnit.SECONDS));
         env.pumpUntil(() -> vm.live().progress().get() == 0.5);
-        assertEquals(LiveCalculation.State.RUNNING, vm.live().state().get());
+        assertEquals(JobState.RUNNING, vm.live().state().get());
         assertEquals("V-2101", shownTag(vm), "the previous result stays (greyed) while a run is under way");
         // a newer edit arrives while the first run is held
         vm.text("$.identity.tag").text().set("V-NEW");
@@ -212,7 +212,7 @@ class LiveCalculationTest {
         assertEquals(1, probe.cancelledRuns.get(), "the held run saw its cancellation");
         assertEquals(1, probe.finished.get(), "only the first (load) run finished");
         probe.hold.countDown();
-        assertEquals(LiveCalculation.State.WAITING, vm.live().state().get());
+        assertEquals(JobState.WAITING, vm.live().state().get());
         assertEquals("V-2101", shownTag(vm), "the cancelled run's result is never shown");
         env.advance(600);
         env.pumpUntil(() -> vm.live().current());
@@ -232,7 +232,7 @@ class LiveCalculationTest {
         vm.live().cancel();
         env.pumpIdle();
         assertEquals(1, probe.cancelledRuns.get());
-        assertEquals(LiveCalculation.State.CANCELLED, vm.live().state().get());
+        assertEquals(JobState.CANCELLED, vm.live().state().get());
         assertFalse(vm.live().current());
         assertEquals("V-2101", shownTag(vm));
     }
@@ -244,13 +244,13 @@ class LiveCalculationTest {
         WizardViewModel vm = loaded(probe, env);
         vm.text("$.identity.tag").text().set("V-BAD");
         vm.quantity("$.vessel.insideDiameter", Dimension.LENGTH).text().set("3.2");
-        assertEquals(LiveCalculation.State.INVALID, vm.live().state().get());
+        assertEquals(JobState.INVALID, vm.live().state().get());
         assertFalse(vm.live().current());
         env.advance(10_000);
         vm.live().recalculate();
         env.pumpIdle();
         assertEquals(1, probe.started.get(), "no run while the case has a problem, not even on Recalculate");
-        assertEquals(LiveCalculation.State.INVALID, vm.live().state().get());
+        assertEquals(JobState.INVALID, vm.live().state().get());
         assertEquals("V-2101", shownTag(vm), "the old numbers stay, marked not current");
         assertTrue(StepViews.statusLine(vm.live().state().get(), true, "").contains("fix the marked fields"));
         assertTrue(StepViews.statusLine(vm.live().state().get(), true, "").contains("NOT CURRENT"));
@@ -268,9 +268,9 @@ class LiveCalculationTest {
         WizardViewModel vm = new WizardViewModel(CaseRunner.standard(), new UserFiles(tmp.resolve("home")), env, 600);
         vm.newFromTemplate("horizontal-bullet");
         env.advance(0);
-        env.pumpUntil(() -> vm.live().state().get() != LiveCalculation.State.RUNNING
-                && vm.live().state().get() != LiveCalculation.State.WAITING);
-        assertEquals(LiveCalculation.State.CURRENT, vm.live().state().get(), vm.live().message().get());
+        env.pumpUntil(() -> vm.live().state().get() != JobState.RUNNING
+                && vm.live().state().get() != JobState.WAITING);
+        assertEquals(JobState.CURRENT, vm.live().state().get(), vm.live().message().get());
         CaseSummary s = vm.summary().get().orElseThrow();
         assertNotNull(s.governingRow().orElseThrow().orifice().orElseThrow());
     }

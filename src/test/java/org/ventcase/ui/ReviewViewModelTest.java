@@ -76,7 +76,7 @@ class ReviewViewModelTest {
     }
 
     private static ReviewResult result(ReviewViewModel vm) {
-        assertEquals(ReviewViewModel.State.CURRENT, vm.state().get(), vm.message().get());
+        assertEquals(JobState.CURRENT, vm.state().get(), vm.message().get());
         return vm.outcome().get().orElseThrow().result();
     }
 
@@ -126,7 +126,7 @@ class ReviewViewModelTest {
         vm.tolerance(ReviewQuantity.LATENT_HEAT).text().set(pct);
         assertEquals("", vm.tolerance(ReviewQuantity.LATENT_HEAT).message().get());
         // judged again on the spot from the review already computed: current, nothing pending
-        assertEquals(ReviewViewModel.State.CURRENT, vm.state().get());
+        assertEquals(JobState.CURRENT, vm.state().get());
         assertTrue(vm.current());
         ReviewResult after = result(vm);
         assertSame(before.computed(), after.computed(), "the case was not computed again");
@@ -137,7 +137,7 @@ class ReviewViewModelTest {
                 && x.toleranceChanged()));
         // back to the defaults: disagrees again, at once
         vm.resetTolerances();
-        assertEquals(ReviewViewModel.State.CURRENT, vm.state().get());
+        assertEquals(JobState.CURRENT, vm.state().get());
         assertEquals(Verdict.DISAGREES, result(vm).row(ReviewQuantity.LATENT_HEAT).orElseThrow().verdict());
         assertEquals("5", vm.tolerance(ReviewQuantity.LATENT_HEAT).text().get());
     }
@@ -151,7 +151,7 @@ class ReviewViewModelTest {
         assertEquals("K", t.unit());
         t.text().set("25");
         assertTrue(t.message().get().contains("20 K"), t.message().get());
-        assertEquals(ReviewViewModel.State.CURRENT, vm.state().get(), "a refused tolerance starts no run");
+        assertEquals(JobState.CURRENT, vm.state().get(), "a refused tolerance starts no run");
         vm.tolerance(ReviewQuantity.K).text().set("abc");
         assertTrue(vm.tolerance(ReviewQuantity.K).message().get().contains("%"));
         vm.tolerance(ReviewQuantity.K).text().set("4 %");
@@ -168,7 +168,7 @@ class ReviewViewModelTest {
                 + "{\"latentHeat\": \"252 kJ/kg\", \"relievingPressure\": \"21.8 bar\"}}");
         ReviewViewModel vm = vm();
         vm.open(f);
-        assertEquals(ReviewViewModel.State.FAILED, vm.state().get());
+        assertEquals(JobState.FAILED, vm.state().get());
         String m = vm.message().get();
         assertTrue(m.contains("claimed.relievingPressure"), m);
         assertTrue(m.contains("21.8 bar"), m);
@@ -182,7 +182,7 @@ class ReviewViewModelTest {
         Files.writeString(f, "quantity,value\nrelievingPressure,21.83 bara\nlatentHeat,252.5 kJ/kg\norifice,L\n");
         ReviewViewModel none = vm();
         none.open(f);
-        assertEquals(ReviewViewModel.State.FAILED, none.state().get());
+        assertEquals(JobState.FAILED, none.state().get());
         assertTrue(none.message().get().contains("names no case"), none.message().get());
 
         ReviewViewModel vm = vm(new ReviewRunner.OpenCase(Optional.of(CaseFiles.load(

@@ -228,16 +228,16 @@ class WizardWindowTest {
                 .map(r -> r.label() + " | " + r.requiredAreaM2() + " | " + r.orifice()).toList());
     }
 
-    private static LiveCalculation.State liveState() throws Exception {
+    private static JobState liveState() throws Exception {
         return fx(() -> app.viewModel().live().state().get());
     }
 
     private static void awaitCurrent() throws Exception {
         long end = System.currentTimeMillis() + 60_000;
-        while (liveState() != LiveCalculation.State.CURRENT && System.currentTimeMillis() < end) {
+        while (liveState() != JobState.CURRENT && System.currentTimeMillis() < end) {
             Thread.sleep(100);
         }
-        assertEquals(LiveCalculation.State.CURRENT, liveState(), () -> "live calculation did not finish");
+        assertEquals(JobState.CURRENT, liveState(), () -> "live calculation did not finish");
         settle();
     }
 
@@ -291,7 +291,7 @@ class WizardWindowTest {
             return null;
         });
         settle();
-        assertEquals(LiveCalculation.State.INVALID, liveState());
+        assertEquals(JobState.INVALID, liveState());
         assertTrue(text("results-status").contains("fix the marked fields"), text("results-status"));
         assertTrue(stale());
         assertTrue(text("live-result").contains("fix the marked fields"));
@@ -321,13 +321,13 @@ class WizardWindowTest {
             return null;
         });
         long end = System.currentTimeMillis() + 60_000;
-        while (fx(() -> app.reviewModel().state().get()) != ReviewViewModel.State.CURRENT
-                && fx(() -> app.reviewModel().state().get()) != ReviewViewModel.State.FAILED
+        while (fx(() -> app.reviewModel().state().get()) != JobState.CURRENT
+                && fx(() -> app.reviewModel().state().get()) != JobState.FAILED
                 && System.currentTimeMillis() < end) {
             Thread.sleep(100);
         }
         settle();
-        assertEquals(ReviewViewModel.State.CURRENT, fx(() -> app.reviewModel().state().get()),
+        assertEquals(JobState.CURRENT, fx(() -> app.reviewModel().state().get()),
                 () -> "review did not finish: " + app.reviewModel().message().get());
         assertNotNull(lookup("review-table"), "the deviation table is shown");
         assertEquals("Latent heat L", text("review-row-latentHeat"));
@@ -368,12 +368,12 @@ class WizardWindowTest {
             return null;
         });
         long end = System.currentTimeMillis() + 120_000;
-        while (fx(() -> app.auditModel().state().get()) == AuditViewModel.State.RUNNING
+        while (fx(() -> app.auditModel().state().get()) == JobState.RUNNING
                 && System.currentTimeMillis() < end) {
             Thread.sleep(100);
         }
         settle();
-        assertEquals(AuditViewModel.State.DONE, fx(() -> app.auditModel().state().get()),
+        assertEquals(JobState.CURRENT, fx(() -> app.auditModel().state().get()),
                 () -> "audit did not finish: " + app.auditModel().message().get());
         org.ventcase.app.AuditRunner.Outcome o = fx(() -> app.auditModel().outcome().get().orElseThrow());
         assertTrue(text("audit-counts").contains("error " + o.count(org.ventcase.audit.VesselAudit.Status.ERROR)),
