@@ -20,6 +20,7 @@ import org.ventcase.report.UnitSystem;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -38,9 +39,7 @@ import picocli.CommandLine.Spec;
                         + "none.",
                 "Exit code 0: every row computed (ok or partial); 2: one or more rows could not be computed (the "
                         + "outputs are still written), or the register, thresholds or options are invalid.",
-                "First-pass estimates only: final relief design must be verified by a qualified engineer under "
-                        + "the applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) "
-                        + "and local regulations."},
+                Main.FIRST_PASS_HELP},
         footer = ExitCode.HELP_LIST)
 final class AuditCommand implements Callable<Integer> {
 
@@ -59,6 +58,9 @@ final class AuditCommand implements Callable<Integer> {
     @Option(names = "--pdf", paramLabel = "AUDIT.pdf", description = "Write the summary PDF here (atomically).")
     Path pdf;
 
+    @Mixin
+    PdfOptions pdfOptions;
+
     @Option(names = "--thresholds", paramLabel = "FILE",
             description = "User-entered threshold quantities: CSV with substance, threshold (mass with unit), label.")
     Path thresholdsFile;
@@ -68,14 +70,6 @@ final class AuditCommand implements Callable<Integer> {
 
     @Option(names = "--preparer", paramLabel = "NAME", defaultValue = "", description = "Name in the title block.")
     String preparer;
-
-    @Option(names = "--page", paramLabel = "SIZE", defaultValue = "a4", description = "PDF page size: a4 or letter.")
-    String page;
-
-    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
-            description = "Units of the printed summary and the PDF: si or us. The per-vessel CSV stays in SI (units "
-                    + "in its column headers). Default: ${DEFAULT-VALUE}.")
-    String units;
 
     @Option(names = "--threads", paramLabel = "N", description = "Worker threads (default: all processors).")
     Integer threads;
@@ -88,8 +82,8 @@ final class AuditCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        CalculationSheet.PageSize size = CalculationSheet.PageSize.parse("--page", page);
-        UnitSystem system = UnitSystem.parse("--units", units);
+        CalculationSheet.PageSize size = pdfOptions.size();
+        UnitSystem system = pdfOptions.system();
         int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
         if (n < 1) {
             throw InvalidInputException.invalid("--threads", n, "expected at least 1");

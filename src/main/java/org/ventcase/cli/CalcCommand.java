@@ -31,9 +31,7 @@ import picocli.CommandLine.Spec;
         description = {"Prints a summary (governing scenario first, then the others, the inventory and every "
                 + "warning) and, with --json, writes the results JSON (format: README, 'Results JSON'). "
                 + "The same case always gives the same bytes. The case file is only read.",
-                "First-pass estimates only: final relief design must be verified by a qualified engineer under "
-                        + "the applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) "
-                        + "and local regulations."},
+                Main.FIRST_PASS_HELP},
         footer = ExitCode.HELP_LIST)
 final class CalcCommand implements Callable<Integer> {
 

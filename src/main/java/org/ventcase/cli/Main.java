@@ -26,15 +26,18 @@ import picocli.CommandLine.Spec;
 @Command(name = "ventcase", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         header = "Ventcase: first-pass relief basis for vessels holding liquefied gases and volatile liquids.",
         description = {"Cubic equations of state, vessel geometry and published relief equations.",
-                "First-pass estimates only: final relief design must be verified by a qualified engineer under "
-                        + "the applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) "
-                        + "and local regulations."},
+                Main.FIRST_PASS_HELP},
         subcommands = {DemoCommand.class, SheetCommand.class, PropsCommand.class, SatCommand.class,
                 VesselCommand.class, InventoryCommand.class, FlashCommand.class, EnvelopeCommand.class,
                 NewCommand.class, CheckCommand.class, CalcCommand.class, ReviewCommand.class, AuditCommand.class,
                 CommandLine.HelpCommand.class},
         footer = ExitCode.HELP_LIST)
 public final class Main implements Callable<Integer> {
+
+    /** The caution closing the help of the commands that print results. */
+    static final String FIRST_PASS_HELP = "First-pass estimates only: final relief design must be verified by a "
+            + "qualified engineer under the applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, "
+            + "ISO 4126/23251) and local regulations.";
 
     @Spec
     CommandSpec spec;

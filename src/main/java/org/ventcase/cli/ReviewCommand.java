@@ -26,6 +26,7 @@ import org.ventcase.review.Verdict;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -38,9 +39,7 @@ import picocli.CommandLine.Spec;
                 + "difference, tolerance and verdict (agrees / check / disagrees), with possible causes for every "
                 + "difference and the range each quantity takes with PR78 and SRK on the translated and cubic "
                 + "density bases. Formats and tolerances: docs/review.md.",
-                "First-pass estimates only: final relief design must be verified by a qualified engineer under "
-                        + "the applicable codes (e.g. ASME BPVC Section VIII, API Std 520/521, ISO 4126/23251) "
-                        + "and local regulations."},
+                Main.FIRST_PASS_HELP},
         footer = ExitCode.HELP_LIST)
 final class ReviewCommand implements Callable<Integer> {
 
@@ -67,21 +66,15 @@ final class ReviewCommand implements Callable<Integer> {
             description = "Change a tolerance, e.g. k=0.05, latentHeat=8%%, relievingTemperature=2K (repeatable).")
     List<String> tolerances = new ArrayList<>();
 
-    @Option(names = "--page", paramLabel = "SIZE", defaultValue = "a4",
-            description = "Paper size of the PDF: a4 or letter. Default: ${DEFAULT-VALUE}.")
-    String page;
-
-    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
-            description = "Units of the printed values and the PDF: si or us. The JSON stays in SI. "
-                    + "Default: ${DEFAULT-VALUE}.")
-    String units;
+    @Mixin
+    PdfOptions pdfOptions;
 
     @Override
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        CalculationSheet.PageSize size = CalculationSheet.PageSize.parse("--page", page);
-        UnitSystem system = UnitSystem.parse("--units", units);
+        CalculationSheet.PageSize size = pdfOptions.size();
+        UnitSystem system = pdfOptions.system();
         Tolerances tol = Tolerances.defaults();
         for (String t : tolerances) {
             tol = tol.with(t);

@@ -20,6 +20,7 @@ import org.ventcase.report.UnitSystem;
 
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -51,19 +52,13 @@ final class SheetCommand implements Callable<Integer> {
             description = "PDF file to write (written to a temporary file first, then moved into place).")
     Path output;
 
-    @Option(names = "--units", paramLabel = "SYSTEM", defaultValue = "si",
-            description = "Unit system of the tables: si or us; the other is bracketed for key values. "
-                    + "Default: ${DEFAULT-VALUE}.")
-    String units;
-
-    @Option(names = "--page", paramLabel = "SIZE", defaultValue = "a4",
-            description = "Paper size: a4 or letter. Default: ${DEFAULT-VALUE}.")
-    String page;
+    @Mixin
+    PdfOptions pdfOptions;
 
     @Override
     public Integer call() throws IOException {
-        UnitSystem system = UnitSystem.parse("--units", units);
-        CalculationSheet.PageSize size = CalculationSheet.PageSize.parse("--page", page);
+        UnitSystem system = pdfOptions.system();
+        CalculationSheet.PageSize size = pdfOptions.size();
         SheetModel model;
         try {
             model = model(system);
