@@ -51,7 +51,7 @@ public record Case(Integer schemaVersion, Identity identity, Fluid fluid, Vessel
      * @param components   the mixture; mole fractions sum to 1
      * @param eos          equation of state: PR-Twu, vdW, RK, SRK, PR76, PR78 (PR = PR78)
      * @param kij          binary interaction parameters other than 0; optional
-     * @param densityBasis liquid density from the translated (Peneloux-type) or the cubic volume
+     * @param densityBasis liquid density from the translated (the model's volume translation) or the cubic volume
      */
     public record Fluid(List<ComponentEntry> components, String eos, List<Kij> kij, String densityBasis) {
         public Fluid {

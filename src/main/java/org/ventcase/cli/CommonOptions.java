@@ -24,7 +24,9 @@ final class CommonOptions {
     }
 
     @Option(names = "--density-basis", paramLabel = "BASIS", defaultValue = "translated",
-            description = "Liquid-density basis: translated (Peneloux-type volume shift, default) or cubic.")
+            description = "Liquid-density basis: translated (default; the model's volume translation: "
+                    + "temperature-dependent for PR-Twu, a constant Peneloux-type shift for SRK, PR76 and PR78) or "
+                    + "cubic (the raw equation's volume).")
     String densityBasis;
 
     @Option(names = "--atmosphere", paramLabel = "P", defaultValue = "101.325 kPaa",

@@ -22,7 +22,7 @@ import org.ventcase.thermo.FluidProperties;
  * @param z                     compressibility factor of the selected cubic root (before any
  *                              volume translation; the Z the API 520 gas equation takes)
  * @param density               kg/m3 on {@code densityBasis}
- * @param densityBasis          TRANSLATED (Peneloux-type shift) or CUBIC
+ * @param densityBasis          TRANSLATED (the model's volume translation) or CUBIC
  * @param kIdeal                ideal-gas Cp/Cv at T (the k of the API 520 gas equations)
  * @param isentropicExponent    real-fluid isentropic exponent -(v/P)(Cp/Cv)(dP/dv)_T
  * @param latentHeatJPerKg      latent heat where the scenario has one (definition in

@@ -732,8 +732,8 @@ public final class Review {
         private String basisText(String phase, DensityBasis other, double alt, ReviewQuantity q) {
             if (other == DensityBasis.CUBIC) {
                 return String.format(Locale.US, "The claimed %s density matches the raw cubic equation without "
-                        + "volume translation (%s); Ventcase's value is on the translated basis (Peneloux-type "
-                        + "shift). Look at whether the density was corrected: raw cubic liquid densities are "
+                        + "volume translation (%s); Ventcase's value is on the translated basis (the "
+                        + "model's volume translation). Look at whether the density was corrected: raw cubic liquid densities are "
                         + "several percent off.", phase, f(q, alt));
             }
             return String.format(Locale.US, "The claimed %s density matches the volume-translated basis (%s); "

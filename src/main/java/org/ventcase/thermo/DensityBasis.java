@@ -4,7 +4,10 @@ package org.ventcase.thermo;
 public enum DensityBasis {
     /** The cubic equation's own volume. */
     CUBIC("cubic"),
-    /** The cubic volume minus a Peneloux-type volume shift (phase equilibrium unchanged). */
+    /**
+     * The cubic volume minus the model's volume translation (temperature-dependent for PR-Twu, a constant
+     * Peneloux-type shift for the others); phase equilibrium unchanged.
+     */
     TRANSLATED("translated");
 
     private final String label;
