@@ -88,6 +88,16 @@ public final class RegisterCases {
         String tag = row.get(RegisterColumn.TAG);
         String area = row.get(RegisterColumn.AREA);
         String fluid = row.get(RegisterColumn.FLUID);
+        for (RegisterColumn c : RegisterColumn.values()) {
+            String v = row.get(c);
+            if (v.length() > c.maxLength()) {
+                // a refused row still lists its tag, area and fluid: never carry an overlong cell on
+                return AuditItem.failed(row.line(), origin, shortened(tag, RegisterColumn.TAG),
+                        shortened(area, RegisterColumn.AREA), shortened(fluid, RegisterColumn.FLUID),
+                        new AuditError(c.header(), shortened(v, c), "expected at most " + c.maxLength()
+                                + " characters"));
+            }
+        }
         if (row.firstMissing().isPresent()) {
             RegisterColumn c = row.firstMissing().get();
             return AuditItem.failed(row.line(), origin, tag, area, fluid, new AuditError(c.header(), "",
@@ -108,6 +118,34 @@ public final class RegisterCases {
             return AuditItem.failed(row.line(), origin, tag, area, fluid,
                     new AuditError("calculation", "", e.getMessage()));
         }
+    }
+
+    /** A cell longer than its column takes, cut to its first 40 characters and its length. */
+    static String shortened(String v, RegisterColumn c) {
+        if (v.length() <= c.maxLength()) {
+            return v;
+        }
+        int end = Character.isHighSurrogate(v.charAt(39)) ? 39 : 40;
+        return v.substring(0, end) + "... (" + v.length() + " characters)";
+    }
+
+    /**
+     * Highest set pressure or MAWP taken, gauge (common practice, no source): well above any pressure
+     * vessel a relief valve protects, and low enough that the relieving pressure stays inside the
+     * property models' range (1 GPa).
+     */
+    static final double MAX_GAUGE_PA = 400e6;
+    private static final String MAX_GAUGE_TEXT = "4000 barg (400 MPa gauge)";
+
+    /**
+     * A parsed quantity checked against the range the calculation takes, reported against its register
+     * column with the cell as written (not the derived SI value of the domain's own check).
+     */
+    private static double inRange(RegisterRow row, RegisterColumn c, double v, double lo, double hi, String range) {
+        if (!(v >= lo && v <= hi)) {
+            throw InvalidInputException.invalid(c.header(), row.get(c), "expected " + range);
+        }
+        return v;
     }
 
     private static String required(RegisterRow row, RegisterColumn c, String accepted) {
@@ -166,7 +204,10 @@ public final class RegisterCases {
                             + "leave it blank for " + mode + " storage");
         }
         Vessel vessel = vessel(row);
-        double elevation = length(row, RegisterColumn.ELEVATION);
+        double elevation = inRange(row, RegisterColumn.ELEVATION, length(row, RegisterColumn.ELEVATION),
+                Vessel.PLAUSIBLE_ELEVATION_M[0], Vessel.PLAUSIBLE_ELEVATION_M[1],
+                String.format(Locale.ROOT, "an elevation from %.0f m to %.0f m above grade",
+                        Vessel.PLAUSIBLE_ELEVATION_M[0], Vessel.PLAUSIBLE_ELEVATION_M[1]));
         FireExposure exposure;
         try {
             exposure = FireExposure.atElevation(elevation);
@@ -174,11 +215,15 @@ public final class RegisterCases {
             throw e.withField(RegisterColumn.ELEVATION.header());
         }
         required(row, RegisterColumn.TEMPERATURE, "expected the storage temperature with its unit, e.g. '38 C'");
-        double t = Units.temperatureK(RegisterColumn.TEMPERATURE.header(), quantity(row, RegisterColumn.TEMPERATURE));
+        double t = inRange(row, RegisterColumn.TEMPERATURE, Units.temperatureK(RegisterColumn.TEMPERATURE.header(),
+                quantity(row, RegisterColumn.TEMPERATURE)), Storage.MIN_T_K, Storage.MAX_T_K,
+                String.format(Locale.ROOT, "a temperature from %.2f C to %.2f C (%.0f K to %.0f K)",
+                        Storage.MIN_T_K - 273.15, Storage.MAX_T_K - 273.15, Storage.MIN_T_K, Storage.MAX_T_K));
         String pText = quantity(row, RegisterColumn.PRESSURE);
         OptionalDouble p = pText.isBlank() ? OptionalDouble.empty()
-                : OptionalDouble.of(Units.parsePressure(RegisterColumn.PRESSURE.header(), pText,
-                ScreeningCase.ATMOSPHERIC_PA));
+                : OptionalDouble.of(inRange(row, RegisterColumn.PRESSURE, Units.parsePressure(
+                        RegisterColumn.PRESSURE.header(), pText, ScreeningCase.ATMOSPHERIC_PA), Storage.MIN_P_PA,
+                        Storage.MAX_P_PA, "an absolute pressure from 1 Pa to 1000 MPa (up to 9999 barg)"));
         Storage storage;
         Level level;
         switch (mode) {
@@ -225,13 +270,14 @@ public final class RegisterCases {
         String mawpText = quantity(row, RegisterColumn.MAWP);
         double mawp = mawpText.isBlank() ? set : Units.parsePressure(RegisterColumn.MAWP.header(), mawpText,
                 ScreeningCase.ATMOSPHERIC_PA) - ScreeningCase.ATMOSPHERIC_PA;
-        if (!(set > 0)) {
+        if (!(set > 0 && set <= MAX_GAUGE_PA)) {
             throw InvalidInputException.invalid(RegisterColumn.SET_PRESSURE.header(),
-                    row.get(RegisterColumn.SET_PRESSURE), "expected a set pressure above atmospheric");
+                    row.get(RegisterColumn.SET_PRESSURE), "expected a set pressure above atmospheric, at most "
+                            + MAX_GAUGE_TEXT);
         }
-        if (!(mawp > 0)) {
+        if (!(mawp > 0 && mawp <= MAX_GAUGE_PA)) {
             throw InvalidInputException.invalid(RegisterColumn.MAWP.header(), mawpText,
-                    "expected an MAWP above atmospheric");
+                    "expected an MAWP above atmospheric, at most " + MAX_GAUGE_TEXT);
         }
         // a set pressure above the MAWP is found by the calculation (RelievingPressure) and reported
         // against the set pressure column by Audit.audit, so it is not computed twice here

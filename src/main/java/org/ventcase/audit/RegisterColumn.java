@@ -56,6 +56,21 @@ public enum RegisterColumn {
         return takesUnit;
     }
 
+    /**
+     * Longest cell accepted, characters: the tag as in a case file (it is printed in the title block
+     * and the tables), the area like a case file's preparer, the compositions like a case file's free
+     * text, every other column a short entry (common practice, no source). A longer cell refuses the
+     * row and is echoed shortened.
+     */
+    public int maxLength() {
+        return switch (this) {
+            case TAG -> 60;
+            case AREA -> 100;
+            case FLUID, VAPOUR -> 1000;
+            default -> 100;
+        };
+    }
+
     static String normalise(String name) {
         return name.strip().toLowerCase(Locale.ROOT).replace('_', ' ').replace('-', ' ').replaceAll("\\s+", " ");
     }

@@ -132,6 +132,12 @@ public final class FireHeatInput {
     }
 
     private static void check(double area, double f, FireFighting ff) {
+        if (area == 0) {
+            // a vessel whose liquid lies wholly above the fire zone (or holds none): not an input error
+            throw new org.ventcase.common.NoSolutionException("fire.wettedArea", "no wetted surface lies within the "
+                    + "fire zone (the liquid is above the fire height, or there is none), so the wetted-vessel pool-fire "
+                    + "heat input is zero; screen this vessel with the unwetted-vessel method or another scenario");
+        }
         InvalidInputException.requirePositive("fire.wettedArea", area, "");
         InvalidInputException.requireInRange("fire.environmentFactor", f, 0, 1, "");
         if (ff == null) {

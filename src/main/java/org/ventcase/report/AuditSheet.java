@@ -150,14 +150,15 @@ public final class AuditSheet {
                 Row.of("Screening scenario (gas-filled)", said("API Std 521 unwetted vessel, wall 593 C")),
                 Row.of("Device", "one conventional valve, fire overpressure 21 %, Kd 0.975, Kb = Kc = 1, back "
                         + "pressure atmospheric"),
-                Row.of("Fire height; atmospheric pressure", said("7.6 m above grade; 101.325 kPa abs"))), ""));
+                Row.of("Fire height; atmospheric pressure", said("7.6 m above grade; 101.325 kPa abs"))), "")
+                .echoing(1));
         List<Row> th = new ArrayList<>();
         r.thresholds().forEach(c -> th.add(Row.of(c.entry().substance(), c.entry().component().name(),
                 t(c.entry().thresholdKg()), c.entry().label())));
         inputs.add(new Table("Thresholds entered by the user" + (r.thresholdsOrigin().isEmpty() ? ""
                 : " (" + r.thresholdsOrigin() + ")"), List.of("Substance", "Component", "Threshold", "Label / source"),
                 List.of(1.2, 1.2, 1.0, 3.0), th, th.isEmpty() ? "No thresholds file was given."
-                : "Figures and labels as the user entered them; Ventcase supplies none."));
+                : "Figures and labels as the user entered them; Ventcase supplies none.").echoing(0, 3));
 
         List<String> warnings = new ArrayList<>();
         for (AuditResult.ThresholdCheck c : r.thresholds()) {
@@ -223,7 +224,7 @@ public final class AuditSheet {
                             .reliefLoadKgPerS())).orElse("none computed")));
         }
         return new Table(title, List.of(first, "Vessels", "Liquid", "Vapour", "Total", "Largest fire load"),
-                List.of(2.2, 0.8, 1.1, 1.1, 1.1, 1.8), rows, "");
+                List.of(2.2, 0.8, 1.1, 1.1, 1.1, 1.8), rows, "").echoing(0, 5);
     }
 
     private Table thresholdTable(AuditResult r) {
@@ -240,7 +241,7 @@ public final class AuditSheet {
                 "Site", "Areas above the threshold", "Label / source"), List.of(1.1, 0.9, 0.9, 0.8, 1.0, 1.9, 1.6),
                 rows, r.thresholds().isEmpty() ? "No thresholds were given (--thresholds FILE)."
                 : "Exceeded means the total is greater than the threshold. Highlighted rows exceed at site or area "
-                        + "level.");
+                        + "level.").echoing(5, 6);
     }
 
     private Table topInventory(AuditResult r) {
@@ -252,7 +253,7 @@ public final class AuditSheet {
                     t(c.totalMassKg())));
         }
         return new Table("Largest vessels by inventory", List.of("Row", "Tag", "Area", "Fluid", "Volume",
-                "Level (% vol)", "Mass"), List.of(0.5, 0.9, 1.6, 1.9, 0.8, 0.7, 0.8), rows, "");
+                "Level (% vol)", "Mass"), List.of(0.5, 0.9, 1.6, 1.9, 0.8, 0.7, 0.8), rows, "").echoing(1, 2, 3);
     }
 
     private Table topFire(AuditResult r) {
@@ -266,7 +267,8 @@ public final class AuditSheet {
         }
         return new Table("Largest screening fire loads", List.of("Row", "Tag", "Area", "Relief load W",
                 "Required area", "Smallest API 526", "Installed"), List.of(0.5, 0.9, 1.6, 1.0, 1.0, 0.8, 1.6), rows,
-                "Relief load and area of the screening scenario only; highlighted: the installed orifice is short.");
+                "Relief load and area of the screening scenario only; highlighted: the installed orifice is short.")
+                .echoing(1, 2);
     }
 
     private Table flagged(AuditResult r) {
@@ -285,7 +287,8 @@ public final class AuditSheet {
                 List.of(0.5, 0.9, 1.6, 1.8, 2.4), rows, total == 0 ? "No row is flagged."
                 : total > rows.size() ? "The first " + rows.size() + " of " + total + " flagged rows; the CSV lists all."
                 : "Flags: installed orifice short of the screening area; liquid fills the vessel before P1; vapour "
-                        + "space under 5 %; stated pressure differs from the bubble pressure by more than 10 %.");
+                        + "space under 5 %; stated pressure differs from the bubble pressure by more than 10 %.")
+                .echoing(1, 2);
     }
 
     private Table errors(AuditResult r) {
@@ -299,7 +302,8 @@ public final class AuditSheet {
         return new Table("Rows not computed", List.of("Row", "Tag", "Status", "Field", "Reason"),
                 List.of(0.5, 0.9, 0.6, 1.0, 4.2), rows, total == 0 ? "Every row was computed."
                 : (total > rows.size() ? "The first " + rows.size() + " of " + total + " rows; the CSV lists all. " : "")
-                        + "Row is the line of the register file (for a folder, the case file's position).");
+                        + "Row is the line of the register file (for a folder, the case file's position).")
+                .echoing(1);
     }
 
     private static String block(String name) {

@@ -71,9 +71,15 @@ public final class CalculationSheet {
     }
 
     private static final String FONT_DIR = "/org/ventcase/report/fonts/";
-    private static final byte[] REGULAR_TTF = resource(FONT_DIR + "DejaVuSans.ttf");
+    static final byte[] REGULAR_TTF = resource(FONT_DIR + "DejaVuSans.ttf");
     private static final byte[] BOLD_TTF = resource(FONT_DIR + "DejaVuSans-Bold.ttf");
     private static final Pattern FORBIDDEN = Pattern.compile("\\b(NaN|null|Infinity)\\b");
+
+    /**
+     * Text in single quotes is the user's input echoed by a message ("'NaN': expected a number ..."), so
+     * the guard above does not read it; the program never quotes a number it computed.
+     */
+    private static final Pattern QUOTED = Pattern.compile("'[^']*'");
 
     /** A method step's value as printed: as computed (SI), with US customary values bracketed on a US sheet. */
     static String stepText(SheetModel m, String value) {
@@ -119,6 +125,28 @@ public final class CalculationSheet {
     private static void checkText(SheetModel m) {
         List<String> all = new ArrayList<>();
         SheetIdentity id = m.identity();
+        // The user's own words (title, tag, revision, preparer, checker, scenario labels, bar labels and
+        // the cells of echo columns) are printed as entered, also where the program's text quotes them
+        // ("the relief basis for NaN-1"): the guard masks them. Only those holding a guarded word matter.
+        List<String> echoes = new ArrayList<>();
+        List<String> words = new ArrayList<>(List.of(id.title(), id.tag(), id.revision(), id.preparer(), id.checker()));
+        m.loads().forEach(l -> words.add(l.label()));
+        for (Figure f : m.figures()) {
+            if (f instanceof Figure.BarChart b) {
+                b.bars().forEach(x -> words.add(x.label()));
+            }
+        }
+        for (Table t : concat(m.inputs(), m.results())) {
+            for (Row r : t.rows()) {
+                t.echoColumns().forEach(i -> words.add(r.cells().get(i)));
+            }
+        }
+        for (String w : words) {
+            if (w != null && !w.isEmpty() && FORBIDDEN.matcher(w).find()) {
+                echoes.add(w);
+            }
+        }
+        echoes.sort((a, b) -> b.length() - a.length());
         all.addAll(List.of(id.title(), id.tag(), id.revision(), id.preparer(), id.checker(), id.toolName(),
                 id.toolVersion(), id.inputHash(), m.deferral(), m.unitNote(), m.banner()));
         for (SheetModel.RevisionRow r : m.revisions()) {
@@ -174,10 +202,20 @@ public final class CalculationSheet {
             }
         }
         for (String s : all) {
-            if (s == null || FORBIDDEN.matcher(s).find()) {
+            String t = s;
+            for (String e : echoes) {
+                t = t == null ? null : t.replace(e, "");
+            }
+            if (t == null || FORBIDDEN.matcher(QUOTED.matcher(t).replaceAll("''")).find()) {
                 throw new IllegalArgumentException("the sheet would print a missing or undefined value: '" + s + "'");
             }
         }
+    }
+
+    private static List<Table> concat(List<Table> a, List<Table> b) {
+        List<Table> out = new ArrayList<>(a);
+        out.addAll(b);
+        return out;
     }
 
     private static void addTable(List<String> all, Table t) {
@@ -402,19 +440,7 @@ public final class CalculationSheet {
                     t.line(x, yb, x, gridTop, 0.5f, PdfCanvas.RULE);
                 }
                 t.text(cells[i][0], x + 5, gridTop - 8, regular, 6f, PdfCanvas.MUTED);
-                String v = cells[i][1];
-                // a long entry is set smaller to fit its cell (down to 6.5 pt), then on two lines at 6 pt (a long
-                // file name as the audit's tag), and cut with an ellipsis only beyond that
-                float vw = PdfCanvas.width(bold, 8f, v);
-                float sz = vw <= cw - 10 ? 8f : Math.max(6.5f, 8f * (cw - 10) / vw);
-                List<String> lines = PdfCanvas.wrap(v, bold, sz, cw - 10);
-                if (lines.size() <= 1) {
-                    t.text(lines.isEmpty() ? "" : lines.get(0), x + 5, yb + 5, bold, sz, PdfCanvas.INK);
-                } else {
-                    List<String> two = PdfCanvas.wrap(v, bold, 6f, cw - 10);
-                    t.text(two.get(0), x + 5, yb + 10.5f, bold, 6f, PdfCanvas.INK);
-                    t.text(two.get(1) + (two.size() > 2 ? "…" : ""), x + 5, yb + 3.5f, bold, 6f, PdfCanvas.INK);
-                }
+                titleCell(t, cells[i][1], x + 5, cw - 10, yb);
                 x += cw;
             }
             // footer
@@ -423,6 +449,32 @@ public final class CalculationSheet {
             t.text("Input hash (SHA-256): " + id.inputHash(), left, fy, regular, 6f, PdfCanvas.MUTED);
             t.textRight("First-pass estimate, not a relief design: see Status of this sheet.", right, fy, regular, 6f,
                     PdfCanvas.MUTED);
+        }
+
+        /**
+         * One entry of the title block's grid. A long entry is set smaller to fit its cell (down to
+         * 6.5 pt), then on two lines at 6 pt (a long file name as the audit's tag), and cut with an
+         * ellipsis only beyond that. Each step is decided by measuring at the size it is drawn.
+         */
+        private void titleCell(PdfCanvas t, String v, float x, float max, float yb) throws IOException {
+            float vw = PdfCanvas.width(bold, 8f, v);
+            float sz = vw <= max ? 8f : Math.max(6.5f, 8f * max / vw);
+            List<String> one = PdfCanvas.wrap(v, bold, sz, max);
+            if (one.size() <= 1) {
+                t.text(one.isEmpty() ? "" : one.get(0), x, yb + 5, bold, sz, PdfCanvas.INK);
+                return;
+            }
+            List<String> two = PdfCanvas.wrap(v, bold, 6f, max);
+            if (two.size() == 1) {
+                t.text(two.get(0), x, yb + 5, bold, 6f, PdfCanvas.INK);
+                return;
+            }
+            String second = two.get(1);
+            if (two.size() > 2) {
+                second = PdfCanvas.fitWithEllipsis(second, bold, 6f, max);
+            }
+            t.text(two.get(0), x, yb + 10.5f, bold, 6f, PdfCanvas.INK);
+            t.text(second, x, yb + 3.5f, bold, 6f, PdfCanvas.INK);
         }
 
         private void revisions() throws IOException {

@@ -108,41 +108,69 @@ final class PdfCanvas {
 
     /**
      * Breaks text into lines no wider than {@code max}: at spaces where possible, inside a word
-     * only when the word alone is too wide. Line breaks in the text are kept.
+     * only when the word alone is too wide. Line breaks in the text are kept. Widths add up
+     * character by character (no kerning), so each word is measured once and a word too wide for
+     * a line is cut in one pass over its characters: the time grows with the text's length, not
+     * with its square (a 100,000-character register cell must not stall the audit sheet).
      */
     static List<String> wrap(String text, PDFont font, float size, float max) {
         List<String> lines = new ArrayList<>();
+        float space = width(font, size, " ");
         for (String para : clean(text.replace("\r", "")).split("\n", -1)) {
-            String[] words = para.split(" ");
             StringBuilder line = new StringBuilder();
-            for (String w : words) {
+            float lineWidth = 0;
+            for (String w : para.split(" ")) {
                 if (w.isEmpty()) {
                     continue;
                 }
-                String trial = line.length() == 0 ? w : line + " " + w;
-                if (width(font, size, trial) <= max) {
-                    line.setLength(0);
-                    line.append(trial);
+                float ww = width(font, size, w);
+                float trial = line.length() == 0 ? ww : lineWidth + space + ww;
+                if (trial <= max) {
+                    if (line.length() > 0) {
+                        line.append(' ');
+                    }
+                    line.append(w);
+                    lineWidth = trial;
                     continue;
                 }
                 if (line.length() > 0) {
                     lines.add(line.toString());
                     line.setLength(0);
                 }
-                String rest = w;
-                while (width(font, size, rest) > max) {
-                    int n = rest.length() - 1;
-                    while (n > 1 && width(font, size, rest.substring(0, n)) > max) {
-                        n--;
+                // too wide alone: cut it, filling each line character by character (one pass)
+                int from = 0;
+                float acc = 0;
+                for (int i = 0; i < w.length(); ) {
+                    int cp = w.codePointAt(i);
+                    int len = Character.charCount(cp);
+                    float cw = width(font, size, w.substring(i, i + len));
+                    if (acc + cw > max && i > from) {
+                        lines.add(w.substring(from, i));
+                        from = i;
+                        acc = 0;
                     }
-                    lines.add(rest.substring(0, n));
-                    rest = rest.substring(n);
+                    acc += cw;
+                    i += len;
                 }
-                line.append(rest);
+                line.append(w, from, w.length());
+                lineWidth = acc;
             }
             lines.add(line.toString());
         }
         return lines;
+    }
+
+    /** {@code s} followed by an ellipsis, shortened from the end until both fit in {@code max}. */
+    static String fitWithEllipsis(String s, PDFont font, float size, float max) {
+        String t = s;
+        while (!t.isEmpty() && width(font, size, t + "…") > max) {
+            int cut = t.length() - 1;
+            if (cut > 0 && Character.isLowSurrogate(t.charAt(cut))) {
+                cut--;
+            }
+            t = t.substring(0, cut);
+        }
+        return t + "…";
     }
 
     void text(String s, float x, float y, PDFont font, float size, float[] color) throws IOException {

@@ -122,14 +122,20 @@ public record SheetModel(SheetIdentity identity, UnitSystem units, List<Revision
      * @param weights relative column widths, one per column, each &gt; 0
      * @param rows    body rows
      * @param note    a line printed under the table, may be empty
+     * @param echoColumns the columns (0-based) that print the user's own text as entered (a register's
+     *                tag and area): the sheet's guard against undefined values ("NaN", "null") takes
+     *                their text as the user's words wherever it appears, so an area named "null" is
+     *                printed, not refused
      */
-    public record Table(String title, List<String> columns, List<Double> weights, List<Row> rows, String note) {
+    public record Table(String title, List<String> columns, List<Double> weights, List<Row> rows, String note,
+                        java.util.Set<Integer> echoColumns) {
         public Table {
             Objects.requireNonNull(title, "title");
             columns = List.copyOf(columns);
             weights = List.copyOf(weights);
             rows = List.copyOf(rows);
             note = note == null ? "" : note;
+            echoColumns = java.util.Set.copyOf(echoColumns);
             if (columns.isEmpty() || weights.size() != columns.size()) {
                 throw new IllegalArgumentException(title + ": one weight per column is needed");
             }
@@ -144,6 +150,16 @@ public record SheetModel(SheetIdentity identity, UnitSystem units, List<Revision
                             + r.cells().size() + " cells, expected " + columns.size());
                 }
             }
+        }
+
+        /** A table none of whose columns echoes the user's text verbatim. */
+        public Table(String title, List<String> columns, List<Double> weights, List<Row> rows, String note) {
+            this(title, columns, weights, rows, note, java.util.Set.of());
+        }
+
+        /** This table with the given columns marked as the user's own text (see {@code echoColumns}). */
+        public Table echoing(Integer... cols) {
+            return new Table(title, columns, weights, rows, note, java.util.Set.of(cols));
         }
 
         /** A two-column quantity/value table. */

@@ -135,4 +135,57 @@ class RegisterErrorsTest {
         assertEquals("set pressure", set.field());
         assertTrue(set.reason().contains("of MAWP"), set.reason());
     }
+
+    /**
+     * Sweep findings (issue 19): a value out of the calculation's range is reported against its register
+     * column with the cell as written, not as a domain path with its SI value ("storage.temperature
+     * '1e+300 K'", "storage.relievingPressure '1.21e+305 Pa'"); NaN and Infinity are refused by name.
+     */
+    @Test
+    void outOfRangeAndNonNumericCellsNameTheirColumnAndTheCellAsWritten() {
+        AuditResult r = audit(
+                GOOD.replace(",25,,saturated,", ",1e300 C,,saturated,"),
+                GOOD.replace(",17.2,,,", ",1e300,,,"),
+                GOOD.replace(",17.2,,,", ",17.2,1e300 barg,,"),
+                GOOD.replace(",25,,saturated,,", ",25,1e300 barg,specified,,"),
+                GOOD.replace(",12,1.0,70,", ",12,1e300,70,"),
+                GOOD.replace(",25,,saturated,", ",NaN,,saturated,"),
+                GOOD.replace(",17.2,,,", ",Infinity,,,"));
+        List<String[]> expected = List.of(
+                new String[] {"temperature", "1e300 C", "from -272.15 C to 1726.85 C"},
+                new String[] {"set pressure", "1e300 barg", "at most 4000 barg"},
+                new String[] {"mawp", "1e300 barg", "at most 4000 barg"},
+                new String[] {"pressure", "1e300 barg", "from 1 Pa to 1000 MPa"},
+                new String[] {"elevation", "1e300 m", "from -50 m to 200 m"},
+                new String[] {"temperature", "NaN", "expected a number followed by a unit"},
+                new String[] {"set pressure", "Infinity", "expected a number followed by a unit"});
+        for (int i = 0; i < expected.size(); i++) {
+            AuditError e = errorOf(r.rows().get(i));
+            String[] x = expected.get(i);
+            assertEquals(x[0], e.field(), "row " + i + ": " + e);
+            assertEquals(x[1], e.value(), "row " + i + ": " + e);
+            assertTrue(e.reason().contains(x[2]), "row " + i + ": " + e.reason());
+        }
+    }
+
+    /**
+     * Sweep finding (issue 19): a 100,000-character tag stalled the audit PDF. A cell longer than its
+     * column takes refuses the row, and the refused row carries the cell shortened, never the whole of it.
+     */
+    @Test
+    void anOverlongCellRefusesTheRowAndIsEchoedShortened() {
+        String longTag = "T".repeat(100_000);
+        String longArea = "A".repeat(101);
+        AuditResult r = audit(GOOD.replace("V-1", longTag), GOOD.replace("Area 1", longArea),
+                GOOD.replace("V-1", "T".repeat(60)));
+        AuditError tag = errorOf(r.rows().get(0));
+        assertEquals("tag", tag.field());
+        assertTrue(tag.reason().contains("at most 60 characters"), tag.reason());
+        assertTrue(tag.value().endsWith("... (100000 characters)") && tag.value().length() < 80, tag.value());
+        assertTrue(r.rows().get(0).tag().length() < 80, "the refused row's tag is shortened");
+        AuditError area = errorOf(r.rows().get(1));
+        assertEquals("area", area.field());
+        assertTrue(area.reason().contains("at most 100 characters"), area.reason());
+        assertEquals(VesselAudit.Status.OK, r.rows().get(2).status(), "a 60-character tag is taken");
+    }
 }

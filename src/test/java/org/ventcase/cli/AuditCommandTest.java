@@ -70,6 +70,34 @@ class AuditCommandTest {
     }
 
     /**
+     * Sweep findings (issue 19): the audit PDF ended in an internal error (exit 1, no PDF) when a refused
+     * row's message quoted 'NaN' or 'Infinity', when a vessel was tagged "NaN" or an area was "null", and
+     * when the register's file name wrapped in the title block ("site-register-2024.csv"). Each now gives
+     * the PDF, with the rows listed as written, and exit 2 for the refused rows.
+     */
+    @Test
+    void refusedNonNumericCellsUserWordsAndLongFileNamesStillGiveThePdf() throws IOException {
+        for (String name : List.of("site-register-2024.csv", "plant-b-vessel-list.csv", "null.csv")) {
+            Path reg = dir.resolve(name);
+            Files.writeString(reg, HEADER + "\n"
+                    + "V-1,Area 1,propane,,horizontal,2:1,3.2,16,1.2,85,38,,saturated,,17.2,,T,\n"
+                    + "V-2,Area 1,propane,,horizontal,2:1,3.2,16,1.2,85,NaN,,saturated,,17.2,,,\n"
+                    + "V-3,Area 1,propane,,horizontal,2:1,3.2,16,1.2,85,38,,saturated,,Infinity,,,\n"
+                    + "NaN,null,propane,,horizontal,2:1,3.2,16,1.2,85,38,,saturated,,17.2,,,\n");
+            Path pdf = dir.resolve(name + ".pdf");
+            Run r = run("audit", reg.toString(), "--pdf", pdf.toString(), "--threads", "1");
+            assertEquals(ExitCode.INVALID_INPUT, r.code(), name + ": " + r.err());
+            assertFalse(r.err().contains("internal error"), r.err());
+            try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+                String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+                assertTrue(text.contains("'NaN': expected a number"), name + ": the refused value as written");
+                assertTrue(text.contains("'Infinity': expected a number"), name);
+                assertTrue(text.contains(" null "), name + ": the area named null is printed as written");
+            }
+        }
+    }
+
+    /**
      * Issue 18 item 4: --units us prints the summary and the PDF in lb, lb/h and in2; the CSV stays
      * SI and byte-identical. Check value: the SI run's site total in t, converted with the exact
      * 1 lb = 0.45359237 kg (NIST SP 811), to the printed rounding.

@@ -117,4 +117,17 @@ class FireHeatInputTest {
         assertEquals("fire.wettedArea", e.field());
         assertFalse(FireHeatInput.wettedVessel(1, 1, FireFighting.INADEQUATE).source().isBlank());
     }
+
+    /**
+     * Sweep finding (issue 19): a vessel wholly above the fire zone (register elevation 50 m) ended in
+     * "fire.wettedArea: '0' is not accepted": it is not a typing error but a vessel that takes no wetted
+     * pool-fire load, and the message says so and what to do instead (common practice, no source).
+     */
+    @Test
+    void noWettedSurfaceInTheFireZoneIsExplainedNotRefusedAsInput() {
+        org.ventcase.common.NoSolutionException e = assertThrows(org.ventcase.common.NoSolutionException.class,
+                () -> FireHeatInput.wettedVessel(0, 1, FireFighting.ADEQUATE_DRAINAGE_AND_FIREFIGHTING));
+        assertTrue(e.getMessage().contains("no wetted surface lies within the fire zone"), e.getMessage());
+        assertTrue(e.getMessage().contains("unwetted-vessel method"), e.getMessage());
+    }
 }

@@ -156,6 +156,32 @@ class CalculationSheetTest {
         assertTrue(s.all().contains("A remark with \uFFFD inside"), "warning with the replacement character");
     }
 
+    /**
+     * Sweep finding (issue 19): the guard against printing undefined values refused the user's own words:
+     * a tag "NaN", a title "null" (an internal error, no sheet). They are printed as entered; a computed
+     * "NaN" in the program's own text is still refused. Invariant, no external values.
+     */
+    @Test
+    void theUsersOwnWordsPassTheGuardAComputedNaNDoesNot() throws IOException {
+        SheetModel m = SheetFixtures.bullet().model();
+        SheetIdentity id = m.identity();
+        SheetIdentity odd = new SheetIdentity("null", "NaN", id.revision(), id.date(), "Infinity", id.checker(),
+                id.toolName(), id.toolVersion(), id.inputHash());
+        SheetModel m2 = new SheetModel(odd, m.units(), m.revisions(), m.signOff(), m.inputs(), m.loads(), m.results(),
+                m.warnings(), m.figures(), m.method(), m.cautions(), m.deferral().replace(id.tag(), "NaN"),
+                m.unitNote(), m.banner());
+        Sheet s = write(m2, CalculationSheet.PageSize.A4, "words.pdf");
+        assertTrue(s.titleBlocks().get(0).contains("NaN"), s.titleBlocks().get(0));
+        java.util.List<String> warnings = new java.util.ArrayList<>(m.warnings());
+        warnings.add("a computed value of NaN kg");
+        // (with the user's words above, a bare "NaN" anywhere would be taken as their tag: the guard
+        // masks the user's text wherever it appears, so the computed case is checked with a plain tag)
+        SheetModel bad = new SheetModel(id, m.units(), m.revisions(), m.signOff(), m.inputs(), m.loads(),
+                m.results(), warnings, m.figures(), m.method(), m.cautions(), m.deferral(), m.unitNote(), m.banner());
+        assertThrows(IllegalArgumentException.class, () -> CalculationSheet.write(bad, dir.resolve("bad.pdf"),
+                CalculationSheet.PageSize.A4));
+    }
+
     @Test
     void cautionsAndCodeDeferralAreOnTheSheet() throws IOException {
         SheetModel m = SheetFixtures.bullet().model();
@@ -182,6 +208,58 @@ class CalculationSheetTest {
             assertTrue(t.contains("page " + (i + 1) + " of " + s.pages()), t);
         }
         assertTrue(s.all().contains("0123456789abcdef0123456789abcdef0123456789abcdef0123456789abcdef"), "input hash");
+    }
+
+    /**
+     * Sweep finding (issue 19): a tag that needs a smaller size but fits on one line at 6 pt (an audit
+     * register named "site-register-2024.csv") ended in IndexOutOfBoundsException in the title block.
+     * Every tag length from 1 to 120 characters, with and without spaces, must give a sheet whose title
+     * block shows the tag's start. Invariant, no external values.
+     */
+    @Test
+    void titleBlockTakesTagsOfEveryLength() throws IOException {
+        SheetModel m = SheetFixtures.bullet().modelWithTestIdentity();
+        SheetIdentity id = m.identity();
+        String letters = "site-register-2024.csv plant-b-vessel-list.csv a18b-formula-fluid.csv ".repeat(3);
+        for (int n = 1; n <= 120; n += 1) {
+            for (String base : List.of(letters, letters.replace(' ', '_'))) {
+                String tag = base.substring(0, n);
+                SheetIdentity t = new SheetIdentity(id.title(), tag, id.revision(), id.date(), id.preparer(),
+                        id.checker(), id.toolName(), id.toolVersion(), id.inputHash());
+                SheetModel m2 = new SheetModel(t, m.units(), m.revisions(), m.signOff(), m.inputs(), m.loads(),
+                        m.results(), m.warnings(), m.figures(), m.method(), m.cautions(), m.deferral(), m.unitNote(),
+                        m.banner());
+                Path pdf = dir.resolve("tag.pdf");
+                CalculationSheet.write(m2, pdf, CalculationSheet.PageSize.A4);
+                assertTrue(Files.size(pdf) > 0, tag);
+            }
+        }
+        Sheet s = write(m, CalculationSheet.PageSize.A4, "tag-last.pdf");
+        assertTrue(s.titleBlocks().get(0).contains("T-0001"));
+    }
+
+    /**
+     * Line breaking: every line fits, nothing is lost, and a 100,000-character word (a register cell
+     * of that length used to stall the audit sheet for minutes) is cut into full lines. Invariant.
+     */
+    @Test
+    void wrapKeepsEveryCharacterAndFitsTheWidth() throws IOException {
+        try (PDDocument doc = new PDDocument()) {
+            PDFont font = org.apache.pdfbox.pdmodel.font.PDType0Font.load(doc,
+                    new java.io.ByteArrayInputStream(CalculationSheet.REGULAR_TTF), true);
+            String big = "x".repeat(100_000);
+            List<String> lines = PdfCanvas.wrap("a few words then " + big + " and the end", font, 8f, 100f);
+            StringBuilder joined = new StringBuilder();
+            for (String l : lines) {
+                assertTrue(PdfCanvas.width(font, 8f, l) <= 100f + 1e-3, "line too wide: " + l.length());
+                joined.append(l);
+            }
+            assertEquals(("a few words then " + big + " and the end").replace(" ", ""),
+                    joined.toString().replace(" ", ""));
+            assertTrue(lines.size() > 100_000 / 40, "cut into many lines: " + lines.size());
+            assertEquals(List.of("one two", "three"), PdfCanvas.wrap("one two three", font, 8f,
+                    PdfCanvas.width(font, 8f, "one two") + 0.01f));
+        }
     }
 
     @Test
