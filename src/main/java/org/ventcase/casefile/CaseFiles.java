@@ -189,7 +189,7 @@ public final class CaseFiles {
         return new Parsed(origin, kase, problems, m.notes());
     }
 
-    private static Problem syntax(JsonProcessingException e) {
+    static Problem syntax(JsonProcessingException e) {
         String path = "$";
         if (e instanceof JsonParseException jpe && jpe.getProcessor() != null) {
             path = jsonPath(jpe.getProcessor().getParsingContext());
@@ -207,6 +207,8 @@ public final class CaseFiles {
 
     private static final java.util.regex.Pattern UNEXPECTED_CHAR = java.util.regex.Pattern.compile(
             "(?s)Unexpected character \\('(.+?)' \\(code \\d+\\)\\)[^:]*: was expecting (.*)");
+    private static final java.util.regex.Pattern NON_STANDARD = java.util.regex.Pattern.compile(
+            "(?s)Non-standard token '(.*?)'.*");
     private static final java.util.regex.Pattern UNRECOGNIZED = java.util.regex.Pattern.compile(
             "(?s)Unrecognized token '(.*?)'.*");
 
@@ -222,6 +224,14 @@ public final class CaseFiles {
         }
         if (m.contains("nesting depth")) {
             return new String[] {"nested more than 1000 levels deep", "expected a case nested at most 1000 levels"};
+        }
+        if (m.startsWith("Trailing token")) {
+            return new String[] {"more text after the end", "expected nothing after the closing } of the object "
+                    + "(two objects in one file, or a brace too many?)"};
+        }
+        java.util.regex.Matcher ns = NON_STANDARD.matcher(m);
+        if (ns.matches()) {
+            return new String[] {ns.group(1), "expected a finite number: JSON has no NaN or Infinity"};
         }
         java.util.regex.Matcher u = UNEXPECTED_CHAR.matcher(m);
         if (u.matches()) {

@@ -42,7 +42,10 @@ public final class ClaimedFiles {
     public static final List<String> FIELDS = List.of("case", "scenario", "source", "claimed");
 
     private static final ObjectMapper MAPPER = JsonMapper.builder()
-            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION).build();
+            .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
+            .disable(com.fasterxml.jackson.core.json.JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS)
+            .enable(com.fasterxml.jackson.databind.DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
+            .build();
 
     private ClaimedFiles() {
     }
@@ -56,13 +59,24 @@ public final class ClaimedFiles {
      * @param scenario scenario label or 1-based position; empty: the governing scenario
      * @param source   who made the claim (free text)
      * @param raw      quantity -> value as written (text; numbers as their JSON text)
+     * @param where    quantity -> where it was written, for messages ("claimed.k" in JSON,
+     *                 "FILE line 7 (k)" in CSV); a quantity without an entry is named "claimed.KEY"
      */
     public record Claimed(String origin, Optional<Path> casePath, Optional<String> scenario, String source,
-                          Map<ReviewQuantity, String> raw) {
+                          Map<ReviewQuantity, String> raw, Map<ReviewQuantity, String> where) {
         public Claimed {
             Map<ReviewQuantity, String> m = new EnumMap<>(ReviewQuantity.class);
             m.putAll(raw);
             raw = java.util.Collections.unmodifiableMap(m);
+            Map<ReviewQuantity, String> w = new EnumMap<>(ReviewQuantity.class);
+            w.putAll(where);
+            where = java.util.Collections.unmodifiableMap(w);
+        }
+
+        /** A claim whose values are named by their JSON path ("claimed.k"). */
+        public Claimed(String origin, Optional<Path> casePath, Optional<String> scenario, String source,
+                       Map<ReviewQuantity, String> raw) {
+            this(origin, casePath, scenario, source, raw, Map.of());
         }
 
         /** The values in SI; gauge pressures are made absolute with the site's atmospheric pressure. */
@@ -72,9 +86,13 @@ public final class ClaimedFiles {
             for (Map.Entry<ReviewQuantity, String> e : raw.entrySet()) {
                 ReviewQuantity q = e.getKey();
                 String text = e.getValue();
-                String field = "claimed." + q.key();
+                String field = where.getOrDefault(q, "claimed." + q.key());
                 if (q == ReviewQuantity.ORIFICE) {
-                    orifice = Optional.of(ClaimedValues.designation(text));
+                    try {
+                        orifice = Optional.of(ClaimedValues.designation(text));
+                    } catch (InvalidInputException ex) {
+                        throw ex.withField(field);
+                    }
                     continue;
                 }
                 v.put(q, parse(field, q, text, atmosphericPa));
@@ -102,6 +120,10 @@ public final class ClaimedFiles {
         }
         if (!(x > 0) || Double.isInfinite(x)) {
             throw InvalidInputException.invalid(field, text, "expected a finite value above 0");
+        }
+        if (x > q.plausibleMaximum() && q != ReviewQuantity.K && q != ReviewQuantity.Z) {
+            throw InvalidInputException.invalid(field, text, "expected a value above 0 and at most "
+                    + q.format(q.plausibleMaximum()) + " (a larger value is taken as a typing error)");
         }
         if (q == ReviewQuantity.K && x > 3.0) {
             throw InvalidInputException.invalid(field, text, "expected k above 0 and at most 3 (Cp/Cv, or an "
@@ -141,8 +163,10 @@ public final class ClaimedFiles {
         try {
             root = MAPPER.readTree(text);
         } catch (JsonProcessingException e) {
-            throw InvalidInputException.invalid(origin, "JSON", "expected a JSON object as in docs/review.md: "
-                    + e.getOriginalMessage());
+            // the case file's wording: what was found, what was expected, line and column
+            Problem p = CaseFiles.syntax(e);
+            throw InvalidInputException.invalid(origin + (p.path().equals("$") ? "" : " " + p.path()), p.value(),
+                    p.accepted());
         }
         if (root == null || !root.isObject()) {
             throw InvalidInputException.invalid(origin, "JSON", "expected a JSON object with \"claimed\"");
@@ -213,6 +237,7 @@ public final class ClaimedFiles {
         Optional<String> scenario = Optional.empty();
         String source = "";
         Map<ReviewQuantity, String> raw = new LinkedHashMap<>();
+        Map<ReviewQuantity, String> at = new LinkedHashMap<>();
         String[] lines = text.split("\\r?\\n");
         for (int n = 0; n < lines.length; n++) {
             String line = lines[n].strip();
@@ -240,6 +265,7 @@ public final class ClaimedFiles {
                         throw InvalidInputException.invalid(where, k, "each quantity may be claimed once");
                     }
                     raw.put(q, v);
+                    at.put(q, where + " (" + q.key() + ")");
                 }
             }
         }
@@ -247,7 +273,7 @@ public final class ClaimedFiles {
             throw InvalidInputException.missing(origin, "expected at least one row 'quantity,value' with quantity one "
                     + "of " + ReviewQuantity.keys());
         }
-        return new Claimed(origin, casePath, scenario, source, raw);
+        return new Claimed(origin, casePath, scenario, source, raw, at);
     }
 
     private static String unquote(String s) {

@@ -63,10 +63,17 @@ public record ClaimedValues(String source, Optional<String> scenario, Map<Review
      */
     public static String designation(String text) {
         String t = text.strip().toUpperCase(java.util.Locale.ROOT).replace('*', 'X');
-        java.util.regex.Matcher m = java.util.regex.Pattern.compile("^(?:(\\d+)\\s*X\\s*)?([A-Z])$").matcher(t);
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("^(?:(\\d{1,3})\\s*X\\s*)?([A-Z])$").matcher(t);
         if (!m.matches()) {
             throw InvalidInputException.invalid("claimed.orifice", text,
                     "expected an API 526 orifice letter (D to T), optionally with a count, e.g. 'L' or '2 x L'");
+        }
+        java.util.List<String> letters = org.ventcase.device.OrificeTable.all().stream()
+                .map(o -> o.letter()).toList();
+        if (!letters.contains(m.group(2))) {
+            throw InvalidInputException.invalid("claimed.orifice", text, "'" + m.group(2) + "' is not an API 526 "
+                    + "orifice letter: expected one of " + String.join(" ", letters) + ", optionally with a count, "
+                    + "e.g. 'L' or '2 x L'");
         }
         int count = m.group(1) == null ? 1 : Integer.parseInt(m.group(1));
         if (count < 1 || count > 99) {

@@ -101,6 +101,29 @@ public enum ReviewQuantity {
         return reason;
     }
 
+    /**
+     * The largest claimed value taken, SI (common practice, no source): well above any relief case
+     * (a fire on the largest storage sphere is tens of MW), so that a value beyond it is a typing
+     * error in the claimed file, refused with the limit, not compared.
+     */
+    public double plausibleMaximum() {
+        return switch (this) {
+            case RELIEVING_PRESSURE -> 1e9;
+            case RELIEVING_TEMPERATURE -> 2000;
+            case MOLAR_MASS -> 1000;
+            case Z -> 5;
+            case K -> 3;
+            case LATENT_HEAT -> 1e7;
+            case LIQUID_DENSITY -> 5000;
+            case VAPOUR_DENSITY -> 2000;
+            case HEAT_INPUT -> 1e9;
+            case WETTED_AREA -> 1e5;
+            case RELIEF_LOAD -> 1e4;
+            case REQUIRED_AREA -> 10;
+            case ORIFICE -> Double.POSITIVE_INFINITY;
+        };
+    }
+
     /** The display unit of the console table, the JSON's {@code display} block and the PDF (SI). */
     public String displayUnit() {
         return switch (this) {
@@ -191,6 +214,9 @@ public enum ReviewQuantity {
     public static String significant(double v, int digits) {
         if (v == 0) {
             return "0";
+        }
+        if (!Double.isFinite(v) || Math.abs(v) >= 1e15 || Math.abs(v) < 1e-12) {
+            return String.format(Locale.US, "%." + Math.max(1, digits) + "g", v);
         }
         int mag = (int) Math.floor(Math.log10(Math.abs(v)));
         int decimals = Math.max(0, digits - 1 - mag);

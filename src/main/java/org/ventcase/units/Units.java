@@ -32,6 +32,8 @@ public final class Units {
     }
 
     private static final Map<String, Unit> UNITS = new LinkedHashMap<>();
+    /** Each unit's names as written in messages and help (the keys are lower case: input ignores case). */
+    private static final Map<String, String> SPELLING = new LinkedHashMap<>();
     private static final Map<String, Double> PRESSURE_BASES = new LinkedHashMap<>();
 
     private static final double INCH = 0.0254;
@@ -50,14 +52,14 @@ public final class Units {
         PRESSURE_BASES.put("mbar", 1e2);
         PRESSURE_BASES.put("psi", PSI);
 
-        put(Dimension.TEMPERATURE, 1, 0, "k", "kelvin");
-        put(Dimension.TEMPERATURE, 1, PhysicalConstants.ZERO_CELSIUS_K, "c", "degc", "°c", "celsius");
-        put(Dimension.TEMPERATURE, 5.0 / 9.0, 459.67 * 5.0 / 9.0, "f", "degf", "°f", "fahrenheit");
-        put(Dimension.TEMPERATURE, 5.0 / 9.0, 0, "r", "degr", "°r", "rankine");
+        put(Dimension.TEMPERATURE, 1, 0, "K", "kelvin");
+        put(Dimension.TEMPERATURE, 1, PhysicalConstants.ZERO_CELSIUS_K, "C", "degC", "°C", "celsius");
+        put(Dimension.TEMPERATURE, 5.0 / 9.0, 459.67 * 5.0 / 9.0, "F", "degF", "°F", "fahrenheit");
+        put(Dimension.TEMPERATURE, 5.0 / 9.0, 0, "R", "degR", "°R", "rankine");
 
-        put(Dimension.PRESSURE_DIFFERENCE, 1, 0, "pa");
-        put(Dimension.PRESSURE_DIFFERENCE, 1e3, 0, "kpa");
-        put(Dimension.PRESSURE_DIFFERENCE, 1e6, 0, "mpa");
+        put(Dimension.PRESSURE_DIFFERENCE, 1, 0, "Pa");
+        put(Dimension.PRESSURE_DIFFERENCE, 1e3, 0, "kPa");
+        put(Dimension.PRESSURE_DIFFERENCE, 1e6, 0, "MPa");
         put(Dimension.PRESSURE_DIFFERENCE, 1e5, 0, "bar");
         put(Dimension.PRESSURE_DIFFERENCE, 1e2, 0, "mbar");
         put(Dimension.PRESSURE_DIFFERENCE, PSI, 0, "psi");
@@ -75,7 +77,7 @@ public final class Units {
         put(Dimension.AREA, INCH * INCH, 0, "in2", "in^2", "in²");
 
         put(Dimension.VOLUME, 1, 0, "m3", "m^3", "m³");
-        put(Dimension.VOLUME, 1e-3, 0, "l", "litre", "liter");
+        put(Dimension.VOLUME, 1e-3, 0, "L", "litre", "liter");
         put(Dimension.VOLUME, FOOT * FOOT * FOOT, 0, "ft3", "ft^3", "ft³");
         put(Dimension.VOLUME, US_GALLON, 0, "gal", "usgal");
         put(Dimension.VOLUME, 42 * US_GALLON, 0, "bbl");
@@ -93,30 +95,30 @@ public final class Units {
 
         put(Dimension.VOLUME_FLOW, 1, 0, "m3/s");
         put(Dimension.VOLUME_FLOW, 1.0 / 3600, 0, "m3/h", "m3/hr");
-        put(Dimension.VOLUME_FLOW, 1e-3 / 60, 0, "l/min");
+        put(Dimension.VOLUME_FLOW, 1e-3 / 60, 0, "L/min");
         put(Dimension.VOLUME_FLOW, US_GALLON / 60, 0, "gpm", "gal/min", "usgpm");
 
-        put(Dimension.POWER, 1, 0, "w");
-        put(Dimension.POWER, 1e3, 0, "kw");
-        put(Dimension.POWER, 1e6, 0, "mw");
-        put(Dimension.POWER, BTU / 3600, 0, "btu/h", "btu/hr");
+        put(Dimension.POWER, 1, 0, "W");
+        put(Dimension.POWER, 1e3, 0, "kW");
+        put(Dimension.POWER, 1e6, 0, "MW");
+        put(Dimension.POWER, BTU / 3600, 0, "Btu/h", "Btu/hr");
 
         put(Dimension.DENSITY, 1, 0, "kg/m3", "kg/m^3", "kg/m³");
         put(Dimension.DENSITY, POUND / (FOOT * FOOT * FOOT), 0, "lb/ft3", "lb/ft^3");
 
-        put(Dimension.SPECIFIC_ENERGY, 1, 0, "j/kg");
-        put(Dimension.SPECIFIC_ENERGY, 1e3, 0, "kj/kg");
-        put(Dimension.SPECIFIC_ENERGY, BTU / POUND, 0, "btu/lb");
+        put(Dimension.SPECIFIC_ENERGY, 1, 0, "J/kg");
+        put(Dimension.SPECIFIC_ENERGY, 1e3, 0, "kJ/kg");
+        put(Dimension.SPECIFIC_ENERGY, BTU / POUND, 0, "Btu/lb");
 
-        put(Dimension.VISCOSITY, 1, 0, "pa.s", "pa s", "pas");
-        put(Dimension.VISCOSITY, 1e-3, 0, "mpa.s", "mpa s", "cp");
+        put(Dimension.VISCOSITY, 1, 0, "Pa.s", "Pa s", "Pas");
+        put(Dimension.VISCOSITY, 1e-3, 0, "mPa.s", "mPa s", "cP");
 
-        put(Dimension.THERMAL_CONDUCTIVITY, 1, 0, "w/mk", "w/(m k)", "w/m/k", "w/(m.k)");
-        put(Dimension.THERMAL_CONDUCTIVITY, BTU / 3600 / (FOOT * 5.0 / 9.0), 0, "btu/h/ft/f", "btu/(h ft f)");
+        put(Dimension.THERMAL_CONDUCTIVITY, 1, 0, "W/mK", "W/(m K)", "W/m/K", "W/(m.K)");
+        put(Dimension.THERMAL_CONDUCTIVITY, BTU / 3600 / (FOOT * 5.0 / 9.0), 0, "Btu/h/ft/F", "Btu/(h ft F)");
 
-        put(Dimension.HEAT_TRANSFER_COEFFICIENT, 1, 0, "w/m2k", "w/(m2 k)", "w/m2/k", "w/(m2.k)");
+        put(Dimension.HEAT_TRANSFER_COEFFICIENT, 1, 0, "W/m2K", "W/(m2 K)", "W/m2/K", "W/(m2.K)");
         put(Dimension.HEAT_TRANSFER_COEFFICIENT, BTU / 3600 / (FOOT * FOOT * 5.0 / 9.0), 0,
-                "btu/h/ft2/f", "btu/(h ft2 f)");
+                "Btu/h/ft2/F", "Btu/(h ft2 F)");
 
         put(Dimension.MOLAR_MASS, 1, 0, "kg/kmol", "g/mol");
 
@@ -129,7 +131,9 @@ public final class Units {
 
     private static void put(Dimension d, double factor, double offset, String... names) {
         for (String n : names) {
-            UNITS.put(key(d, n), new Unit(d, factor, offset));
+            String k = key(d, n.toLowerCase(Locale.ROOT));
+            UNITS.put(k, new Unit(d, factor, offset));
+            SPELLING.put(k, n);
         }
     }
 
@@ -156,9 +160,9 @@ public final class Units {
         }
         List<String> out = new ArrayList<>();
         String prefix = d.name() + "|";
-        for (String k : UNITS.keySet()) {
-            if (k.startsWith(prefix)) {
-                out.add(k.substring(prefix.length()));
+        for (Map.Entry<String, String> e : SPELLING.entrySet()) {
+            if (e.getKey().startsWith(prefix)) {
+                out.add(e.getValue());
             }
         }
         return out;

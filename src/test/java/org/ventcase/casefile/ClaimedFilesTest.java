@@ -64,12 +64,54 @@ class ClaimedFilesTest {
         assertEquals("claimed.latentHeat", noUnit.field());
         InvalidInputException dup = assertThrows(InvalidInputException.class, () -> ClaimedFiles.json(
                 "{\"claimed\": {\"k\": 1.1, \"k\": 1.2}}", "t", null));
-        assertTrue(dup.getMessage().toLowerCase().contains("duplicate"), dup.getMessage());
+        assertTrue(dup.getMessage().contains("repeated") && dup.getMessage().contains("line 1"), dup.getMessage());
         assertThrows(InvalidInputException.class, () -> ClaimedFiles.json("{\"claimed\": {\"orifice\": \"LL\"}}",
                 "t", null).values(ATM));
         assertThrows(InvalidInputException.class, () -> ClaimedFiles.json("{\"claimed\": {\"k\": 0}}", "t", null)
                 .values(ATM));
         assertThrows(InvalidInputException.class, () -> ClaimedFiles.json("{\"claimed\": {}}", "t", null)
                 .values(ATM));
+    }
+
+    @Test
+    void malformedJsonSaysWhatWasFoundAndWhereWithoutLibraryWords() {
+        // each of these once gave a message quoting the JSON library's feature names
+        for (String bad : new String[] {"{\"claimed\": {\"k\": NaN}}", "{\"claimed\": {\"k\": 1.1,}}",
+                "{\"claimed\": {\"k\": 1.1}} {\"claimed\": {}}"}) {
+            InvalidInputException e = assertThrows(InvalidInputException.class,
+                    () -> ClaimedFiles.json(bad, "claims.json", null));
+            String m = e.getMessage();
+            assertTrue(m.startsWith("claims.json"), m);
+            assertTrue(m.contains("line 1"), m);
+            for (String leak : new String[] {"Feature", "ALLOW_", "FAIL_ON", "Source:", "Exception"}) {
+                assertTrue(!m.contains(leak), m);
+            }
+        }
+    }
+
+    @Test
+    void csvErrorsNameTheFileLineAndQuantity() {
+        InvalidInputException e = assertThrows(InvalidInputException.class, () -> ClaimedFiles.csv(
+                "quantity,value\nk,1.1\nlatentHeat,252 kJ\n", "claims.csv", null).values(ATM));
+        assertEquals("claims.csv line 3 (latentHeat)", e.field());
+        // the accepted units are listed in their usual spelling (kJ/kg, not kj/kg)
+        assertTrue(e.getMessage().contains("kJ/kg"), e.getMessage());
+    }
+
+    @Test
+    void orificeLettersOutsideApi526AndImplausibleValuesAreRefused() {
+        // API 526 letters D to T (no I, O, S); 'Z' is not one of them
+        InvalidInputException z = assertThrows(InvalidInputException.class, () -> ClaimedFiles.json(
+                "{\"claimed\": {\"orifice\": \"3 x Z\"}}", "t", null).values(ATM));
+        assertEquals("claimed.orifice", z.field());
+        assertTrue(z.getMessage().contains("'Z' is not an API 526 orifice letter"), z.getMessage());
+        assertThrows(InvalidInputException.class, () -> ClaimedFiles.json(
+                "{\"claimed\": {\"orifice\": \"1000 x L\"}}", "t", null).values(ATM));
+        // 1e300 MW is finite but no fire heats a vessel so: taken as a typing error, not a result
+        InvalidInputException big = assertThrows(InvalidInputException.class, () -> ClaimedFiles.json(
+                "{\"claimed\": {\"heatInput\": \"1e300 MW\"}}", "t", null).values(ATM));
+        assertEquals("claimed.heatInput", big.field());
+        assertTrue(big.getMessage().contains("typing error"), big.getMessage());
+        assertTrue(!big.getMessage().contains("Infinity") && !big.getMessage().contains("NaN"), big.getMessage());
     }
 }
