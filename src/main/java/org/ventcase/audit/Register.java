@@ -118,7 +118,13 @@ public record Register(String origin, List<Optional<RegisterColumn>> columns, Li
                         "expected a header with at least the columns " + requiredList() + " (docs/audit.md)");
             }
         }
-        return new Stream(origin, List.copyOf(cols), List.copyOf(units), List.copyOf(ignored), reader);
+        Csv.Record first = reader.next();
+        if (first == null) {
+            // a header alone would give an audit of nothing with exit 0: an empty export, or the wrong file
+            throw InvalidInputException.missing(origin + ": vessel rows", "the register holds a header (line "
+                    + head.line() + ") but no vessel rows; expected one vessel a line after the header (docs/audit.md)");
+        }
+        return new Stream(origin, List.copyOf(cols), List.copyOf(units), List.copyOf(ignored), reader, first);
     }
 
     /** The number of vessel rows of register text (records after the header), for progress reports. */
@@ -138,9 +144,11 @@ public record Register(String origin, List<Optional<RegisterColumn>> columns, Li
         private final List<String> headerUnits;
         private final List<String> ignoredColumns;
         private final Csv.Reader reader;
+        private Csv.Record pending;
 
         private Stream(String origin, List<Optional<RegisterColumn>> columns, List<String> headerUnits,
-                       List<String> ignoredColumns, Csv.Reader reader) {
+                       List<String> ignoredColumns, Csv.Reader reader, Csv.Record first) {
+            this.pending = first;
             this.origin = origin;
             this.columns = columns;
             this.headerUnits = headerUnits;
@@ -168,7 +176,8 @@ public record Register(String origin, List<Optional<RegisterColumn>> columns, Li
         public List<RegisterRow> next(int max) {
             List<RegisterRow> rows = new ArrayList<>();
             while (rows.size() < max) {
-                Csv.Record rec = reader.next();
+                Csv.Record rec = pending != null ? pending : reader.next();
+                pending = null;
                 if (rec == null) {
                     break;
                 }

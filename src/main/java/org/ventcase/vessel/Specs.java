@@ -86,7 +86,7 @@ public final class Specs {
     }
 
     private static final Pattern PERCENT = Pattern.compile(
-            "^\\s*([-+]?(?:\\d+(?:\\.\\d*)?|\\.\\d+))\\s*%\\s*(h|v|vol|height|volume)?\\s*$", Pattern.CASE_INSENSITIVE);
+            "^\\s*([-+]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][-+]?\\d+)?)\\s*%\\s*(h|v|vol|height|volume)?\\s*$", Pattern.CASE_INSENSITIVE);
 
     /** Parses a liquid level: a length, "65 %" or "65 %h" (of height), or "70 %v" (of volume). */
     public static Level level(String field, String text) {

@@ -111,6 +111,17 @@ class RegisterErrorsTest {
     }
 
     @Test
+    void aHeaderWithoutVesselRowsIsRefusedNotAuditedAsAnEmptySite() {
+        // before: exit 0 with 'Rows 0' and a site inventory of 0.0 t, which reads like a result
+        for (String text : new String[] {AuditFixtures.HEADER + "\n", AuditFixtures.HEADER + "\n# a comment\n\n"}) {
+            InvalidInputException e = assertThrows(InvalidInputException.class, () -> Register.parse(text, "t.csv"));
+            assertTrue(e.getMessage().startsWith("t.csv") && e.getMessage().contains("no vessel rows"),
+                    e.getMessage());
+            assertThrows(InvalidInputException.class, () -> Register.stream(text, "t.csv"));
+        }
+    }
+
+    @Test
     void aRowLongerThanTheHeaderIsAnErrorNotAShiftedRow() {
         AuditResult r = audit(GOOD + ",extra");
         AuditError e = errorOf(r.rows().get(0));

@@ -47,6 +47,15 @@ class LevelTest {
         assertField("level.volume", () -> vessel.levelAtVolume(vessel.totalVolume() * 1.001));
     }
 
+    @Test
+    void aPercentageWrittenWithAnExponentIsReadAndRangeChecked() {
+        // '1e300 %v' was once refused as 'not a height or percentage', hiding the real problem (the range)
+        assertEquals(70.0, Specs.level("storage.liquidLevel", "7e1 %v").value(), 0.0);
+        InvalidInputException e = assertThrows(InvalidInputException.class,
+                () -> Specs.level("storage.liquidLevel", "1e300 %v"));
+        assertTrue(e.getMessage().contains("0 to 100"), e.getMessage());
+    }
+
     static void assertField(String field, org.junit.jupiter.api.function.Executable call) {
         InvalidInputException e = assertThrows(InvalidInputException.class, call);
         assertEquals(field, e.field(), e.getMessage());
