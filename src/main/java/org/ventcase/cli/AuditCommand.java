@@ -82,24 +82,14 @@ final class AuditCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        CalculationSheet.PageSize size = pdfOptions.size();
-        UnitSystem system = pdfOptions.system();
         int n = threads == null ? Runtime.getRuntime().availableProcessors() : threads;
         if (n < 1) {
             throw InvalidInputException.invalid("--threads", n, "expected at least 1");
         }
-        for (Path p : new Path[] {csv, pdf}) {
-            if (p != null && Files.isDirectory(p)) {
-                throw InvalidInputException.invalid(p.equals(csv) ? "--output" : "--pdf", p, "expected a file name, "
-                        + "not a folder");
-            }
-            if (p != null && (p.toAbsolutePath().normalize().equals(input.toAbsolutePath().normalize())
-                    || thresholdsFile != null && p.toAbsolutePath().normalize()
-                    .equals(thresholdsFile.toAbsolutePath().normalize()))) {
-                throw InvalidInputException.invalid(p.equals(csv) ? "--output" : "--pdf", p,
-                        "names an input file; inputs are never overwritten: choose another output file");
-            }
-        }
+        OutputFiles.refuseFolderOrInput("--output", csv, input, thresholdsFile);
+        OutputFiles.refuseFolderOrInput("--pdf", pdf, input, thresholdsFile);
+        CalculationSheet.PageSize size = pdfOptions.size();
+        UnitSystem system = pdfOptions.system();
         if (!Files.exists(input)) {
             throw new java.nio.file.NoSuchFileException(input.toString());
         }

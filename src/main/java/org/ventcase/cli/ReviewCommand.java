@@ -73,8 +73,6 @@ final class ReviewCommand implements Callable<Integer> {
     public Integer call() throws IOException {
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
-        CalculationSheet.PageSize size = pdfOptions.size();
-        UnitSystem system = pdfOptions.system();
         Tolerances tol = Tolerances.defaults();
         for (String t : tolerances) {
             tol = tol.with(t);
@@ -82,12 +80,10 @@ final class ReviewCommand implements Callable<Integer> {
         ClaimedFiles.Claimed claimed = ClaimedFiles.read(claimedFile);
         Path kase = caseFile != null ? caseFile : claimed.casePath().orElseThrow(() -> InvalidInputException.missing(
                 "CASE.json", "give the case file as the first argument, or name it as \"case\" in " + claimedFile));
-        for (Path o : new Path[] {json, pdf}) {
-            if (o != null && (same(o, kase) || same(o, claimedFile))) {
-                throw InvalidInputException.invalid(o == json ? "--json" : "--output", o,
-                        "an output file must not be the case file or the claimed file: choose another name");
-            }
-        }
+        OutputFiles.refuseFolderOrInput("--json", json, kase, claimedFile);
+        OutputFiles.refuseFolderOrInput("--output", pdf, kase, claimedFile);
+        CalculationSheet.PageSize size = pdfOptions.size();
+        UnitSystem system = pdfOptions.system();
         ValidatedCase vc;
         try {
             vc = CaseFiles.load(kase);
@@ -111,10 +107,6 @@ final class ReviewCommand implements Callable<Integer> {
             out.println("Review PDF written to " + pdf);
         }
         return ExitCode.OK;
-    }
-
-    private static boolean same(Path a, Path b) {
-        return a.toAbsolutePath().normalize().equals(b.toAbsolutePath().normalize());
     }
 
     static void print(PrintWriter out, ReviewResult r, Path kase, Path claimed, boolean us) {

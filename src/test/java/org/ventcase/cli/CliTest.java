@@ -1,10 +1,13 @@
 package org.ventcase.cli;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.nio.file.Files;
 import java.io.StringWriter;
 import java.util.List;
 
@@ -371,5 +374,27 @@ class CliTest {
         for (String bad : List.of("Unmatched", "Missing required", "specify one of these", "mutually exclusive", "Error:")) {
             assertFalse(r.err().contains(bad), r.err());
         }
+    }
+
+    @Test
+    void anOutputThatNamesAnInputOrAFolderIsRefusedBeforeAnyWork(@org.junit.jupiter.api.io.TempDir Path dir)
+            throws Exception {
+        Path reg = dir.resolve("reg.csv");
+        Files.copy(Path.of("demo-cases/register/kestrel-point-register.csv"), reg);
+        byte[] before = Files.readAllBytes(reg);
+        Run same = run("audit", reg.toString(), "-o", reg.toString());
+        assertEquals(2, same.code(), same.err());
+        assertTrue(same.err().contains("--output") && same.err().contains("inputs are never overwritten"), same.err());
+        assertArrayEquals(before, Files.readAllBytes(reg), "the register is untouched");
+        Run folder = run("audit", reg.toString(), "--pdf", dir.toString());
+        assertEquals(2, folder.code(), folder.err());
+        assertTrue(folder.err().contains("--pdf") && folder.err().contains("not a folder"), folder.err());
+        Path claims = dir.resolve("claims.csv");
+        Files.writeString(claims, "case," + Path.of("demo-cases/propane-bullet-fire.json").toAbsolutePath()
+                + "\nk,1.1\n");
+        Run review = run("review", "--claimed", claims.toString(), "--json", claims.toString());
+        assertEquals(2, review.code(), review.err());
+        assertTrue(review.err().contains("--json") && review.err().contains("inputs are never overwritten"),
+                review.err());
     }
 }
