@@ -132,7 +132,7 @@ public final class MixtureFire {
                     + "There a cubic equation's vapour density and latent heat also lose accuracy%s.",
                     b.temperatureK() / tcMix, spec.eos() == org.ventcase.thermo.EosVariant.PRTWU
                             ? " (the default model against reference equations at Tr 0.925: vapour density up to 4 % "
-                                    + "high, latent heat up to 4 % low, liquid density up to 1.2 % low, docs/accuracy.md)"
+                                    + "high, latent heat up to 4 % low, liquid density up to 2.3 % low, docs/accuracy.md)"
                             : ""));
         }
         double liquidMass = vs.liquidVolume() * b.liquidProps().density();

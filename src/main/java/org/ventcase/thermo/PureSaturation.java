@@ -311,7 +311,7 @@ public final class PureSaturation {
             }
         }
         double tr = t / model.tc(0);
-        String cold = model.variant() == EosVariant.PRTWU ? ColdEndVapourPressure.note(component, tr) : "";
+        String cold = model.variant() == EosVariant.PRTWU ? MeasuredDeviations.note(component, tr) : "";
         if (!cold.isEmpty()) {
             warnings.add(cold);
         }
@@ -319,8 +319,9 @@ public final class PureSaturation {
             warnings.add(String.format(Locale.US,
                     "Tr = %.4f: above Tr 0.9 a cubic equation's vapour density and latent heat lose accuracy%s.", tr,
                     model.variant() == EosVariant.PRTWU
-                            ? " (against reference equations at Tr 0.925: vapour density up to 4 % high, latent heat up "
-                                    + "to 4 % low, liquid density up to 1.2 % low and more closer to Tc; docs/accuracy.md)"
+                            ? " (against reference equations at Tr 0.925, for most built-in fluids: vapour density up "
+                                    + "to 4 % high, latent heat up to 4 % low, liquid density up to 2.3 % low, and more "
+                                    + "closer to Tc; docs/accuracy.md)"
                             : ""));
         }
         if (tr > 0.95) {

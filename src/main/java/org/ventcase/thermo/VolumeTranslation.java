@@ -19,7 +19,7 @@ import java.util.Locale;
  * smaller at the pressures of saturated storage. The anchors stop at 0.90 Tc with a 0.10 Tc
  * smoothstep taper because closer to Tc the cubic's liquid volume and the correlation part so fast
  * that c'' (and so Cp) swings by up to 90 % (anchors to 0.95 Tc with a 0.05 Tc taper, measured);
- * the price is a liquid density up to 1.2 % low at Tr 0.925 (docs/accuracy.md). A pure fluid's
+ * the price is a liquid density up to 2.3 % low at Tr 0.925 (n-nonane; docs/accuracy.md). A pure fluid's
  * latent heat is unchanged by any translation.
  */
 public interface VolumeTranslation {
