@@ -3,9 +3,10 @@ package org.ventcase.thermo;
 import java.util.Map;
 
 /**
- * Built-in fluids whose molecules hydrogen-bond (associate) in the vapour: a two-parameter cubic
- * equation of state has no term for it, so its saturated-vapour density comes out low and, through
- * the Clapeyron equation, its latent heat high, whatever the alpha function. The figures are the
+ * Built-in fluids whose molecules hydrogen-bond (associate) in the vapour, and acetone, whose vapour
+ * is strongly polar: a two-parameter cubic equation of state has no term for either, so its
+ * saturated-vapour density comes out low and, through the Clapeyron equation, its latent heat high,
+ * whatever the alpha function. The figures are the
  * largest deviations of the default model from the reference equations of state at Tr 0.5 to 0.9,
  * measured by ReferenceSaturationTest (docs/accuracy.md); ethanol is not in that data and carries
  * the methanol figure as an expectation, said as such.
@@ -16,7 +17,11 @@ final class AssociatingFluids {
             "67-56-1", "vapour density up to 9 % low and latent heat up to 10 % high (measured)",
             "64-17-5", "vapour density and latent heat likely off as for methanol, up to about 10 % (not measured)",
             "7664-41-7", "vapour density up to 5 % low and latent heat up to 5 % high (measured)",
-            "7732-18-5", "vapour density up to 3 % low and latent heat up to 3.5 % high (measured)");
+            "7732-18-5", "vapour density up to 3 % low and latent heat up to 3.5 % high (measured)",
+            "67-64-1", "vapour density up to 5 % low and latent heat up to 7 % high (measured)");
+
+    /** Acetone does not hydrogen-bond with itself; its vapour is strongly polar. */
+    private static final String POLAR = "67-64-1";
 
     private AssociatingFluids() {
     }
@@ -27,8 +32,9 @@ final class AssociatingFluids {
         if (f == null) {
             return "";
         }
+        String what = POLAR.equals(c.cas()) ? "its strongly polar vapour" : "hydrogen bonding in the vapour";
         if (variant == EosVariant.PRTWU && LatentHeatCorrelation.find(c).isPresent()) {
-            return c.name() + ": a cubic equation of state does not describe hydrogen bonding in the vapour. For the "
+            return c.name() + ": a cubic equation of state does not describe " + what + ". For the "
                     + "pure fluid at saturation the default model therefore takes the latent heat from a published "
                     + "correlation (" + LatentHeatCorrelation.CITATION + ") and the saturated-vapour density from it "
                     + "by the Clapeyron equation. Elsewhere the vapour is the cubic's: against reference equations "
@@ -36,7 +42,7 @@ final class AssociatingFluids {
                     + "may be as much too high (a larger area), and in a mixture the latent heat as much too high "
                     + "(a fire relief load W = Q/L understated).";
         }
-        return c.name() + ": a cubic equation of state does not describe hydrogen bonding in the vapour: against "
+        return c.name() + ": a cubic equation of state does not describe " + what + ": against "
                 + "reference equations the default model gives " + f + " at Tr 0.65-0.9 (docs/accuracy.md); a fire "
                 + "relief load W = Q/L may be understated by as much: check the latent heat against measured data.";
     }

@@ -22,13 +22,14 @@ class LatentHeatCorrelationTest {
 
     @Test
     void correlationMatchesTheReferenceEquationsWithinHalfAPerCent() throws IOException {
-        // Check values: saturation-reference-eos.csv (reference equations of state evaluated with
-        // CoolProp 8.0.0, source in the file header). Tolerance 0.5 % to Tr 0.875 (the largest
-        // deviation found is +0.42 %, methanol at Tr 0.875). At Tr 0.925 methanol is -2.3 %.
+        // Check values: saturation-reference-eos.csv and saturation-reference-more.csv (reference
+        // equations of state evaluated with CoolProp 8.0.0, sources in the file headers). Tolerance
+        // 0.5 % to Tr 0.875 (the largest deviation found is +0.42 %, methanol at Tr 0.875; acetone
+        // within 0.1 %). At Tr 0.925 methanol is -2.3 %.
         List<String> failures = new ArrayList<>();
         int n = 0;
         for (ReferenceSaturationTest.Row r : ReferenceSaturationTest.rows()) {
-            if (!List.of("methanol", "ammonia", "water").contains(r.fluid()) || r.tr() > 0.9) {
+            if (!List.of("methanol", "ammonia", "water", "acetone").contains(r.fluid()) || r.tr() > 0.9) {
                 continue;
             }
             Component c = LIB.get(r.fluid());
@@ -41,7 +42,7 @@ class LatentHeatCorrelationTest {
                         r.t(), l, r.latentKJkg(), 100 * dev));
             }
         }
-        assertTrue(n >= 25, "points checked: " + n);
+        assertTrue(n >= 34, "points checked: " + n);
         assertTrue(failures.isEmpty(), String.join("\n", failures));
     }
 
