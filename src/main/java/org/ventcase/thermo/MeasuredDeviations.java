@@ -91,7 +91,7 @@ public final class MeasuredDeviations {
     }
 
     /** The warning for a saturation state of {@code c} at reduced temperature tr (model Tc), or "". */
-    static String note(Component c, double tr) {
+    public static String note(Component c, double tr) {
         List<String> parts = new ArrayList<>();
         for (Entry e : ENTRIES) {
             if (e.cas().equals(c.cas()) && e.covers(tr)) {
@@ -103,7 +103,7 @@ public final class MeasuredDeviations {
         if (parts.isEmpty()) {
             return "";
         }
-        return String.format(Locale.US, "%s at Tr = %.3f, the default model against the reference equation of state "
+        return String.format(Locale.US, "%s at Tr = %.4f, the default model against the reference equation of state "
                 + "(docs/accuracy.md): %s.", c.name(), tr, String.join("; ", parts));
     }
 

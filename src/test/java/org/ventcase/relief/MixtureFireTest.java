@@ -124,4 +124,21 @@ class MixtureFireTest {
                 DeviceSpec.gasValve(ATM), false));
         assertEquals("level", missing.field());
     }
+
+    @Test
+    void aPureFluidsRelievingStateCarriesItsMeasuredDeviation() {
+        // ethanol at 5.25 bara boils near 401 K (Tr about 0.78): thermo/measured-deviations.csv lists the
+        // default model's vapour pressure there as up to 4.0 % low against the reference equation of
+        // state (Schroeder et al. 2014 as named by CoolProp 8.0.0; docs/accuracy.md). The warning must
+        // reach the relieving state, not only the sat command.
+        Component ethanol = ComponentLibrary.builtIn().get("ethanol");
+        BoilingState b = BoilingState.bubblePoint(MixtureSpec.pure(EosVariant.PRTWU, ethanol, DensityBasis.TRANSLATED),
+                5.25e5);
+        assertTrue(b.warnings().stream().anyMatch(w -> w.startsWith("ethanol at Tr")
+                && w.contains("vapour pressure up to 4.0 % low")), b.warnings().toString());
+        // the classic model is not the table's subject
+        BoilingState pr78 = BoilingState.bubblePoint(MixtureSpec.pure(EosVariant.PR78, ethanol, DensityBasis.TRANSLATED),
+                5.25e5);
+        assertTrue(pr78.warnings().stream().noneMatch(w -> w.startsWith("ethanol at Tr")), pr78.warnings().toString());
+    }
 }
