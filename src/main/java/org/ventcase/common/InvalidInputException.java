@@ -23,8 +23,8 @@ public final class InvalidInputException extends VentcaseException {
     }
 
     private static String format(String field, String value, String accepted) {
-        return field + ": " + (value == null ? "missing" : "'" + value + "'") + " is not accepted; "
-                + accepted;
+        // a missing value reads as the case checker's "missing; expected ..." (nothing was written to refuse)
+        return field + ": " + (value == null ? "missing" : "'" + value + "' is not accepted") + "; " + accepted;
     }
 
     /** The field path, e.g. {@code fluid.components[2].name} or {@code --temperature}. */
