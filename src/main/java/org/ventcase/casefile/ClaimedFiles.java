@@ -121,16 +121,14 @@ public final class ClaimedFiles {
         if (!(x > 0) || Double.isInfinite(x)) {
             throw InvalidInputException.invalid(field, text, "expected a finite value above 0");
         }
-        if (x > q.plausibleMaximum() && q != ReviewQuantity.K && q != ReviewQuantity.Z) {
-            throw InvalidInputException.invalid(field, text, "expected a value above 0 and at most "
-                    + q.format(q.plausibleMaximum()) + " (a larger value is taken as a typing error)");
-        }
-        if (q == ReviewQuantity.K && x > 3.0) {
-            throw InvalidInputException.invalid(field, text, "expected k above 0 and at most 3 (Cp/Cv, or an "
-                    + "isentropic exponent, which may be below 1)");
-        }
-        if (q == ReviewQuantity.Z && x > 5) {
-            throw InvalidInputException.invalid(field, text, "expected a compressibility factor Z between 0 and 5");
+        if (x > q.plausibleMaximum()) {
+            // one limit per quantity (ReviewQuantity.plausibleMaximum); k and Z say what they are
+            throw InvalidInputException.invalid(field, text, switch (q) {
+                case K -> "expected k above 0 and at most 3 (Cp/Cv, or an isentropic exponent, which may be below 1)";
+                case Z -> "expected a compressibility factor Z between 0 and 5";
+                default -> "expected a value above 0 and at most " + q.format(q.plausibleMaximum())
+                        + " (a larger value is taken as a typing error)";
+            });
         }
         return x;
     }
