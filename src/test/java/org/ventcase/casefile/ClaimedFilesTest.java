@@ -100,7 +100,7 @@ class ClaimedFilesTest {
 
     @Test
     void orificeLettersOutsideApi526AndImplausibleValuesAreRefused() {
-        // API 526 letters D to T (no I, O, S); 'Z' is not one of them
+        // API Std 526 letters D to T without I, O and S (from memory; the project's OrificeTable holds them); 'Z' is not one of them
         InvalidInputException z = assertThrows(InvalidInputException.class, () -> ClaimedFiles.json(
                 "{\"claimed\": {\"orifice\": \"3 x Z\"}}", "t", null).values(ATM));
         assertEquals("claimed.orifice", z.field());

@@ -13,7 +13,7 @@ class UnitsSpellingTest {
 
     @Test
     void acceptedUnitsAreListedInTheirUsualSpelling() {
-        // SI prefix and symbol case (k, M; J, W, Pa, K): BIPM SI Brochure, 9th ed., sections 2.3 and 3
+        // SI prefix and symbol case (k, M; J, W, Pa, K): BIPM SI Brochure, 9th ed., sections 2.3 and 3 (from memory)
         List<String> energy = Units.acceptedUnits(Dimension.SPECIFIC_ENERGY);
         assertTrue(energy.contains("kJ/kg") && energy.contains("J/kg"), energy.toString());
         assertTrue(energy.stream().noneMatch(u -> u.equals("kj/kg")), energy.toString());
